@@ -1,0 +1,82 @@
+import 'reflect-metadata';
+import helmet from '@fastify/helmet';
+import fastifyStatic from '@fastify/static';
+import { NestFactory } from '@nestjs/core';
+import { FastifyAdapter, NestFastifyApplication } from '@nestjs/platform-fastify';
+import { SwaggerModule } from '@nestjs/swagger';
+import fs from 'node:fs';
+import path from 'node:path';
+import type { DestinationStream } from 'pino';
+import { AppModule } from './app.module.js';
+import { ProblemDetailsFilter } from './common/filters/problem-details.filter.js';
+import { RouteTable } from './common/filters/route-table.js';
+import { validateEnv } from './config/env.js';
+import { PROJECT_ROOT } from './config/paths.js';
+import { createLogger, genReqId, PinoNestLogger } from './logging/logger.js';
+import { buildOpenApiDocument } from './openapi/openapi.js';
+
+export interface CreateAppOptions {
+  /** Where log lines go (tests capture them); stdout by default. */
+  logStream?: DestinationStream;
+}
+
+/** Builds the whole HTTP application, initialised and ready; `main.ts` only adds `listen`. */
+export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastifyApplication> {
+  const env = validateEnv(process.env);
+  const logger = createLogger(env.LOG_LEVEL, opts.logStream);
+  const adapter = new FastifyAdapter({
+    loggerInstance: logger,
+    genReqId,
+    bodyLimit: env.BODY_LIMIT_BYTES,
+    trustProxy: false,
+    disableRequestLogging: false,
+  });
+  const routes = new RouteTable();
+  routes.attach(adapter.getInstance());
+  const app = await NestFactory.create<NestFastifyApplication>(AppModule, adapter, {
+    logger: new PinoNestLogger(logger),
+    bufferLogs: false,
+  });
+  const fastify = app.getHttpAdapter().getInstance();
+  fastify.addHook('onSend', async (req, reply) => {
+    reply.header('x-request-id', req.id);
+  });
+  await app.register(helmet as never, {
+    contentSecurityPolicy: {
+      directives: {
+        defaultSrc: ["'self'"],
+        scriptSrc: ["'self'"],
+        styleSrc: ["'self'", "'unsafe-inline'"],
+        imgSrc: ["'self'", 'data:'],
+        fontSrc: ["'self'", 'data:'],
+        connectSrc: ["'self'"],
+      },
+    },
+  });
+  app.enableCors({
+    origin: env.CORS_ORIGINS.split(',').map((s) => s.trim()).filter(Boolean),
+    methods: ['GET', 'HEAD', 'POST', 'PUT', 'PATCH', 'DELETE'],
+    allowedHeaders: ['Authorization', 'Content-Type', 'Range', 'Idempotency-Key', 'X-Api-Key', 'X-Request-Id'],
+    exposedHeaders: ['Content-Range', 'Retry-After', 'X-Request-Id', 'Location'],
+    maxAge: 600,
+  });
+  app.setGlobalPrefix('v1');
+  app.useGlobalFilters(new ProblemDetailsFilter(routes));
+  app.enableShutdownHooks();
+
+  const doc = buildOpenApiDocument(app);
+  SwaggerModule.setup('docs', app, doc, {
+    useGlobalPrefix: false,
+    jsonDocumentUrl: '/v1/openapi.json',
+    raw: ['json'],
+    customSiteTitle: 'Pourgate API',
+  });
+
+  const consoleDir = env.ADMIN_DIST || path.join(PROJECT_ROOT, 'admin', 'dist');
+  const root = fs.existsSync(path.join(consoleDir, 'index.html')) ? consoleDir : path.join(PROJECT_ROOT, 'api', 'placeholder');
+  await app.register(fastifyStatic as never, { root, prefix: '/', wildcard: false, decorateReply: false, index: ['index.html'] });
+
+  await app.init();
+  await fastify.ready();
+  return app;
+}

@@ -1,0 +1,123 @@
+import { applyDecorators } from '@nestjs/common';
+import { ApiHeader, ApiQuery, ApiResponse } from '@nestjs/swagger';
+import type { FastifyReply } from 'fastify';
+import type { FieldError } from '../problems.js';
+import { malformed } from '../problems.js';
+
+/**
+ * What a list route allows: the fields one may sort on, the filters it understands (each mapped to
+ * how it compares), and the default order. Lists speak the ra-data-simple-rest protocol:
+ * `sort=["field","ASC"]`, `range=[start,end]` (inclusive), `filter={"field":value}`.
+ */
+export interface ListSpec<F extends string = string> {
+  resource: string;
+  sortable: readonly string[];
+  filters: Readonly<Record<F, FilterKind>>;
+  defaultSort: [string, 'ASC' | 'DESC'];
+  maxPageSize?: number;
+}
+
+export type FilterKind = 'eq' | 'in' | 'text' | 'gte' | 'lte' | 'bool';
+
+export interface ListQuery {
+  sort: { field: string; order: 'asc' | 'desc' };
+  offset: number;
+  limit: number;
+  filter: Record<string, unknown>;
+}
+
+export const DEFAULT_PAGE_SIZE = 25;
+export const MAX_PAGE_SIZE = 500;
+
+function parseJson(name: string, raw: string): unknown {
+  try {
+    return JSON.parse(raw);
+  } catch {
+    throw malformed(`The "${name}" query parameter is not valid JSON.`, [{ pointer: `/${name}`, detail: 'is not valid JSON', code: 'json' }]);
+  }
+}
+
+/** Parses and bounds the simple-rest query params; a clear 400 for anything unparseable. */
+export function parseListQuery(query: Record<string, unknown>, spec: ListSpec): ListQuery {
+  const errors: FieldError[] = [];
+  const max = spec.maxPageSize ?? MAX_PAGE_SIZE;
+  let [field, order] = spec.defaultSort;
+  if (query.sort !== undefined) {
+    const s = parseJson('sort', String(query.sort));
+    if (!Array.isArray(s) || s.length !== 2 || typeof s[0] !== 'string' || !['ASC', 'DESC'].includes(String(s[1]).toUpperCase())) {
+      errors.push({ pointer: '/sort', detail: 'must be ["field","ASC"|"DESC"]', code: 'format' });
+    } else if (!spec.sortable.includes(s[0])) {
+      errors.push({ pointer: '/sort/0', detail: `cannot sort by "${s[0]}"; sortable: ${spec.sortable.join(', ')}`, code: 'enum' });
+    } else {
+      field = s[0];
+      order = String(s[1]).toUpperCase() as 'ASC' | 'DESC';
+    }
+  }
+  let offset = 0;
+  let limit = DEFAULT_PAGE_SIZE;
+  if (query.range !== undefined) {
+    const r = parseJson('range', String(query.range));
+    if (!Array.isArray(r) || r.length !== 2 || !r.every((n) => Number.isInteger(n) && n >= 0) || r[1] < r[0]) {
+      errors.push({ pointer: '/range', detail: 'must be [start,end] with 0 <= start <= end (inclusive)', code: 'format' });
+    } else if (r[1] - r[0] + 1 > max) {
+      errors.push({ pointer: '/range', detail: `a page holds at most ${max} rows`, code: 'maximum' });
+    } else {
+      offset = r[0];
+      limit = r[1] - r[0] + 1;
+    }
+  }
+  const filter: Record<string, unknown> = {};
+  if (query.filter !== undefined) {
+    const f = parseJson('filter', String(query.filter));
+    if (!f || typeof f !== 'object' || Array.isArray(f)) {
+      errors.push({ pointer: '/filter', detail: 'must be a JSON object', code: 'type' });
+    } else {
+      for (const [k, v] of Object.entries(f as Record<string, unknown>)) {
+        const kind = (spec.filters as Record<string, FilterKind>)[k];
+        if (!kind) {
+          errors.push({ pointer: `/filter/${k}`, detail: `unknown filter; known: ${Object.keys(spec.filters).join(', ') || 'none'}`, code: 'additionalProperties' });
+          continue;
+        }
+        const bad = checkFilterValue(kind, v);
+        if (bad) errors.push({ pointer: `/filter/${k}`, detail: bad, code: 'type' });
+        else filter[k] = v;
+      }
+    }
+  }
+  if (errors.length) throw malformed('The list query is not valid.', errors);
+  return { sort: { field, order: order.toLowerCase() as 'asc' | 'desc' }, offset, limit, filter };
+}
+
+function checkFilterValue(kind: FilterKind, v: unknown): string | null {
+  const scalar = (x: unknown) => typeof x === 'string' || typeof x === 'number' || typeof x === 'boolean';
+  switch (kind) {
+    case 'eq':
+      return scalar(v) || (Array.isArray(v) && v.every(scalar)) ? null : 'must be a value or an array of values';
+    case 'in':
+      return Array.isArray(v) && v.every(scalar) ? null : 'must be an array of values';
+    case 'text':
+      return typeof v === 'string' && v.length <= 200 ? null : 'must be a string of at most 200 characters';
+    case 'gte':
+    case 'lte':
+      return typeof v === 'string' || typeof v === 'number' ? null : 'must be a number or an ISO date-time';
+    case 'bool':
+      return typeof v === 'boolean' ? null : 'must be true or false';
+  }
+}
+
+/** Sets `Content-Range: <resource> <start>-<end>/<total>` as ra-data-simple-rest expects. */
+export function setContentRange(reply: FastifyReply, resource: string, q: ListQuery, count: number, total: number): void {
+  const end = count === 0 ? q.offset : q.offset + count - 1;
+  reply.header('content-range', `${resource} ${q.offset}-${end}/${total}`);
+}
+
+/** Documents the three list parameters and the Content-Range header on a list route. */
+export function ListRoute(spec: ListSpec) {
+  return applyDecorators(
+    ApiQuery({ name: 'sort', required: false, description: `JSON ["field","ASC"|"DESC"]; fields: ${spec.sortable.join(', ')}`, schema: { type: 'string' } }),
+    ApiQuery({ name: 'range', required: false, description: `JSON [start,end], inclusive, at most ${spec.maxPageSize ?? MAX_PAGE_SIZE} rows`, schema: { type: 'string' } }),
+    ApiQuery({ name: 'filter', required: false, description: `JSON object; filters: ${Object.keys(spec.filters).join(', ') || 'none'}`, schema: { type: 'string' } }),
+    ApiHeader({ name: 'Range', required: false, description: 'ignored; the range query parameter wins' }),
+    ApiResponse({ status: 200, description: 'One page', headers: { 'Content-Range': { description: `${spec.resource} <start>-<end>/<total>`, schema: { type: 'string' } } } }),
+  );
+}

@@ -1,0 +1,121 @@
+import { Ajv2020 } from 'ajv/dist/2020.js';
+import type { ErrorObject, ValidateFunction } from 'ajv';
+import addFormatsPkg from 'ajv-formats';
+import fs from 'node:fs';
+import path from 'node:path';
+import { SCHEMAS_DIR } from '../../config/paths.js';
+import type { FieldError } from '../problems.js';
+
+const addFormats = addFormatsPkg as unknown as (ajv: Ajv2020) => Ajv2020;
+const ID_PREFIX = 'urn:pourgate:schema:';
+
+/** OpenAPI extension keywords we allow in schemas (documentation only, no validation effect). */
+const ANNOTATIONS = ['x-unit', 'x-enum-descriptions'];
+
+export type Schema = Record<string, unknown>;
+
+/**
+ * The JSON Schemas in `schemas/` (one file per shape, `<name>.schema.json`, `$id` =
+ * `urn:pourgate:schema:<name>`). The validation pipe compiles them with ajv, and the OpenAPI
+ * document embeds the very same objects as components, so each shape is defined once.
+ */
+export class SchemaRegistry {
+  private readonly schemas = new Map<string, Schema>();
+  private readonly bodyAjv: Ajv2020;
+  private readonly queryAjv: Ajv2020;
+  private readonly compiled = new Map<string, ValidateFunction>();
+
+  constructor(dir = SCHEMAS_DIR) {
+    const opts = { allErrors: true, useDefaults: true, strict: true, keywords: ANNOTATIONS };
+    this.bodyAjv = addFormats(new Ajv2020({ ...opts, coerceTypes: false }));
+    this.queryAjv = addFormats(new Ajv2020({ ...opts, coerceTypes: 'array' }));
+    for (const file of fs.readdirSync(dir).filter((f) => f.endsWith('.schema.json')).sort()) {
+      const schema = JSON.parse(fs.readFileSync(path.join(dir, file), 'utf8')) as Schema;
+      const name = file.replace(/\.schema\.json$/, '');
+      if (schema.$id !== ID_PREFIX + name) throw new Error(`${file}: $id must be "${ID_PREFIX}${name}"`);
+      this.schemas.set(name, schema);
+      this.bodyAjv.addSchema(schema);
+      this.queryAjv.addSchema(schema);
+    }
+  }
+
+  names(): string[] {
+    return [...this.schemas.keys()];
+  }
+
+  get(name: string): Schema {
+    const s = this.schemas.get(name);
+    if (!s) throw new Error(`unknown schema "${name}" (no schemas/${name}.schema.json)`);
+    return s;
+  }
+
+  /** Validates `value` in place (defaults applied; queries coerced from strings). */
+  validate(name: string, value: unknown, kind: 'body' | 'query' = 'body'): FieldError[] {
+    this.get(name);
+    const key = `${kind}:${name}`;
+    let fn = this.compiled.get(key);
+    if (!fn) {
+      const ajv = kind === 'query' ? this.queryAjv : this.bodyAjv;
+      fn = ajv.getSchema(ID_PREFIX + name)!;
+      this.compiled.set(key, fn);
+    }
+    return fn(value) ? [] : toFieldErrors(fn.errors ?? []);
+  }
+
+  /** The schemas as OpenAPI 3.1 components: `$ref`s between files rewritten to component refs. */
+  openApiComponents(): Record<string, Schema> {
+    const out: Record<string, Schema> = {};
+    for (const [name, schema] of this.schemas) {
+      const { $id: _id, $schema: _s, ...rest } = schema;
+      out[name] = rewriteRefs(rest) as Schema;
+    }
+    return out;
+  }
+}
+
+function rewriteRefs(node: unknown): unknown {
+  if (Array.isArray(node)) return node.map(rewriteRefs);
+  if (!node || typeof node !== 'object') return node;
+  const out: Record<string, unknown> = {};
+  for (const [k, v] of Object.entries(node)) {
+    if (k === '$ref' && typeof v === 'string' && v.startsWith(ID_PREFIX)) {
+      const [name, frag] = v.slice(ID_PREFIX.length).split('#');
+      out[k] = `#/components/schemas/${name}${frag ? frag.replace(/^\/\$defs\//, '/$defs/') : ''}`;
+      if (frag) out[k] = `#/components/schemas/${name}${frag}`;
+    } else out[k] = rewriteRefs(v);
+  }
+  return out;
+}
+
+export function toFieldErrors(errors: ErrorObject[]): FieldError[] {
+  const seen = new Set<string>();
+  const out: FieldError[] = [];
+  for (const e of errors) {
+    let pointer = e.instancePath || '';
+    let detail = e.message ?? 'is invalid';
+    const p = e.params as Record<string, unknown>;
+    if (e.keyword === 'required') {
+      pointer += `/${String(p.missingProperty)}`;
+      detail = 'is required';
+    } else if (e.keyword === 'additionalProperties') {
+      pointer += `/${String(p.additionalProperty)}`;
+      detail = 'is not a known field';
+    } else if (e.keyword === 'enum') {
+      detail = `must be one of: ${(p.allowedValues as unknown[]).join(', ')}`;
+    }
+    // "if/then" and "anyOf" wrappers repeat what their branches said
+    if (e.keyword === 'if' || e.keyword === 'anyOf' || e.keyword === 'oneOf') continue;
+    const key = `${pointer}|${detail}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    out.push({ pointer: pointer || '/', detail, code: e.keyword });
+  }
+  return out;
+}
+
+let shared: SchemaRegistry | undefined;
+/** The process-wide registry (the schema files do not change while the process runs). */
+export function schemaRegistry(): SchemaRegistry {
+  shared ??= new SchemaRegistry();
+  return shared;
+}

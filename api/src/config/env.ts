@@ -1,0 +1,63 @@
+import { Ajv } from 'ajv';
+
+/**
+ * Every environment variable the service reads, validated at boot. A bad value stops the process
+ * with a message that names the variable, instead of failing later somewhere else.
+ */
+export const envSchema = {
+  type: 'object',
+  properties: {
+    NODE_ENV: { enum: ['development', 'test', 'production'], default: 'development' },
+    HOST: { type: 'string', default: '127.0.0.1' },
+    PORT: { type: 'integer', minimum: 1, maximum: 65535, default: 3000 },
+    PUBLIC_URL: { type: 'string', pattern: '^https?://', default: 'http://127.0.0.1:3000' },
+    DATABASE_URL: { type: 'string', pattern: '^postgres(ql)?://' },
+    DATABASE_POOL_MAX: { type: 'integer', minimum: 1, maximum: 200, default: 10 },
+    REDIS_URL: { type: 'string', pattern: '^rediss?://' },
+    PROCESS_ROLE: { enum: ['api', 'worker', 'all'], default: 'all' },
+    LOG_LEVEL: { enum: ['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'], default: 'info' },
+    BODY_LIMIT_BYTES: { type: 'integer', minimum: 1024, default: 1048576 },
+    CORS_ORIGINS: { type: 'string', default: 'http://127.0.0.1:3000,http://localhost:3000,http://127.0.0.1:5173,http://localhost:5173' },
+    JWT_SECRET: { type: 'string', minLength: 32, default: 'development-only-secret-change-me-in-production' },
+    ADMIN_DIST: { type: 'string', default: '' },
+  },
+  required: ['DATABASE_URL', 'REDIS_URL'],
+} as const;
+
+export interface Env {
+  NODE_ENV: 'development' | 'test' | 'production';
+  HOST: string;
+  PORT: number;
+  PUBLIC_URL: string;
+  DATABASE_URL: string;
+  DATABASE_POOL_MAX: number;
+  REDIS_URL: string;
+  PROCESS_ROLE: 'api' | 'worker' | 'all';
+  LOG_LEVEL: string;
+  BODY_LIMIT_BYTES: number;
+  CORS_ORIGINS: string;
+  JWT_SECRET: string;
+  ADMIN_DIST: string;
+}
+
+const ajv = new Ajv({ coerceTypes: true, useDefaults: true, allErrors: true });
+const check = ajv.compile(envSchema);
+
+/** Validates and coerces the environment; throws an Error naming each bad variable. */
+export function validateEnv(raw: Record<string, unknown>): Env {
+  const known = Object.keys(envSchema.properties);
+  const picked: Record<string, unknown> = {};
+  for (const k of known) if (raw[k] !== undefined && raw[k] !== '') picked[k] = raw[k];
+  if (!check(picked)) {
+    const lines = (check.errors ?? []).map((e) => {
+      const name = e.instancePath.replace(/^\//, '') || (e.params as { missingProperty?: string }).missingProperty || '?';
+      return `  ${name}: ${e.message}`;
+    });
+    throw new Error(`Invalid configuration:\n${lines.join('\n')}`);
+  }
+  const env = picked as unknown as Env;
+  if (env.NODE_ENV === 'production' && env.JWT_SECRET === envSchema.properties.JWT_SECRET.default) {
+    throw new Error('Invalid configuration:\n  JWT_SECRET: must be set to a secret of your own in production');
+  }
+  return { ...raw, ...env } as Env;
+}

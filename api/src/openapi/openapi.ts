@@ -1,0 +1,46 @@
+import type { INestApplication } from '@nestjs/common';
+import { DocumentBuilder, OpenAPIObject, SwaggerModule } from '@nestjs/swagger';
+import { schemaRegistry } from '../common/schemas/schema-registry.js';
+
+export const API_KEY_HEADER = 'X-Api-Key';
+
+/**
+ * The OpenAPI 3.1 document: routes from the controllers' decorators, shapes from `schemas/`
+ * (the same JSON Schema files the validation pipe uses), and problem+json on every error.
+ */
+export function buildOpenApiDocument(app: INestApplication): OpenAPIObject {
+  const config = new DocumentBuilder()
+    .setOpenAPIVersion('3.1.0')
+    .setTitle('Pourgate API')
+    .setDescription(
+      'Batch targets, reading judgement and signed events for two-part polyurethane foam casting. ' +
+        'All quantities are stored in SI; every field names its unit. Errors are RFC 9457 problem details ' +
+        '(application/problem+json). Lists speak the ra-data-simple-rest protocol (sort, range, filter; Content-Range).',
+    )
+    .setVersion('1')
+    .addBearerAuth({ type: 'http', scheme: 'bearer', bearerFormat: 'JWT', description: 'A person: access token from POST /v1/auth/sign-in' }, 'person')
+    .addApiKey({ type: 'apiKey', in: 'header', name: API_KEY_HEADER, description: 'A machine: an API key from /v1/api-keys' }, 'apiKey')
+    .build();
+  const doc = SwaggerModule.createDocument(app, config, { operationIdFactory: (controller, method) => `${controller.replace(/Controller$/, '')}_${method}` });
+  doc.components ??= {};
+  doc.components.schemas = { ...(doc.components.schemas ?? {}), ...schemaRegistry().openApiComponents() } as NonNullable<OpenAPIObject['components']>['schemas'];
+  addProblemResponses(doc);
+  return doc;
+}
+
+/** Every operation can fail with problem+json; say so once, here, instead of on every route. */
+function addProblemResponses(doc: OpenAPIObject): void {
+  const problem = { 'application/problem+json': { schema: { $ref: '#/components/schemas/problem' } } };
+  for (const item of Object.values(doc.paths)) {
+    for (const op of Object.values(item) as Array<{ responses?: Record<string, unknown> } | undefined>) {
+      if (!op || typeof op !== 'object' || !('responses' in op)) continue;
+      op.responses ??= {};
+      op.responses['default'] ??= { description: 'An error, as RFC 9457 problem details', content: problem };
+      for (const [code, resp] of Object.entries(op.responses)) {
+        if (/^[45]\d\d$/.test(code) && resp && typeof resp === 'object' && !('content' in resp)) {
+          (resp as Record<string, unknown>).content = problem;
+        }
+      }
+    }
+  }
+}

@@ -1,0 +1,47 @@
+import { BullModule } from '@nestjs/bull';
+import { Global, Module } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { Redis, RedisOptions } from 'ioredis';
+import type { Env } from '../config/env.js';
+
+/** Queue names, in one place so producers and processors agree. */
+export const QUEUES = {
+  heartbeat: 'heartbeat',
+} as const;
+
+/**
+ * Bull on the Redis of REDIS_URL. Bull opens three connections per queue; the blocking client
+ * and the subscriber must not retry per request or check readiness (Bull's own requirement).
+ */
+export function bullRedisFactory(url: string) {
+  const parsed = new URL(url);
+  const base: RedisOptions = {
+    host: parsed.hostname,
+    port: Number(parsed.port || 6379),
+    password: parsed.password || undefined,
+    db: parsed.pathname.length > 1 ? Number(parsed.pathname.slice(1)) : 0,
+    tls: parsed.protocol === 'rediss:' ? {} : undefined,
+  };
+  return (type: 'client' | 'subscriber' | 'bclient', opts?: RedisOptions) => {
+    const redisOpts: RedisOptions = { ...opts, ...base };
+    if (type !== 'client') Object.assign(redisOpts, { maxRetriesPerRequest: null, enableReadyCheck: false });
+    else Object.assign(redisOpts, { maxRetriesPerRequest: 1 });
+    return new Redis(redisOpts);
+  };
+}
+
+@Global()
+@Module({
+  imports: [
+    BullModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService<Env, true>) => ({
+        createClient: bullRedisFactory(config.get('REDIS_URL', { infer: true })),
+        defaultJobOptions: { removeOnComplete: 1000, removeOnFail: 5000 },
+      }),
+    }),
+    BullModule.registerQueue({ name: QUEUES.heartbeat }),
+  ],
+  exports: [BullModule],
+})
+export class QueuesModule {}

@@ -1,0 +1,21 @@
+// One Jest run, three projects: unit specs beside the code, reference checks against published
+// values, and e2e suites against the real PostgreSQL and Redis that `npm test` starts.
+const tsJest = [
+  'ts-jest',
+  { useESM: true, tsconfig: '<rootDir>/api/tsconfig.jest.json' },
+];
+const common = {
+  rootDir: '.',
+  extensionsToTreatAsEsm: ['.ts'],
+  moduleNameMapper: { '^(\\.{1,2}/.*)\\.js$': '$1' },
+  transform: { '^.+\\.ts$': tsJest },
+  testEnvironment: 'node',
+};
+
+export default {
+  projects: [
+    { ...common, displayName: 'unit', roots: ['<rootDir>/api/src', '<rootDir>/sdk/src', '<rootDir>/fakes/src'], testMatch: ['**/*.spec.ts'] },
+    { ...common, displayName: 'reference', roots: ['<rootDir>/test/reference'], testMatch: ['**/*.reference-spec.ts'] },
+    { ...common, displayName: 'e2e', roots: ['<rootDir>/test/e2e'], testMatch: ['**/*.e2e-spec.ts'], testTimeout: 30000 },
+  ],
+};

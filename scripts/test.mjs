@@ -1,0 +1,63 @@
+#!/usr/bin/env node
+// `npm test`: the same set-up as `npm start` (with a throw-away, test-speed database), then every
+// suite of the project, one summary at the end. Extra arguments go to Jest (`npm test -- -t ratio`).
+import { spawnSync } from 'node:child_process';
+import path from 'node:path';
+import { ROOT, checkNode, ensureNpmDeps, log, startPostgres, startRedis, runTs } from './lib/services.mjs';
+
+checkNode();
+ensureNpmDeps();
+const { ensureDebianPackages } = await import('./lib/services.mjs');
+ensureDebianPackages({ chromium: '/usr/bin/chromium' });
+
+const pgPort = Number(process.env.TEST_PGPORT ?? 55433);
+const redisPort = Number(process.env.TEST_REDIS_PORT ?? 56380);
+const stops = [];
+let pg;
+let redis;
+if (!process.env.TEST_DATABASE_URL) {
+  pg = await startPostgres({ name: `pg-test-${pgPort}`, port: pgPort, fast: true, databases: ['pourgate_test'] });
+  if (pg.startedHere) stops.push(() => pg.stop());
+}
+if (!process.env.TEST_REDIS_URL) {
+  redis = await startRedis({ name: `redis-test-${redisPort}`, port: redisPort, durable: false });
+  if (redis.startedHere) stops.push(() => redis.stop());
+}
+const env = {
+  ...process.env,
+  NODE_ENV: 'test',
+  DATABASE_URL: process.env.TEST_DATABASE_URL ?? pg.url('pourgate_test'),
+  REDIS_URL: process.env.TEST_REDIS_URL ?? redis.url,
+  LOG_LEVEL: process.env.LOG_LEVEL ?? 'silent',
+  TEST_PG_SUPER_URL: pg?.superUrl ?? '',
+};
+
+const results = [];
+function step(name, cmd, args, extraEnv = {}) {
+  const t0 = Date.now();
+  log(`── ${name}`);
+  const r = spawnSync(cmd, args, { stdio: 'inherit', cwd: ROOT, env: { ...env, ...extraEnv } });
+  const ok = r.status === 0;
+  results.push({ name, ok, seconds: ((Date.now() - t0) / 1000).toFixed(1) });
+  return ok;
+}
+
+try {
+  const reset = runTs(path.join(ROOT, 'scripts/db.ts'), ['reset'], env);
+  results.push({ name: 'database reset + migrations', ok: reset.status === 0, seconds: '-' });
+  if (reset.status === 0) {
+    step('typecheck (tsc --noEmit)', process.execPath, [path.join(ROOT, 'node_modules/typescript/bin/tsc'), '-p', 'api', '--noEmit']);
+    step('jest: unit, reference and e2e suites', process.execPath, [
+      '--experimental-vm-modules', path.join(ROOT, 'node_modules/jest/bin/jest.js'), '--maxWorkers=2', ...process.argv.slice(2),
+    ], { NODE_OPTIONS: '--experimental-vm-modules --no-warnings' });
+  }
+} finally {
+  for (const stop of stops.reverse()) stop();
+}
+
+const width = Math.max(...results.map((r) => r.name.length));
+console.log('\nPourgate test summary');
+for (const r of results) console.log(`  ${r.ok ? 'PASS' : 'FAIL'}  ${r.name.padEnd(width)}  ${r.seconds}s`);
+const failed = results.filter((r) => !r.ok).length;
+console.log(`${results.length - failed} passed, ${failed} failed`);
+process.exit(failed ? 1 : 0);

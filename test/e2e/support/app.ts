@@ -1,0 +1,49 @@
+import type { NestFastifyApplication } from '@nestjs/platform-fastify';
+import { Writable } from 'node:stream';
+import request from 'supertest';
+import { createApp } from '../../../api/src/app.factory.js';
+
+/** Collects every log line the app writes, so tests can assert what is (and is not) logged. */
+export class LogCapture extends Writable {
+  readonly lines: string[] = [];
+  override _write(chunk: Buffer, _enc: string, done: () => void): void {
+    this.lines.push(...chunk.toString('utf8').split('\n').filter(Boolean));
+    done();
+  }
+  text(): string {
+    return this.lines.join('\n');
+  }
+}
+
+export interface TestApp {
+  app: NestFastifyApplication;
+  http: ReturnType<typeof request>;
+  logs: LogCapture;
+  close(): Promise<void>;
+}
+
+/** The real application on the test PostgreSQL and Redis that `npm test` started. */
+export async function startTestApp(env: Record<string, string> = {}): Promise<TestApp> {
+  const saved: Record<string, string | undefined> = {};
+  for (const [k, v] of Object.entries({ LOG_LEVEL: 'info', ...env })) {
+    saved[k] = process.env[k];
+    process.env[k] = v;
+  }
+  const logs = new LogCapture();
+  try {
+    const app = await createApp({ logStream: logs });
+    return {
+      app,
+      logs,
+      http: request(app.getHttpServer()),
+      async close() {
+        await app.close();
+      },
+    };
+  } finally {
+    for (const [k, v] of Object.entries(saved)) {
+      if (v === undefined) delete process.env[k];
+      else process.env[k] = v;
+    }
+  }
+}
