@@ -1,9 +1,11 @@
 import 'reflect-metadata';
 import helmet from '@fastify/helmet';
+import rateLimit from '@fastify/rate-limit';
 import fastifyStatic from '@fastify/static';
 import { NestFactory } from '@nestjs/core';
 import { FastifyAdapter, NestFastifyApplication } from '@nestjs/platform-fastify';
 import { SwaggerModule } from '@nestjs/swagger';
+import { Redis } from 'ioredis';
 import fs from 'node:fs';
 import path from 'node:path';
 import type { DestinationStream } from 'pino';
@@ -33,7 +35,7 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
   });
   const routes = new RouteTable();
   routes.attach(adapter.getInstance());
-  const app = await NestFactory.create<NestFastifyApplication>(AppModule, adapter, {
+  const app = await NestFactory.create<NestFastifyApplication>(AppModule.forRoot(), adapter, {
     logger: new PinoNestLogger(logger),
     bufferLogs: false,
   });
@@ -52,6 +54,23 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
         connectSrc: ["'self'"],
       },
     },
+  });
+  // Per-address throttle for the routes that opt in (sign-in, refresh), shared by every API
+  // process through Redis. Failed sign-ins are also counted per account (TokensService).
+  const rateRedis = new Redis(env.REDIS_URL, { maxRetriesPerRequest: 1, enableOfflineQueue: false, connectTimeout: 2000 });
+  fastify.addHook('onClose', async () => rateRedis.disconnect());
+  await app.register(rateLimit as never, {
+    global: false,
+    max: env.SIGNIN_IP_LIMIT_PER_MINUTE,
+    timeWindow: 60_000,
+    redis: rateRedis,
+    nameSpace: env.RATE_LIMIT_NAMESPACE,
+    skipOnError: true,
+    errorResponseBuilder: (_req: unknown, ctx: { after: string; ttl: number }) => ({
+      statusCode: 429,
+      retryAfterSeconds: Math.ceil(ctx.ttl / 1000),
+      message: `Too many attempts from this address; try again in ${ctx.after}.`,
+    }),
   });
   app.enableCors({
     origin: env.CORS_ORIGINS.split(',').map((s) => s.trim()).filter(Boolean),

@@ -47,18 +47,18 @@ describe('errors are RFC 9457 problem details, never a 500', () => {
   });
 
   it('malformed JSON -> 400', async () => {
-    const res = await t.http.post('/v1/problems').set('content-type', 'application/json').send('{"broken": ');
+    const res = await t.http.post('/v1/auth/sign-in').set('content-type', 'application/json').send('{"broken": ');
     expectProblem(res, 400);
   });
 
   it('wrong content type -> 415', async () => {
-    const res = await t.http.post('/v1/problems').set('content-type', 'text/csv').send('a,b\n1,2');
+    const res = await t.http.post('/v1/auth/sign-in').set('content-type', 'text/csv').send('a,b\n1,2');
     expectProblem(res, 415);
   });
 
   it('oversized body -> 413', async () => {
     const big = JSON.stringify({ blob: 'x'.repeat(1_100_000) });
-    const res = await t.http.post('/v1/problems').set('content-type', 'application/json').send(big);
+    const res = await t.http.post('/v1/auth/sign-in').set('content-type', 'application/json').send(big);
     expectProblem(res, 413);
   });
 

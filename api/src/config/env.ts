@@ -20,6 +20,15 @@ export const envSchema = {
     CORS_ORIGINS: { type: 'string', default: 'http://127.0.0.1:3000,http://localhost:3000,http://127.0.0.1:5173,http://localhost:5173' },
     JWT_SECRET: { type: 'string', minLength: 32, default: 'development-only-secret-change-me-in-production' },
     ADMIN_DIST: { type: 'string', default: '' },
+    SMTP_URL: { type: 'string', pattern: '^smtps?://', description: 'SMTP server for invitations and notices' },
+    MAIL_FROM: { type: 'string', default: 'Pourgate <pourgate@localhost>' },
+    ACCESS_TOKEN_TTL_SECONDS: { type: 'integer', minimum: 60, maximum: 86400, default: 900 },
+    REFRESH_TOKEN_TTL_SECONDS: { type: 'integer', minimum: 600, default: 2592000 },
+    INVITATION_TTL_HOURS: { type: 'integer', minimum: 1, maximum: 720, default: 72 },
+    SIGNIN_MAX_FAILURES: { type: 'integer', minimum: 1, default: 5 },
+    SIGNIN_LOCK_SECONDS: { type: 'integer', minimum: 1, default: 900 },
+    SIGNIN_IP_LIMIT_PER_MINUTE: { type: 'integer', minimum: 1, default: 30 },
+    RATE_LIMIT_NAMESPACE: { type: 'string', default: 'pourgate-rl:' },
   },
   required: ['DATABASE_URL', 'REDIS_URL'],
 } as const;
@@ -38,6 +47,15 @@ export interface Env {
   CORS_ORIGINS: string;
   JWT_SECRET: string;
   ADMIN_DIST: string;
+  SMTP_URL?: string;
+  MAIL_FROM: string;
+  ACCESS_TOKEN_TTL_SECONDS: number;
+  REFRESH_TOKEN_TTL_SECONDS: number;
+  INVITATION_TTL_HOURS: number;
+  SIGNIN_MAX_FAILURES: number;
+  SIGNIN_LOCK_SECONDS: number;
+  SIGNIN_IP_LIMIT_PER_MINUTE: number;
+  RATE_LIMIT_NAMESPACE: string;
 }
 
 const ajv = new Ajv({ coerceTypes: true, useDefaults: true, allErrors: true });

@@ -1,5 +1,5 @@
 import { BullModule } from '@nestjs/bull';
-import { Global, Module } from '@nestjs/common';
+import { Global, Inject, Injectable, Module, OnApplicationShutdown } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { Redis, RedisOptions } from 'ioredis';
 import type { Env } from '../config/env.js';
@@ -30,8 +30,27 @@ export function bullRedisFactory(url: string) {
   };
 }
 
+export const REDIS = Symbol('REDIS');
+
+/** A plain Redis client for counters and locks: fails fast (no offline queue) when Redis is down. */
+export function createRedis(url: string): Redis {
+  return new Redis(url, { maxRetriesPerRequest: 1, enableOfflineQueue: false, lazyConnect: false, connectTimeout: 2000 });
+}
+
+@Injectable()
+class RedisShutdown implements OnApplicationShutdown {
+  constructor(@Inject(REDIS) private readonly redis: Redis) {}
+  async onApplicationShutdown(): Promise<void> {
+    this.redis.disconnect();
+  }
+}
+
 @Global()
 @Module({
+  providers: [
+    { provide: REDIS, inject: [ConfigService], useFactory: (config: ConfigService<Env, true>) => createRedis(config.get('REDIS_URL', { infer: true })) },
+    RedisShutdown,
+  ],
   imports: [
     BullModule.forRootAsync({
       inject: [ConfigService],
@@ -42,6 +61,6 @@ export function bullRedisFactory(url: string) {
     }),
     BullModule.registerQueue({ name: QUEUES.heartbeat }),
   ],
-  exports: [BullModule],
+  exports: [BullModule, REDIS],
 })
 export class QueuesModule {}

@@ -71,7 +71,8 @@ export function toProblem(exception: unknown, req: FastifyRequest, routes?: Rout
     if (fastifyStatus === 413) return { problem: plain(413, 'payload-too-large', err.message), headers: {} };
     if (fastifyStatus === 415) return { problem: plain(415, 'unsupported-media-type', err.message), headers: {} };
     if (fastifyStatus === 400) return { problem: plain(400, 'malformed-request', err.message), headers: {} };
-    return { problem: plain(fastifyStatus, null, err.message), headers: {} };
+    const retry = (exception as { retryAfterSeconds?: number }).retryAfterSeconds;
+    return { problem: plain(fastifyStatus, null, err.message), headers: retry ? { 'retry-after': String(retry) } : {} };
   }
   if (isUnavailable(err)) {
     return { problem: plain(503, 'service-unavailable', 'A backing service is not reachable; nothing was written. Retry shortly.'), headers: { 'retry-after': '5' } };

@@ -1,0 +1,58 @@
+import { Controller, Get, HttpCode, Post, Query, Res } from '@nestjs/common';
+import { ApiCreatedResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import type { FastifyReply } from 'fastify';
+import type { ApiKeyScope } from '../auth/permissions.js';
+import { Caller, type RequestContext } from '../auth/principal.js';
+import { Requires } from '../auth/requires.decorator.js';
+import { IdParam } from '../common/decorators/uuid-param.js';
+import { ListRoute, parseListQuery, setContentRange } from '../common/lists/list-query.js';
+import { SchemaBody } from '../common/schemas/schema.pipe.js';
+import { ApiKeysService, apiKeysListSpec } from './api-keys.service.js';
+
+@ApiTags('api-keys')
+@Controller('api-keys')
+export class ApiKeysController {
+  constructor(private readonly keys: ApiKeysService) {}
+
+  @Get()
+  @Requires('api-keys:read')
+  @ListRoute(apiKeysListSpec)
+  @ApiOperation({ summary: 'API keys: prefix, name, scopes, creator, last use, expiry, state (never the secret)' })
+  async list(@Caller() c: RequestContext, @Query() query: Record<string, unknown>, @Res({ passthrough: true }) reply: FastifyReply) {
+    const q = parseListQuery(query, apiKeysListSpec);
+    const { rows, total } = await this.keys.list(c, q);
+    setContentRange(reply, apiKeysListSpec.resource, q, rows.length, total);
+    return rows;
+  }
+
+  @Get(':id')
+  @Requires('api-keys:read')
+  @ApiOperation({ summary: 'One API key (never the secret)' })
+  get(@Caller() c: RequestContext, @IdParam() id: string) {
+    return this.keys.get(c, id);
+  }
+
+  @Post()
+  @Requires('api-keys:manage')
+  @ApiOperation({ summary: 'Issue an API key', description: 'The response carries `secret` — the only time it is shown. Send it in the X-Api-Key header.' })
+  @ApiCreatedResponse({ description: 'The key, with its secret (shown once)' })
+  create(@Caller() c: RequestContext, @SchemaBody('api-key.create') body: { name: string; kind: 'device' | 'integration'; environment: 'live' | 'test'; scopes: ApiKeyScope[]; deviceId?: string | null; expiresAt?: string | null }) {
+    return this.keys.create(c, body);
+  }
+
+  @Post(':id/revoke')
+  @HttpCode(200)
+  @Requires('api-keys:manage')
+  @ApiOperation({ summary: 'Revoke a key at once' })
+  revoke(@Caller() c: RequestContext, @IdParam() id: string) {
+    return this.keys.revoke(c, id);
+  }
+
+  @Post(':id/rotate')
+  @Requires('api-keys:manage')
+  @ApiOperation({ summary: 'Rotate a key: a new secret now, the old one valid for the grace period' })
+  @ApiCreatedResponse({ description: 'The successor key, with its secret (shown once)' })
+  rotate(@Caller() c: RequestContext, @IdParam() id: string, @SchemaBody('api-key.rotate') body: { graceSeconds: number }) {
+    return this.keys.rotate(c, id, body.graceSeconds);
+  }
+}

@@ -1,0 +1,7 @@
+import { Global, Module } from '@nestjs/common';
+import { ApiKeysController } from './api-keys.controller.js';
+import { ApiKeysService } from './api-keys.service.js';
+
+@Global()
+@Module({ controllers: [ApiKeysController], providers: [ApiKeysService], exports: [ApiKeysService] })
+export class ApiKeysModule {}

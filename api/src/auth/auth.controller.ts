@@ -1,0 +1,63 @@
+import { Controller, Get, HttpCode, Patch, Post } from '@nestjs/common';
+import { RouteConfig } from '@nestjs/platform-fastify';
+import { ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiTags, ApiTooManyRequestsResponse } from '@nestjs/swagger';
+import { Public } from '../common/decorators/public.decorator.js';
+import { SchemaBody } from '../common/schemas/schema.pipe.js';
+import { Caller, Origin, type RequestContext } from './principal.js';
+import { Requires } from './requires.decorator.js';
+import { TokensService } from './tokens.service.js';
+import { UsersService } from '../users/users.service.js';
+
+const session = { schema: { $ref: '#/components/schemas/auth.session' } };
+
+@ApiTags('auth')
+@Controller()
+export class AuthController {
+  constructor(private readonly tokens: TokensService, private readonly users: UsersService) {}
+
+  @Post('auth/sign-in')
+  @Public()
+  @HttpCode(200)
+  @RouteConfig({ rateLimit: {} })
+  @ApiOperation({ summary: 'Sign in with e-mail and password', description: 'Failed attempts are throttled per account and per address (429 with Retry-After). The message never says whether the e-mail exists.' })
+  @ApiOkResponse(session)
+  @ApiTooManyRequestsResponse({ description: 'Throttled' })
+  signIn(@SchemaBody('auth.sign-in') body: { email: string; password: string }, @Origin() origin: { ip: string; userAgent?: string }) {
+    return this.tokens.signIn(body.email, body.password, origin);
+  }
+
+  @Post('auth/refresh')
+  @Public()
+  @HttpCode(200)
+  @RouteConfig({ rateLimit: {} })
+  @ApiOperation({ summary: 'Trade a refresh token for a new session', description: 'Refresh tokens rotate: each works once. Presenting a used one ends every session of its family.' })
+  @ApiOkResponse(session)
+  refresh(@SchemaBody('auth.refresh') body: { refreshToken: string }, @Origin() origin: { ip: string; userAgent?: string }) {
+    return this.tokens.refresh(body.refreshToken, origin);
+  }
+
+  @Post('auth/sign-out')
+  @Public()
+  @HttpCode(204)
+  @ApiOperation({ summary: 'End the session of a refresh token (and its rotations)' })
+  @ApiNoContentResponse()
+  async signOut(@SchemaBody('auth.refresh') body: { refreshToken: string }) {
+    await this.tokens.signOut(body.refreshToken);
+  }
+
+  @Get('me')
+  @Requires('profile:read')
+  @ApiOperation({ summary: 'The signed-in person, their organization and allowed actions' })
+  @ApiOkResponse({ schema: { $ref: '#/components/schemas/me' } })
+  me(@Caller() c: RequestContext) {
+    return this.users.me(c);
+  }
+
+  @Patch('me')
+  @Requires('profile:read')
+  @ApiOperation({ summary: 'Change one’s own name, unit system, notification setting or password' })
+  @ApiOkResponse({ schema: { $ref: '#/components/schemas/me' } })
+  updateMe(@Caller() c: RequestContext, @SchemaBody('me.update') body: { name?: string; unitSystem?: 'metric' | 'imperial'; notifyRejections?: 'each' | 'digest' | 'off'; currentPassword?: string; newPassword?: string }) {
+    return this.users.updateMe(c, body);
+  }
+}

@@ -1,0 +1,67 @@
+/**
+ * Who may do what: the one role × action matrix. The API's guards read it, the console builds
+ * its menu from it, the README's table is generated from it, and the route matrix test checks
+ * every route of the OpenAPI document against it. Plain data, no framework imports.
+ */
+export const ROLES = ['admin', 'engineer', 'integrator', 'viewer'] as const;
+export type Role = (typeof ROLES)[number];
+
+export interface ActionRule {
+  /** People whose role allows the action. */
+  roles: readonly Role[];
+  /** When set, an API key holding this scope may also perform the action. */
+  scope?: ApiKeyScope;
+  description: string;
+}
+
+export const API_KEY_SCOPES = ['readings:write', 'targets:read', 'work-orders:write', 'events:read', 'devices:read', 'shop:read'] as const;
+export type ApiKeyScope = (typeof API_KEY_SCOPES)[number];
+
+const everyone = ROLES;
+
+export const ACTIONS = {
+  'profile:read': { roles: everyone, description: 'See and edit one’s own profile and preferences' },
+  'people:read': { roles: ['admin'], description: 'List people and invitations' },
+  'people:manage': { roles: ['admin'], description: 'Invite people, change roles, disable accounts' },
+  'api-keys:read': { roles: ['admin', 'integrator'], description: 'List API keys' },
+  'api-keys:manage': { roles: ['admin', 'integrator'], description: 'Create, rotate and revoke API keys (integrators: device keys only)' },
+  'audit:read': { roles: ['admin'], description: 'Read the audit log' },
+  'devices:read': { roles: everyone, scope: 'devices:read', description: 'List devices and stations' },
+  'devices:manage': { roles: ['admin', 'integrator'], description: 'Register and change devices' },
+  'webhooks:read': { roles: ['admin', 'integrator'], description: 'List webhook endpoints and deliveries' },
+  'webhooks:manage': { roles: ['admin', 'integrator'], description: 'Add, change, test and replay webhook endpoints' },
+  'shop:read': { roles: everyone, scope: 'shop:read', description: 'Read material systems, lots, molds, work orders, batches, QC cup tests' },
+  'shop:write': { roles: ['engineer'], description: 'Change material systems, lots, molds, batches, QC cup tests' },
+  'work-orders:write': { roles: ['engineer'], scope: 'work-orders:write', description: 'Post and change work orders (the ERP does this with a key)' },
+  'targets:read': { roles: everyone, scope: 'targets:read', description: 'Compute and read batch targets' },
+  'readings:read': { roles: everyone, description: 'List readings and verdicts' },
+  'readings:write': { roles: ['engineer'], scope: 'readings:write', description: 'Post readings (scales and loggers do this with a key)' },
+  'readings:review': { roles: ['engineer'], description: 'Waive or uphold rejected readings' },
+  'imports:write': { roles: ['engineer', 'integrator'], scope: 'readings:write', description: 'Upload logger CSV files' },
+  'events:read': { roles: ['admin', 'engineer', 'integrator'], scope: 'events:read', description: 'Poll the event feed' },
+} as const satisfies Record<string, ActionRule>;
+
+export type Action = keyof typeof ACTIONS;
+
+export function roleAllows(role: Role, action: Action): boolean {
+  return (ACTIONS[action].roles as readonly Role[]).includes(role);
+}
+
+export function scopeFor(action: Action): ApiKeyScope | undefined {
+  return (ACTIONS[action] as ActionRule).scope;
+}
+
+/** The actions a role may perform (the console's menu is built from this). */
+export function actionsOf(role: Role): Action[] {
+  return (Object.keys(ACTIONS) as Action[]).filter((a) => roleAllows(role, a));
+}
+
+/** A markdown table of the matrix, for the README (`npm run docs:roles` prints it). */
+export function matrixMarkdown(): string {
+  const head = `| action | ${ROLES.join(' | ')} | API key scope | what it covers |`;
+  const sep = `| --- | ${ROLES.map(() => ':-:').join(' | ')} | --- | --- |`;
+  const rows = (Object.entries(ACTIONS) as [Action, ActionRule][]).map(
+    ([a, r]) => `| \`${a}\` | ${ROLES.map((role) => (r.roles.includes(role) ? '✔' : '')).join(' | ')} | ${r.scope ? `\`${r.scope}\`` : '—'} | ${r.description} |`,
+  );
+  return [head, sep, ...rows].join('\n');
+}

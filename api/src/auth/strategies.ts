@@ -1,0 +1,51 @@
+import { Injectable } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { PassportStrategy } from '@nestjs/passport';
+import { HeaderAPIKeyStrategy } from 'passport-headerapikey';
+import { ExtractJwt, Strategy as JwtStrategyBase } from 'passport-jwt';
+import { ApiKeysService } from '../api-keys/api-keys.service.js';
+import type { Env } from '../config/env.js';
+import { API_KEY_HEADER } from '../openapi/openapi.js';
+import type { Principal } from './principal.js';
+import { UsersRepository } from '../users/users.repository.js';
+
+export interface AccessClaims {
+  sub: string;
+  org: string;
+  role: string;
+  typ: 'access';
+}
+
+/** People: a short-lived access JWT in `Authorization: Bearer`. The user row is re-read, so a
+ *  disabled account or a changed role takes effect at once, not when the token expires. */
+@Injectable()
+export class JwtStrategy extends PassportStrategy(JwtStrategyBase, 'jwt') {
+  constructor(config: ConfigService<Env, true>, private readonly users: UsersRepository) {
+    super({
+      jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
+      secretOrKey: config.get('JWT_SECRET', { infer: true }),
+      algorithms: ['HS256'],
+      issuer: 'pourgate',
+      audience: 'pourgate-api',
+    });
+  }
+
+  async validate(claims: AccessClaims): Promise<Principal | false> {
+    if (claims.typ !== 'access') return false;
+    const u = await this.users.findById(claims.sub);
+    if (!u || u.disabled || u.organization_id !== claims.org) return false;
+    return { kind: 'user', id: u.id, organizationId: u.organization_id, role: u.role, email: u.email, name: u.name };
+  }
+}
+
+/** Machines: an API key in the X-Api-Key header (never in a URL). */
+@Injectable()
+export class ApiKeyStrategy extends PassportStrategy(HeaderAPIKeyStrategy, 'api-key') {
+  constructor(private readonly keys: ApiKeysService) {
+    super({ header: API_KEY_HEADER, prefix: '' }, false);
+  }
+
+  async validate(secret: string): Promise<Principal | false> {
+    return (await this.keys.authenticate(secret)) ?? false;
+  }
+}
