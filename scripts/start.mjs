@@ -3,6 +3,7 @@
 // Installs what is missing, starts PostgreSQL and Redis on loopback (durable), migrates, seeds the
 // demo, builds what is stale, serves API + docs + console, and on Ctrl-C stops what it started.
 import { spawn, spawnSync } from 'node:child_process';
+import fs from 'node:fs';
 import path from 'node:path';
 import { ROOT, checkNode, ensureNpmDeps, fail, isStale, log, runTs, startPostgres, startRedis } from './lib/services.mjs';
 
@@ -21,6 +22,16 @@ if (!env.REDIS_URL) {
   if (redis.startedHere) stops.push(() => { log('stopping Redis'); redis.stop(); });
   env.REDIS_URL = redis.url;
 }
+let mailPage = null;
+if (!env.SMTP_URL && env.NODE_ENV !== 'production') {
+  // the local mail catcher stands in for the shop's mail server: invitations and notices land there
+  const smtpPort = Number(process.env.CATCHER_SMTP_PORT ?? 55025);
+  const httpPort = Number(process.env.CATCHER_HTTP_PORT ?? 55080);
+  const catcher = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'fakes/src/smtp-catcher.ts'), '--smtp-port', String(smtpPort), '--http-port', String(httpPort)], { cwd: ROOT, env, stdio: 'inherit' });
+  stops.push(() => catcher.kill('SIGTERM'));
+  env.SMTP_URL = `smtp://127.0.0.1:${smtpPort}`;
+  mailPage = `http://127.0.0.1:${httpPort}/`;
+}
 const stopServices = () => { for (const s of stops.splice(0).reverse()) s(); };
 
 if (runTs(path.join(ROOT, 'scripts/db.ts'), ['migrate'], env).status !== 0) { stopServices(); fail('migrations failed'); }
@@ -33,7 +44,7 @@ function build(name, target, sources, args) {
   if (r.status !== 0) { stopServices(); fail(`building ${name} failed`); }
 }
 build('the API', 'api/dist/main.js', ['api/src', 'api/tsconfig.json', 'api/tsconfig.build.json'], ['run', 'build', '-w', 'api']);
-build('the console', 'admin/dist/index.html', ['admin/src', 'admin/index.html', 'admin/vite.config.ts'], ['run', 'build', '-w', 'admin']);
+if (fs.existsSync(path.join(ROOT, 'admin/vite.config.ts')) && !process.env.SKIP_CONSOLE_BUILD) build('the console', 'admin/dist/index.html', ['admin/src', 'admin/index.html', 'admin/vite.config.ts'], ['run', 'build', '-w', 'admin']);
 
 const port = Number(env.PORT ?? 3000);
 const child = spawn(process.execPath, ['--enable-source-maps', path.join(ROOT, 'api/dist/main.js')], { cwd: ROOT, env, stdio: 'inherit' });
@@ -62,7 +73,7 @@ for (let i = 0; i < 120 && !stopping; i++) {
     console         ${base}/
     API             ${base}/v1
     OpenAPI         ${base}/v1/openapi.json
-    API docs        ${base}/docs
+    API docs        ${base}/docs${mailPage ? `\n    caught mail     ${mailPage}` : ''}
 
   Demo sign-in (local only; password for all: pourgate-demo)
     admin@demo.test  engineer@demo.test  integrator@demo.test  viewer@demo.test

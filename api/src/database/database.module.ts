@@ -1,4 +1,4 @@
-import { Global, Inject, Injectable, Module, OnApplicationShutdown } from '@nestjs/common';
+import { Global, Inject, Injectable, Logger, Module, OnApplicationShutdown } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import knexPkg from 'knex';
 import type { Knex } from 'knex';
@@ -11,8 +11,17 @@ export const KNEX = Symbol('KNEX');
 // bigint counts and numeric columns arrive as strings by default; numeric is parsed where it is read.
 pg.types.setTypeParser(pg.types.builtins.INT8, (v: string) => Number(v));
 
+const knexLogger = new Logger('Knex');
+
 export function createKnex(url: string, poolMax = 10): Knex {
   return knex({
+    // knex logs to console by default; send its warnings to the service log instead
+    log: {
+      warn: (m: unknown) => knexLogger.warn(String(m)),
+      error: (m: unknown) => knexLogger.error(String(m)),
+      deprecate: (m: unknown) => knexLogger.warn(String(m)),
+      debug: (m: unknown) => knexLogger.debug(String(m)),
+    },
     client: 'pg',
     connection: { connectionString: url, application_name: 'pourgate', connectionTimeoutMillis: 3000 },
     pool: { min: 0, max: poolMax, acquireTimeoutMillis: 5000 },
