@@ -34,7 +34,7 @@ export const ACTIONS = {
   'shop:write': { roles: ['engineer'], description: 'Change material systems, lots, molds, batches, QC cup tests' },
   'work-orders:write': { roles: ['engineer'], scope: 'work-orders:write', description: 'Post and change work orders (the ERP does this with a key)' },
   'targets:read': { roles: everyone, scope: 'targets:read', description: 'Compute and read batch targets' },
-  'readings:read': { roles: everyone, description: 'List readings and verdicts' },
+  'readings:read': { roles: everyone, scope: 'readings:write', description: 'List readings and verdicts (a device key reads back what it posted)' },
   'readings:write': { roles: ['engineer'], scope: 'readings:write', description: 'Post readings (scales and loggers do this with a key)' },
   'readings:review': { roles: ['engineer'], description: 'Waive or uphold rejected readings' },
   'imports:write': { roles: ['engineer', 'integrator'], scope: 'readings:write', description: 'Upload logger CSV files' },

@@ -1,0 +1,28 @@
+import { describe, expect, it } from '@jest/globals';
+import fs from 'node:fs';
+import path from 'node:path';
+import { PROJECT_ROOT } from '../config/paths.js';
+import { ACTIONS, actionsOf, API_KEY_SCOPES, matrixMarkdown, roleAllows, ROLES } from './permissions.js';
+
+describe('the role × action matrix', () => {
+  it('is the table README.md shows (regenerate with npm run docs:roles)', () => {
+    const readme = fs.readFileSync(path.join(PROJECT_ROOT, 'README.md'), 'utf8');
+    const between = /<!-- roles:start -->\n([\s\S]*?)\n<!-- roles:end -->/.exec(readme);
+    expect(between?.[1]).toBe(matrixMarkdown());
+  });
+
+  it('gives only admins the people and audit actions, and only engineers the review', () => {
+    for (const role of ROLES) {
+      expect(roleAllows(role, 'people:manage')).toBe(role === 'admin');
+      expect(roleAllows(role, 'audit:read')).toBe(role === 'admin');
+      expect(roleAllows(role, 'readings:review')).toBe(role === 'engineer');
+    }
+    expect(actionsOf('viewer').every((a) => a.endsWith(':read'))).toBe(true);
+  });
+
+  it('names only known key scopes, and every scope opens at least one action', () => {
+    const used = new Set(Object.values(ACTIONS).map((r) => ('scope' in r ? r.scope : undefined)).filter(Boolean));
+    for (const s of used) expect(API_KEY_SCOPES).toContain(s);
+    for (const s of API_KEY_SCOPES) expect(used.has(s)).toBe(true);
+  });
+});
