@@ -1,5 +1,6 @@
-import { SetMetadata } from '@nestjs/common';
+import { applyDecorators, SetMetadata } from '@nestjs/common';
+import { ApiExtension } from '@nestjs/swagger';
 
 export const IS_PUBLIC = 'pourgate:public';
-/** Marks a route that needs no credentials (health, sign-in, the docs). */
-export const Public = () => SetMetadata(IS_PUBLIC, true);
+/** Marks a route (or a controller) that needs no credentials: health, sign-in, invitations. */
+export const Public = () => applyDecorators(SetMetadata(IS_PUBLIC, true), ApiExtension('x-pourgate-public', true));

@@ -26,7 +26,8 @@ export class SchemaRegistry {
   private readonly compiled = new Map<string, ValidateFunction>();
 
   constructor(dir = SCHEMAS_DIR) {
-    const opts = { allErrors: true, useDefaults: true, strict: true, keywords: ANNOTATIONS };
+    // strict, except that `required` inside if/then may name properties declared by the parent
+    const opts = { allErrors: true, useDefaults: true, strict: true, strictRequired: false, keywords: ANNOTATIONS };
     this.bodyAjv = addFormats(new Ajv2020({ ...opts, coerceTypes: false }));
     this.queryAjv = addFormats(new Ajv2020({ ...opts, coerceTypes: 'array' }));
     for (const file of fs.readdirSync(dir).filter((f) => f.endsWith('.schema.json')).sort()) {
@@ -36,6 +37,11 @@ export class SchemaRegistry {
       this.schemas.set(name, schema);
       this.bodyAjv.addSchema(schema);
       this.queryAjv.addSchema(schema);
+    }
+    // compile everything now: a broken schema stops the boot, not a request
+    for (const name of this.schemas.keys()) {
+      this.compiled.set(`body:${name}`, this.bodyAjv.getSchema(ID_PREFIX + name)!);
+      this.compiled.set(`query:${name}`, this.queryAjv.getSchema(ID_PREFIX + name)!);
     }
   }
 
