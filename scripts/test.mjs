@@ -58,6 +58,10 @@ try {
 } finally {
   for (const stop of stops.reverse()) stop();
 }
+// last, and on its own servers: the README's start command on a fresh clone of HEAD
+if (!process.env.SKIP_FRESH_CLONE && process.argv.length <= 2) {
+  step('fresh clone: npm start answers /v1/health', process.execPath, [path.join(ROOT, 'test/fresh-clone.mjs')]);
+}
 
 const width = Math.max(...results.map((r) => r.name.length));
 console.log('\nPourgate test summary');
