@@ -1,5 +1,6 @@
 import argon2 from 'argon2';
 import type { Knex } from 'knex';
+import { seedShopDemo } from './shop-demo.js';
 
 /** The password of every demo account. Local demo only: the seed refuses to run in production. */
 export const DEMO_PASSWORD = 'pourgate-demo';
@@ -48,6 +49,7 @@ export async function seedDemo(db: Knex): Promise<string> {
       await db('users').insert({ organization_id: row.id, email: p.email, name: p.name, role: p.role, password_hash: hash, unit_system: org.unitSystem });
       added++;
     }
+    if (org.slug === 'demo-shop') added += await seedShopDemo(db, row.id);
   }
   return added ? `${added} rows added` : 'up to date';
 }

@@ -10,6 +10,8 @@ export const KNEX = Symbol('KNEX');
 
 // bigint counts and numeric columns arrive as strings by default; numeric is parsed where it is read.
 pg.types.setTypeParser(pg.types.builtins.INT8, (v: string) => Number(v));
+// DATE columns (calibration due, lot expiry) are calendar days, not instants: keep them as 'YYYY-MM-DD'.
+pg.types.setTypeParser(pg.types.builtins.DATE, (v: string) => v);
 
 const knexLogger = new Logger('Knex');
 

@@ -1,0 +1,197 @@
+/**
+ * A material system as the API takes it (shop units), as the database stores it (SI columns named
+ * with their unit), and as the computation needs it (MaterialSystemParameters). The computation's
+ * own input checks decide what makes physical sense, so a system that can be stored can be computed.
+ */
+import { computeBatchTargets, validateBatchTargetsInput, DEFAULT_RATIO_TOLERANCE_PERCENT, type MaterialSystemParameters } from '../batching/targets.js';
+import { BatchingInputError } from '../batching/errors.js';
+import type { FieldError } from '../common/problems.js';
+import { QuantityReader, opt, type Quantity } from '../shop/quantities.js';
+import { translate } from '../shop/errors.js';
+
+export interface MaterialSystemInput {
+  name?: string;
+  kind?: 'flexible' | 'integral-skin' | 'other';
+  ratioBasis: 'weight' | 'volume';
+  ratio: { a: number; b: number };
+  specificGravityA: number;
+  specificGravityB: number;
+  isocyanatePart: 'A' | 'B';
+  freeRiseDensity: Quantity;
+  freeRiseReferenceTemperature: Quantity;
+  freeRiseDensitySlope?: Quantity | null;
+  ratioTolerancePercent?: number;
+  componentTemperatureWindow?: { min: Quantity; max: Quantity } | null;
+  potLife?: Quantity | null;
+  demoldTime?: Quantity | null;
+  fullCureTime?: Quantity | null;
+  maxPigmentPercent?: number | null;
+  maxPackFactor?: number | null;
+  exothermMassLimit?: Quantity | null;
+  ncoPercent?: number | null;
+  hydroxylNumber?: number | null;
+  waterPbw?: number | null;
+  cautionsText?: string | null;
+  changeNote?: string | null;
+}
+
+/** The parameter columns of material_system_revisions (everything a revision pins down). */
+export interface RevisionColumns {
+  ratio_basis: 'weight' | 'volume';
+  ratio_a: number;
+  ratio_b: number;
+  specific_gravity_a: number;
+  specific_gravity_b: number;
+  isocyanate_part: 'A' | 'B';
+  free_rise_density_kg_m3: number;
+  free_rise_reference_temperature_c: number;
+  free_rise_density_slope_kg_m3_per_c: number | null;
+  ratio_tolerance_percent: number;
+  component_temperature_min_c: number | null;
+  component_temperature_max_c: number | null;
+  pot_life_s: number | null;
+  demold_time_s: number | null;
+  full_cure_time_s: number | null;
+  max_pigment_percent: number | null;
+  max_pack_factor: number | null;
+  exotherm_mass_limit_kg: number | null;
+  nco_percent: number | null;
+  hydroxyl_number_mg_koh_g: number | null;
+  water_pbw: number | null;
+  cautions_text: string | null;
+}
+
+export const REVISION_COLUMNS: readonly (keyof RevisionColumns)[] = [
+  'ratio_basis', 'ratio_a', 'ratio_b', 'specific_gravity_a', 'specific_gravity_b', 'isocyanate_part',
+  'free_rise_density_kg_m3', 'free_rise_reference_temperature_c', 'free_rise_density_slope_kg_m3_per_c',
+  'ratio_tolerance_percent', 'component_temperature_min_c', 'component_temperature_max_c', 'pot_life_s',
+  'demold_time_s', 'full_cure_time_s', 'max_pigment_percent', 'max_pack_factor', 'exotherm_mass_limit_kg',
+  'nco_percent', 'hydroxyl_number_mg_koh_g', 'water_pbw', 'cautions_text',
+];
+
+/** API fields given as `{ value, unit }`: a pointer at one of them names its value. */
+const QUANTITY_FIELDS = new Set(['freeRiseDensity', 'freeRiseReferenceTemperature', 'freeRiseDensitySlope', 'potLife', 'demoldTime', 'fullCureTime', 'exothermMassLimit']);
+const API_NAME: Record<string, string> = { packFactorLimit: 'maxPackFactor' };
+
+/**
+ * A pointer of the computation (`/system/packFactorLimit`, `/system/componentTemperatureWindow/min`)
+ * as a pointer into the request body under `base` (`/maxPackFactor`, `/componentTemperatureWindow/min/value`).
+ */
+export function systemPointer(pointer: string, base = ''): string {
+  const parts = pointer.split('/').slice(2); // '', 'system', field, ...
+  if (parts.length === 0) return base || '/';
+  const field = API_NAME[parts[0]!] ?? parts[0]!;
+  const rest = parts.slice(1);
+  const isQuantity = QUANTITY_FIELDS.has(field) || (field === 'componentTemperatureWindow' && rest.length === 1);
+  return [base, field, ...rest].join('/') + (isQuantity ? '/value' : '');
+}
+
+/** Request body → SI revision columns; every unit or sign problem is collected with its pointer. */
+export function readSystemInput(body: MaterialSystemInput, base = ''): { cols: RevisionColumns; errors: FieldError[] } {
+  const q = new QuantityReader();
+  const at = (p: string) => `${base}/${p}`;
+  const window = body.componentTemperatureWindow ?? null;
+  const cols: RevisionColumns = {
+    ratio_basis: body.ratioBasis,
+    ratio_a: body.ratio?.a,
+    ratio_b: body.ratio?.b,
+    specific_gravity_a: body.specificGravityA,
+    specific_gravity_b: body.specificGravityB,
+    isocyanate_part: body.isocyanatePart,
+    free_rise_density_kg_m3: q.read('density', body.freeRiseDensity, at('freeRiseDensity'), { positive: true }) as number,
+    free_rise_reference_temperature_c: q.read('temperature', body.freeRiseReferenceTemperature, at('freeRiseReferenceTemperature')) as number,
+    free_rise_density_slope_kg_m3_per_c: q.readDensityPerTemperature(body.freeRiseDensitySlope, at('freeRiseDensitySlope')) ?? null,
+    ratio_tolerance_percent: body.ratioTolerancePercent ?? DEFAULT_RATIO_TOLERANCE_PERCENT,
+    component_temperature_min_c: window ? (q.read('temperature', window.min, at('componentTemperatureWindow/min')) ?? null) : null,
+    component_temperature_max_c: window ? (q.read('temperature', window.max, at('componentTemperatureWindow/max')) ?? null) : null,
+    pot_life_s: q.read('time', body.potLife, at('potLife'), { nonNegative: true }) ?? null,
+    demold_time_s: q.read('time', body.demoldTime, at('demoldTime'), { nonNegative: true }) ?? null,
+    full_cure_time_s: q.read('time', body.fullCureTime, at('fullCureTime'), { nonNegative: true }) ?? null,
+    max_pigment_percent: body.maxPigmentPercent ?? null,
+    max_pack_factor: body.maxPackFactor ?? null,
+    exotherm_mass_limit_kg: q.read('mass', body.exothermMassLimit, at('exothermMassLimit'), { positive: true }) ?? null,
+    nco_percent: body.ncoPercent ?? null,
+    hydroxyl_number_mg_koh_g: body.hydroxylNumber ?? null,
+    water_pbw: body.waterPbw ?? null,
+    cautions_text: body.cautionsText?.trim() ? body.cautionsText.trim() : null,
+  };
+  const errors = [...q.errors];
+  if (errors.length === 0) {
+    try {
+      validateBatchTargetsInput({ system: parametersOf(cols), freeRiseCup: { volume: 1 } });
+    } catch (e) {
+      if (!(e instanceof BatchingInputError)) throw e;
+      errors.push(...translate(e, (p) => (p.startsWith('/system') ? systemPointer(p, base) : p)));
+    }
+  }
+  return { cols, errors };
+}
+
+/** SI revision columns → the computation's parameters. */
+export function parametersOf(r: RevisionColumns): MaterialSystemParameters {
+  const window =
+    r.component_temperature_min_c !== null && r.component_temperature_max_c !== null
+      ? { min: r.component_temperature_min_c, max: r.component_temperature_max_c }
+      : undefined;
+  return {
+    ratioBasis: r.ratio_basis,
+    ratio: { a: r.ratio_a, b: r.ratio_b },
+    specificGravityA: r.specific_gravity_a,
+    specificGravityB: r.specific_gravity_b,
+    isocyanatePart: r.isocyanate_part,
+    freeRiseDensity: r.free_rise_density_kg_m3,
+    freeRiseReferenceTemperature: r.free_rise_reference_temperature_c,
+    freeRiseDensitySlope: opt(r.free_rise_density_slope_kg_m3_per_c),
+    ratioTolerancePercent: r.ratio_tolerance_percent,
+    componentTemperatureWindow: window,
+    potLife: opt(r.pot_life_s),
+    demoldTime: opt(r.demold_time_s),
+    fullCureTime: opt(r.full_cure_time_s),
+    maxPigmentPercent: opt(r.max_pigment_percent),
+    ncoPercent: opt(r.nco_percent),
+    hydroxylNumber: opt(r.hydroxyl_number_mg_koh_g),
+    waterPbw: opt(r.water_pbw),
+    packFactorLimit: opt(r.max_pack_factor),
+    exothermMassLimit: opt(r.exotherm_mass_limit_kg),
+    cautionsText: opt(r.cautions_text),
+  };
+}
+
+/** True when two revisions pin down the same parameters (a PUT that changes none writes no revision). */
+export function sameParameters(a: RevisionColumns, b: RevisionColumns): boolean {
+  return REVISION_COLUMNS.every((k) => (a[k] ?? null) === (b[k] ?? null));
+}
+
+/** The parameters as the API shows them: SI, each field named with its unit. */
+export function parametersView(r: RevisionColumns) {
+  const derived = computeBatchTargets({ system: parametersOf(r), freeRiseCup: { volume: 0.001 } });
+  return {
+    ratioBasis: r.ratio_basis,
+    ratio: { a: r.ratio_a, b: r.ratio_b },
+    specificGravityA: r.specific_gravity_a,
+    specificGravityB: r.specific_gravity_b,
+    isocyanatePart: r.isocyanate_part,
+    freeRiseDensityKgM3: r.free_rise_density_kg_m3,
+    freeRiseReferenceTemperatureC: r.free_rise_reference_temperature_c,
+    freeRiseDensitySlopeKgM3PerC: r.free_rise_density_slope_kg_m3_per_c,
+    ratioTolerancePercent: r.ratio_tolerance_percent,
+    componentTemperatureMinC: r.component_temperature_min_c,
+    componentTemperatureMaxC: r.component_temperature_max_c,
+    potLifeS: r.pot_life_s,
+    demoldTimeS: r.demold_time_s,
+    fullCureTimeS: r.full_cure_time_s,
+    maxPigmentPercent: r.max_pigment_percent,
+    maxPackFactor: r.max_pack_factor,
+    exothermMassLimitKg: r.exotherm_mass_limit_kg,
+    ncoPercent: r.nco_percent,
+    hydroxylNumberMgKohG: r.hydroxyl_number_mg_koh_g,
+    waterPbw: r.water_pbw,
+    cautionsText: r.cautions_text,
+    /** Worked out from the parameters by the computation. */
+    derived: {
+      weightRatio: derived.weightRatio,
+      volumeRatio: derived.volumeRatio,
+      isocyanateIndex: derived.isocyanateIndex?.value ?? null,
+    },
+  };
+}
