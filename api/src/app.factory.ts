@@ -80,7 +80,8 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
     maxAge: 600,
   });
   app.setGlobalPrefix('v1');
-  app.useGlobalFilters(new ProblemDetailsFilter(routes));
+  // the filter logs through this app's own logger (Nest's static Logger follows the newest app)
+  app.useGlobalFilters(new ProblemDetailsFilter(routes, { error: (msg: unknown, stack?: unknown) => logger.error({ context: 'ProblemDetails', stack }, String(msg)) }));
   app.enableShutdownHooks();
 
   const doc = buildOpenApiDocument(app);

@@ -7,6 +7,16 @@ import { ProblemsController } from './common/problems.controller.js';
 import { validateEnv } from './config/env.js';
 import { workerEnabled } from './config/process-role.js';
 import { DevicesModule } from './devices/devices.module.js';
+import { BatchesModule } from './batches/batches.module.js';
+import { DocumentsModule } from './documents/documents.module.js';
+import { LotsModule } from './lots/lots.module.js';
+import { MaterialsModule } from './materials/materials.module.js';
+import { MoldsModule } from './molds/molds.module.js';
+import { QcCupTestsModule } from './qc-cup-tests/qc-cup-tests.module.js';
+import { TargetsModule } from './targets/targets.module.js';
+import { WorkOrdersModule } from './work-orders/work-orders.module.js';
+import { EventsModule } from './events/events.module.js';
+import { WebhooksModule } from './webhooks/webhooks.module.js';
 import { DatabaseModule } from './database/database.module.js';
 import { HealthModule } from './health/health.module.js';
 import { MailModule } from './mail/mail.module.js';
@@ -33,6 +43,16 @@ export class AppModule {
         ApiKeysModule,
         AuthModule,
         DevicesModule,
+        MaterialsModule,
+        DocumentsModule,
+        LotsModule,
+        MoldsModule,
+        WorkOrdersModule,
+        TargetsModule,
+        BatchesModule,
+        QcCupTestsModule,
+        EventsModule,
+        WebhooksModule.forRoot(),
         HealthModule,
       ],
       controllers: [ProblemsController],

@@ -4,6 +4,7 @@ import { ACTIONS, type Action, type ActionRule, API_KEY_SCOPES, ROLES, type Role
 import { sha256 } from '../../api/src/auth/tokens.service.js';
 import { closeTestDb, makeOrg, type OrgFixture, testDb, tokensFor } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/app.js';
+import { shopFixtures } from './support/shop.js';
 
 /**
  * Every route of the OpenAPI document × every role × (own organization, other organization),
@@ -31,7 +32,19 @@ const fixtures: Record<string, (org: OrgFixture) => Promise<string>> = {
   invitations: async (org) => (await testDb()('invitations').insert({ organization_id: org.id, email: `inv-${randomUUID()}@fixture.test`, role: 'viewer', token_hash: sha256(randomUUID()), expires_at: new Date(Date.now() + 3600_000) }).returning('id'))[0].id,
   'api-keys': async (org) => (await testDb()('api_keys').insert({ organization_id: org.id, name: 'foreign', kind: 'device', environment: 'live', scopes: ['devices:read'], prefix: 'pgd_live_xxxxxxx', secret_hash: sha256(randomUUID()) }).returning('id'))[0].id,
   devices: async (org) => (await testDb()('devices').insert({ organization_id: org.id, kind: 'thermometer', serial: `F-${randomUUID()}`, name: 'foreign probe' }).returning('id'))[0].id,
+  ...shopFixtures,
+  'webhook-endpoints': async (org) => (await foreignEndpoint(org)).id,
+  'webhook-deliveries': async (org) => {
+    const ep = await foreignEndpoint(org);
+    const [ev] = await testDb()('events').insert({ organization_id: org.id, type: 'batch.created', subject_type: 'batch', subject_id: 'x', payload: '{}', relayed_at: new Date() }).returning('id');
+    return (await testDb()('webhook_deliveries').insert({ organization_id: org.id, endpoint_id: ep.id, event_id: ev.id, event_type: 'batch.created', status: 'dead' }).returning('id'))[0].id;
+  },
 };
+
+async function foreignEndpoint(org: OrgFixture): Promise<{ id: string }> {
+  const [row] = await testDb()('webhook_endpoints').insert({ organization_id: org.id, url: 'https://erp.invalid/hooks', secret_enc: 'v1.x.x.x' }).returning('id');
+  return row;
+}
 
 const collectionOf = (path: string) => path.replace(/^\/v1\//, '').split('/')[0];
 

@@ -29,6 +29,13 @@ export const envSchema = {
     SIGNIN_LOCK_SECONDS: { type: 'integer', minimum: 1, default: 900 },
     SIGNIN_IP_LIMIT_PER_MINUTE: { type: 'integer', minimum: 1, default: 30 },
     RATE_LIMIT_NAMESPACE: { type: 'string', default: 'pourgate-rl:' },
+    SECRETS_KEY: { type: 'string', minLength: 16, default: 'development-only-secrets-key' },
+    WEBHOOK_ALLOWED_HOSTS: { type: 'string', default: '' },
+    WEBHOOK_RETRY_SCHEDULE: { type: 'string', pattern: '^\\s*\\d+(\\.\\d+)?(\\s*,\\s*\\d+(\\.\\d+)?)*\\s*$', default: '0,5,300,1800,7200,18000,36000,50400,72000,86400' },
+    WEBHOOK_TIMEOUT_MS: { type: 'integer', minimum: 100, maximum: 60000, default: 15000 },
+    WEBHOOK_RELAY_INTERVAL_MS: { type: 'integer', minimum: 20, maximum: 60000, default: 250 },
+    OUTBOX_RELAY: { enum: ['on', 'off'], default: 'on' },
+    QUEUE_PREFIX: { type: 'string', pattern: '^[A-Za-z0-9:_-]+$', default: 'bull' },
   },
   required: ['DATABASE_URL', 'REDIS_URL'],
 } as const;
@@ -56,6 +63,13 @@ export interface Env {
   SIGNIN_LOCK_SECONDS: number;
   SIGNIN_IP_LIMIT_PER_MINUTE: number;
   RATE_LIMIT_NAMESPACE: string;
+  SECRETS_KEY: string;
+  WEBHOOK_ALLOWED_HOSTS: string;
+  WEBHOOK_RETRY_SCHEDULE: string;
+  WEBHOOK_TIMEOUT_MS: number;
+  WEBHOOK_RELAY_INTERVAL_MS: number;
+  OUTBOX_RELAY: 'on' | 'off';
+  QUEUE_PREFIX: string;
 }
 
 const ajv = new Ajv({ coerceTypes: true, useDefaults: true, allErrors: true });
@@ -76,6 +90,9 @@ export function validateEnv(raw: Record<string, unknown>): Env {
   const env = picked as unknown as Env;
   if (env.NODE_ENV === 'production' && env.JWT_SECRET === envSchema.properties.JWT_SECRET.default) {
     throw new Error('Invalid configuration:\n  JWT_SECRET: must be set to a secret of your own in production');
+  }
+  if (env.NODE_ENV === 'production' && env.SECRETS_KEY === envSchema.properties.SECRETS_KEY.default) {
+    throw new Error('Invalid configuration:\n  SECRETS_KEY: must be set to a secret of your own in production');
   }
   return { ...raw, ...env } as Env;
 }

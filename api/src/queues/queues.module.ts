@@ -56,6 +56,7 @@ class RedisShutdown implements OnApplicationShutdown {
       inject: [ConfigService],
       useFactory: (config: ConfigService<Env, true>) => ({
         createClient: bullRedisFactory(config.get('REDIS_URL', { infer: true })),
+        prefix: config.get('QUEUE_PREFIX', { infer: true }),
         defaultJobOptions: { removeOnComplete: 1000, removeOnFail: 5000 },
       }),
     }),

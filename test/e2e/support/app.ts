@@ -22,10 +22,17 @@ export interface TestApp {
   close(): Promise<void>;
 }
 
-/** The real application on the test PostgreSQL and Redis that `npm test` started. */
+let appCount = 0;
+
+/**
+ * The real application on the test PostgreSQL and Redis that `npm test` started. Test apps serve
+ * HTTP only unless a suite asks for workers (PROCESS_ROLE: 'all'); each has a queue prefix of its
+ * own, so suites running side by side never take each other's jobs.
+ */
 export async function startTestApp(env: Record<string, string> = {}): Promise<TestApp> {
   const saved: Record<string, string | undefined> = {};
-  for (const [k, v] of Object.entries({ LOG_LEVEL: 'info', ...env })) {
+  const prefix = `test-${process.pid}-${++appCount}`;
+  for (const [k, v] of Object.entries({ LOG_LEVEL: 'info', PROCESS_ROLE: 'api', QUEUE_PREFIX: prefix, ...env })) {
     saved[k] = process.env[k];
     process.env[k] = v;
   }

@@ -82,9 +82,7 @@ export function toProblem(exception: unknown, req: FastifyRequest, routes?: Rout
 
 @Catch()
 export class ProblemDetailsFilter implements ExceptionFilter {
-  private readonly logger = new Logger('ProblemDetails');
-
-  constructor(private readonly routes?: RouteTable) {}
+  constructor(private readonly routes?: RouteTable, private readonly logger: Pick<Logger, 'error'> = new Logger('ProblemDetails')) {}
 
   catch(exception: unknown, host: ArgumentsHost): void {
     const ctx = host.switchToHttp();

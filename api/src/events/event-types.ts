@@ -1,0 +1,21 @@
+/**
+ * Every event type Pourgate emits, as `<subject>.<what happened>` in the past tense. Each has a
+ * JSON Schema for its `data` in schemas/event.<type>.schema.json (embedded in the OpenAPI document).
+ */
+export const EVENT_TYPES = {
+  'webhook.test': 'A test event sent from POST /v1/webhook-endpoints/{id}/test',
+  'reading.accepted': 'A reading was judged within every tolerance',
+  'reading.rejected': 'A reading was judged outside a tolerance; the reasons say which and by how much',
+  'reading.waived': 'An engineer accepted a rejected reading anyway, with a note',
+  'reading.upheld': 'An engineer confirmed a rejection',
+  'batch.created': 'A batch was planned and its targets computed',
+  'batch.state_changed': 'A batch moved from one state to another',
+  'batch.released': 'A batch was released: every rejection waived or none',
+  'batch.on_hold': 'A batch was put on hold pending review',
+  'batch.scrapped': 'A batch was scrapped',
+  'work_order.created': 'A work order arrived (from the ERP or an engineer)',
+  'work_order.changed': 'A work order was changed',
+} as const;
+
+export type EventType = keyof typeof EVENT_TYPES;
+export const EVENT_TYPE_NAMES = Object.keys(EVENT_TYPES) as EventType[];

@@ -1,0 +1,82 @@
+import { Inject, Injectable, Logger, OnApplicationBootstrap, OnApplicationShutdown } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import type { Knex } from 'knex';
+import type { Env } from '../config/env.js';
+import { KNEX } from '../database/database.module.js';
+import { WebhooksService } from './webhooks.service.js';
+
+/**
+ * The outbox relay (worker processes): turns new event rows into one delivery row per matching
+ * endpoint and queues them. Rows are claimed with SKIP LOCKED, so any number of workers can run
+ * it. A sweep re-queues deliveries whose job was lost (Redis restarted empty).
+ */
+@Injectable()
+export class RelayService implements OnApplicationBootstrap, OnApplicationShutdown {
+  private readonly logger = new Logger('OutboxRelay');
+  private timer?: NodeJS.Timeout;
+  private sweepTimer?: NodeJS.Timeout;
+  private running = false;
+  private stopped = false;
+
+  constructor(@Inject(KNEX) private readonly db: Knex, private readonly webhooks: WebhooksService, private readonly config: ConfigService<Env, true>) {}
+
+  onApplicationBootstrap(): void {
+    if (this.config.get('OUTBOX_RELAY', { infer: true }) === 'off') return;
+    const every = this.config.get('WEBHOOK_RELAY_INTERVAL_MS', { infer: true });
+    this.timer = setInterval(() => void this.tick(), every);
+    this.sweepTimer = setInterval(() => void this.sweep().catch((e: Error) => this.logger.warn(`sweep failed: ${e.message}`)), 15_000);
+    void this.sweep().catch(() => undefined);
+  }
+
+  async onApplicationShutdown(): Promise<void> {
+    this.stopped = true;
+    clearInterval(this.timer);
+    clearInterval(this.sweepTimer);
+    while (this.running) await new Promise((r) => setTimeout(r, 20));
+  }
+
+  private async tick(): Promise<void> {
+    if (this.running || this.stopped) return;
+    this.running = true;
+    try {
+      while (!this.stopped && (await this.relayBatch()) > 0);
+    } catch (e) {
+      this.logger.warn(`relay paused: ${(e as Error).message}`);
+    } finally {
+      this.running = false;
+    }
+  }
+
+  /** One claim-and-fan-out round; returns how many events it took. */
+  async relayBatch(limit = 200): Promise<number> {
+    const created = await this.db.transaction(async (trx) => {
+      const events = await trx('events').whereNull('relayed_at').orderBy('seq').limit(limit).forUpdate().skipLocked().select('id', 'seq', 'organization_id', 'type');
+      if (!events.length) return null;
+      const orgs = [...new Set(events.map((e) => e.organization_id))];
+      const endpoints = await trx('webhook_endpoints').whereIn('organization_id', orgs).where({ enabled: true }).select('id', 'organization_id', 'event_types');
+      const rows = events.flatMap((ev) =>
+        endpoints
+          .filter((ep) => ep.organization_id === ev.organization_id && (ep.event_types.length === 0 || ep.event_types.includes(ev.type)))
+          .map((ep) => ({ organization_id: ev.organization_id, endpoint_id: ep.id, event_id: ev.id, event_type: ev.type })),
+      );
+      const inserted = rows.length ? await trx('webhook_deliveries').insert(rows).onConflict(['endpoint_id', 'event_id']).ignore().returning(['id', 'endpoint_id', 'event_id']) : [];
+      await trx('events').whereIn('id', events.map((e) => e.id)).update({ relayed_at: trx.fn.now() });
+      return { count: events.length, inserted };
+    });
+    if (!created) return 0;
+    for (const d of created.inserted) await this.webhooks.enqueue(d.id, d.endpoint_id, d.event_id);
+    return created.count;
+  }
+
+  /** Deliveries the database says are waiting but that may have no job in Redis. */
+  async sweep(): Promise<number> {
+    const stale = await this.db('webhook_deliveries')
+      .where((q) => q.where('status', 'pending').andWhere('updated_at', '<', this.db.raw("now() - interval '10 seconds'")))
+      .orWhere((q) => q.where('status', 'delivering').andWhere('updated_at', '<', this.db.raw("now() - interval '2 minutes'")))
+      .orWhere((q) => q.where('status', 'retrying').andWhere('next_attempt_at', '<', this.db.raw("now() - interval '2 minutes'")))
+      .limit(1000)
+      .select('id', 'endpoint_id', 'event_id');
+    for (const d of stale) await this.webhooks.enqueue(d.id, d.endpoint_id, d.event_id);
+    return stale.length;
+  }
+}
