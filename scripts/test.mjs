@@ -36,6 +36,36 @@ const env = {
 };
 
 const results = [];
+
+/** The browser suite: the real API (serving the built console) on the test database, driven by Chromium. */
+async function browserSuite() {
+  const { spawn } = await import('node:child_process');
+  const port = Number(process.env.TEST_BROWSER_PORT ?? 3291);
+  const smtpPort = 55093;
+  const mailPort = 55094;
+  const catcher = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'fakes/src/smtp-catcher.ts'), '--smtp-port', String(smtpPort), '--http-port', String(mailPort)], { cwd: ROOT, env, stdio: 'ignore' });
+  const api = spawn(process.execPath, ['--import', '@swc-node/register/esm-register', path.join(ROOT, 'api/src/main.ts')], {
+    cwd: ROOT,
+    stdio: ['ignore', 'ignore', 'inherit'],
+    env: { ...env, PORT: String(port), PUBLIC_URL: `http://127.0.0.1:${port}`, SMTP_URL: `smtp://127.0.0.1:${smtpPort}`, LOG_LEVEL: 'warn', QUEUE_PREFIX: 'browser-suite', CORS_ORIGINS: `http://127.0.0.1:${port}` },
+  });
+  try {
+    let up = false;
+    for (let i = 0; i < 120 && !up; i++) {
+      await new Promise((r) => setTimeout(r, 500));
+      up = await fetch(`http://127.0.0.1:${port}/v1/health`).then((r) => r.ok).catch(() => false);
+    }
+    if (!up) {
+      results.push({ name: 'browser suite (API did not start)', ok: false, seconds: '-' });
+      return;
+    }
+    step('browser suite: Chromium against the built console and the real API', process.execPath, [path.join(ROOT, 'test/browser/run.mjs')], { BASE_URL: `http://127.0.0.1:${port}`, MAIL_URL: `http://127.0.0.1:${mailPort}` });
+  } finally {
+    api.kill('SIGTERM');
+    catcher.kill('SIGTERM');
+    await new Promise((r) => setTimeout(r, 500));
+  }
+}
 function step(name, cmd, args, extraEnv = {}) {
   const t0 = Date.now();
   log(`── ${name}`);
@@ -49,12 +79,20 @@ try {
   const reset = runTs(path.join(ROOT, 'scripts/db.ts'), ['reset'], env);
   const seeded = reset.status === 0 && runTs(path.join(ROOT, 'scripts/db.ts'), ['seed'], env).status === 0;
   results.push({ name: 'database reset, migrations, demo seed', ok: seeded, seconds: '-' });
+  if (seeded && process.argv.length <= 2) {
+    // the console: its types, its component tests, its production build and the bundle budget
+    step('console: typecheck', process.execPath, [path.join(ROOT, 'node_modules/typescript/bin/tsc'), '-p', 'admin', '--noEmit']);
+    step('console: vitest component tests', process.execPath, [path.join(ROOT, 'node_modules/vitest/vitest.mjs'), 'run', '--root', 'admin'], { NODE_ENV: 'test' });
+    const built = step('console: production build', 'npm', ['run', 'build', '-w', 'admin'], { NODE_ENV: 'production' });
+    if (built) step('console: first-page bundle within 250 kB gzip', 'npm', ['run', 'size', '-w', 'admin']);
+  }
   if (seeded) {
     step('typecheck (tsc --noEmit)', process.execPath, [path.join(ROOT, 'node_modules/typescript/bin/tsc'), '-p', 'api', '--noEmit']);
     step('jest: unit, reference and e2e suites', process.execPath, [
       '--experimental-vm-modules', path.join(ROOT, 'node_modules/jest/bin/jest.js'), '--maxWorkers=2', ...process.argv.slice(2),
     ], { NODE_OPTIONS: '--experimental-vm-modules --no-warnings' });
   }
+  if (results.find((r) => r.name === 'console: production build')?.ok) await browserSuite();
 } finally {
   for (const stop of stops.reverse()) stop();
 }

@@ -1,0 +1,153 @@
+import ComputerOutlined from '@mui/icons-material/DnsOutlined';
+import KeyOutlined from '@mui/icons-material/KeyOutlined';
+import PersonOutline from '@mui/icons-material/PersonOutline';
+import HelpOutline from '@mui/icons-material/HelpOutline';
+import { Box, Typography } from '@mui/material';
+import { useMemo } from 'react';
+import { DataTable, DateInput, List, SelectInput, TextInput, useGetList, useRecordContext } from 'react-admin';
+import ReceiptLongOutlined from '@mui/icons-material/ReceiptLongOutlined';
+import { EmptyState } from '../common/EmptyState';
+import { Guarded } from '../common/Guarded';
+import { PageHeader } from '../common/PageHeader';
+import { RelativeTime } from '../common/RelativeTime';
+import { dayEndIso, dayStartIso, formatDateTime, isoToDay } from '../format/dates';
+import { monoFont } from '../theme';
+import type { ActorType, AuditEvent, User } from '../types';
+import { ACTOR_LABEL, detailRows } from './auditFormat';
+
+const ACTOR_ICON: Record<ActorType, typeof PersonOutline> = {
+  user: PersonOutline,
+  api_key: KeyOutlined,
+  system: ComputerOutlined,
+  anonymous: HelpOutline,
+};
+
+/** People to filter by; a plain list (not a reference input) so no by-id lookups are needed. */
+function ActorFilter(props: { source: string; label: string; alwaysOn?: boolean }) {
+  const { data } = useGetList<User>('users', { pagination: { page: 1, perPage: 200 }, sort: { field: 'name', order: 'ASC' } });
+  const choices = useMemo(() => (data ?? []).map((u) => ({ id: u.id, name: u.name })), [data]);
+  return <SelectInput {...props} choices={choices} emptyText="Anyone" />;
+}
+
+const filters = [
+  <TextInput key="action" source="action" label="Action" alwaysOn placeholder="e.g. api_key.revoked" resettable />,
+  <ActorFilter key="actorId" source="actorId" label="Person" alwaysOn />,
+  <DateInput key="from" source="createdAt_gte" label="From" alwaysOn parse={dayStartIso} format={isoToDay} />,
+  <DateInput key="to" source="createdAt_lte" label="To" alwaysOn parse={dayEndIso} format={isoToDay} />,
+];
+
+function ActorCell() {
+  const e = useRecordContext<AuditEvent>();
+  if (!e) return null;
+  const Icon = ACTOR_ICON[e.actorType] ?? HelpOutline;
+  return (
+    <Box sx={{ display: 'flex', gap: 1, alignItems: 'center' }}>
+      <Icon sx={{ fontSize: 18, color: 'text.secondary' }} aria-hidden />
+      <Box>
+        <Typography variant="body2">{e.actorLabel ?? ACTOR_LABEL[e.actorType] ?? e.actorType}</Typography>
+        <Typography variant="caption" color="text.secondary">
+          {ACTOR_LABEL[e.actorType] ?? e.actorType}
+        </Typography>
+      </Box>
+    </Box>
+  );
+}
+
+function ActionCell() {
+  const e = useRecordContext<AuditEvent>();
+  if (!e) return null;
+  return (
+    <Box component="code" sx={{ fontFamily: monoFont, fontSize: '0.8rem', bgcolor: '#eef3f3', color: '#0b4a53', px: 0.75, py: 0.25, borderRadius: 0.5 }}>
+      {e.action}
+    </Box>
+  );
+}
+
+function TargetCell() {
+  const e = useRecordContext<AuditEvent>();
+  if (!e || !e.targetType) return <span>—</span>;
+  return (
+    <Box>
+      <Typography variant="body2">{e.targetType}</Typography>
+      {e.targetId ? (
+        <Typography variant="caption" color="text.secondary" sx={{ fontFamily: monoFont }} title={e.targetId}>
+          {e.targetId.length > 14 ? `${e.targetId.slice(0, 13)}…` : e.targetId}
+        </Typography>
+      ) : null}
+    </Box>
+  );
+}
+
+function EventDetails() {
+  const e = useRecordContext<AuditEvent>();
+  if (!e) return null;
+  const rows = [
+    { key: 'event id', value: e.id },
+    { key: 'at', value: `${formatDateTime(e.createdAt)} (${e.createdAt})` },
+    { key: 'actor id', value: e.actorId ?? '—' },
+    { key: 'target id', value: e.targetId ?? '—' },
+    ...detailRows(e.details),
+  ];
+  return (
+    <Box sx={{ py: 1.5, px: 1, bgcolor: '#fbfaf7' }} data-testid="audit-details">
+      <Box component="dl" sx={{ display: 'grid', gridTemplateColumns: 'minmax(120px, max-content) 1fr', columnGap: 3, rowGap: 0.5, m: 0 }}>
+        {rows.map((r) => (
+          <Box key={r.key} sx={{ display: 'contents' }}>
+            <Typography component="dt" variant="caption" color="text.secondary" sx={{ fontFamily: monoFont, pt: '2px' }}>
+              {r.key}
+            </Typography>
+            <Typography component="dd" variant="body2" sx={{ m: 0, fontFamily: monoFont, fontSize: '0.8rem', wordBreak: 'break-all' }}>
+              {r.value}
+            </Typography>
+          </Box>
+        ))}
+      </Box>
+    </Box>
+  );
+}
+
+function NoEvents() {
+  return (
+    <EmptyState icon={ReceiptLongOutlined} title="Nothing recorded yet">
+      Sign-ins, keys issued or revoked, role changes and invitations appear here as they happen.
+    </EmptyState>
+  );
+}
+
+export default function AuditListPage() {
+  return (
+    <Guarded resource="audit-events">
+      <AuditList />
+    </Guarded>
+  );
+}
+
+function AuditList() {
+  return (
+    <>
+      <PageHeader title="Audit log" lead="Every sign-in, key, role and setting change, with who did it and from where. Entries cannot be edited or removed." />
+      <List resource="audit-events" title="Audit log" filters={filters} actions={false} empty={<NoEvents />} sort={{ field: 'createdAt', order: 'DESC' }} perPage={50} storeKey="audit.list">
+        <DataTable bulkActionButtons={false} rowClick="expand" expand={<EventDetails />}>
+          <DataTable.Col
+            source="createdAt"
+            label="When"
+            render={(e: AuditEvent) => (
+              <Box>
+                <Typography variant="body2" sx={{ whiteSpace: 'nowrap' }}>
+                  {formatDateTime(e.createdAt)}
+                </Typography>
+                <Typography variant="caption" color="text.secondary">
+                  <RelativeTime value={e.createdAt} />
+                </Typography>
+              </Box>
+            )}
+          />
+          <DataTable.Col label="Actor" disableSort field={ActorCell} />
+          <DataTable.Col source="action" label="Action" field={ActionCell} />
+          <DataTable.Col label="Target" disableSort field={TargetCell} />
+          <DataTable.Col source="ip" label="From" disableSort render={(e: AuditEvent) => <span style={{ fontFamily: monoFont, fontSize: '0.8rem' }}>{e.ip ?? '—'}</span>} />
+        </DataTable>
+      </List>
+    </>
+  );
+}

@@ -1,0 +1,3 @@
+import { lazy } from 'react';
+
+export const Dashboard = lazy(() => import('./Dashboard'));

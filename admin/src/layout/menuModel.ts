@@ -1,0 +1,59 @@
+import type { Action } from '@pourgate/permissions';
+import { knownActions } from '../auth/access';
+
+export interface MenuLink {
+  id: string;
+  label: string;
+  /** A console route (hash router path) or, with `external`, a same-origin URL. */
+  to: string;
+  requires: Action;
+  external?: boolean;
+}
+
+export interface MenuSection {
+  id: string;
+  label: string;
+  links: MenuLink[];
+}
+
+/**
+ * Every entry of the side menu and the action it needs. A person sees a section only when they
+ * hold at least one of its entries; later pages (shop floor, webhooks) add entries here.
+ */
+export const MENU: readonly MenuSection[] = [
+  {
+    id: 'home',
+    label: 'Workspace',
+    links: [{ id: 'overview', label: 'Overview', to: '/', requires: 'profile:read' }],
+  },
+  {
+    id: 'access',
+    label: 'Access',
+    links: [
+      { id: 'users', label: 'People', to: '/users', requires: 'people:read' },
+      { id: 'invitations', label: 'Invitations', to: '/invitations', requires: 'people:read' },
+      { id: 'audit-events', label: 'Audit log', to: '/audit-events', requires: 'audit:read' },
+    ],
+  },
+  {
+    id: 'integration',
+    label: 'Integration',
+    links: [
+      { id: 'api-keys', label: 'API keys', to: '/api-keys', requires: 'api-keys:read' },
+      { id: 'docs', label: 'API reference', to: '/docs', requires: 'api-keys:read', external: true },
+    ],
+  },
+];
+
+/** The sections and entries a person holding `actions` sees, in menu order. */
+export function menuFor(actions: readonly unknown[] | null | undefined, menu: readonly MenuSection[] = MENU): MenuSection[] {
+  const held = knownActions(actions);
+  return menu
+    .map((section) => ({ ...section, links: section.links.filter((l) => held.has(l.requires)) }))
+    .filter((section) => section.links.length > 0);
+}
+
+/** Flat list of entry labels, handy for tests and the browser suite's expectations. */
+export function menuLabels(actions: readonly unknown[] | null | undefined): string[] {
+  return menuFor(actions).flatMap((s) => s.links.map((l) => l.label));
+}

@@ -1,0 +1,10 @@
+import { lazy } from 'react';
+import { menuIcons } from '../layout/icons';
+import type { User } from '../types';
+
+export default {
+  list: lazy(() => import('./UserList')),
+  icon: menuIcons.users,
+  recordRepresentation: (u: User) => u.name,
+  options: { label: 'People' },
+};
