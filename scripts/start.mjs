@@ -32,6 +32,17 @@ if (!env.SMTP_URL && env.NODE_ENV !== 'production') {
   env.SMTP_URL = `smtp://127.0.0.1:${smtpPort}`;
   mailPage = `http://127.0.0.1:${httpPort}/`;
 }
+if (!env.S3_ENDPOINT && !env.DOCUMENTS_DIR && env.NODE_ENV !== 'production') {
+  // documents (SDS/TDS) go through the S3 API; in development into the local stand-in
+  const s3Port = Number(process.env.OBJECT_STORE_PORT ?? 55095);
+  const store = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'fakes/src/object-store.ts'), '--port', String(s3Port), '--dir', path.join(ROOT, '.data/objects')], { cwd: ROOT, env, stdio: 'inherit' });
+  stops.push(() => store.kill('SIGTERM'));
+  env.S3_ENDPOINT = `http://127.0.0.1:${s3Port}`;
+}
+if (!env.WEBHOOK_ALLOWED_HOSTS && env.NODE_ENV === 'development') {
+  // the local fakes (ERP receiver) listen on loopback; production allows public addresses only
+  env.WEBHOOK_ALLOWED_HOSTS = '127.0.0.1,localhost';
+}
 const stopServices = () => { for (const s of stops.splice(0).reverse()) s(); };
 
 if (runTs(path.join(ROOT, 'scripts/db.ts'), ['migrate'], env).status !== 0) { stopServices(); fail('migrations failed'); }

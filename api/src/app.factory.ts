@@ -31,7 +31,6 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
     genReqId,
     bodyLimit: env.BODY_LIMIT_BYTES,
     trustProxy: false,
-    disableRequestLogging: false,
   });
   const routes = new RouteTable();
   routes.attach(adapter.getInstance());
@@ -58,6 +57,7 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
   // Per-address throttle for the routes that opt in (sign-in, refresh), shared by every API
   // process through Redis. Failed sign-ins are also counted per account (TokensService).
   const rateRedis = new Redis(env.REDIS_URL, { maxRetriesPerRequest: 1, enableOfflineQueue: false, connectTimeout: 2000 });
+  rateRedis.on('error', () => undefined); // an outage shows in /v1/ready; throttling skips meanwhile (skipOnError)
   fastify.addHook('onClose', async () => rateRedis.disconnect());
   await app.register(rateLimit as never, {
     global: false,

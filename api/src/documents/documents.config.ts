@@ -1,6 +1,7 @@
 import { Ajv } from 'ajv';
 import path from 'node:path';
 import { PROJECT_ROOT } from '../config/paths.js';
+import type { S3Settings } from './s3-document-store.js';
 
 /** Settings of the documents feature, validated when the module starts (a bad value stops the boot). */
 export interface DocumentsConfig {
@@ -8,6 +9,8 @@ export interface DocumentsConfig {
   dir: string;
   /** Largest PDF accepted, bytes. */
   maxBytes: number;
+  /** S3-compatible object storage; when S3_ENDPOINT is set it is used instead of the folder. */
+  s3: S3Settings | null;
 }
 
 const schema = {
@@ -15,6 +18,12 @@ const schema = {
   properties: {
     DOCUMENTS_DIR: { type: 'string', minLength: 1 },
     DOCUMENT_MAX_BYTES: { type: 'integer', minimum: 1024, maximum: 104857600, default: 20971520 },
+    S3_ENDPOINT: { type: 'string', pattern: '^https?://' },
+    S3_BUCKET: { type: 'string', minLength: 3, default: 'pourgate-documents' },
+    S3_REGION: { type: 'string', default: 'us-east-1' },
+    S3_ACCESS_KEY_ID: { type: 'string', default: 'pourgate-local' },
+    S3_SECRET_ACCESS_KEY: { type: 'string', default: 'pourgate-local-secret' },
+    S3_FORCE_PATH_STYLE: { type: 'boolean', default: true },
   },
 } as const;
 const check = new Ajv({ coerceTypes: true, useDefaults: true, allErrors: true }).compile(schema);
@@ -29,5 +38,15 @@ export function documentsConfig(env: Record<string, string | undefined> = proces
     throw new Error(`Invalid configuration:\n${lines.join('\n')}`);
   }
   const dir = (picked.DOCUMENTS_DIR as string | undefined) ?? path.join(PROJECT_ROOT, '.data', 'documents');
-  return { dir: path.resolve(dir), maxBytes: picked.DOCUMENT_MAX_BYTES as number };
+  const s3 = picked.S3_ENDPOINT
+    ? {
+        endpoint: picked.S3_ENDPOINT as string,
+        bucket: picked.S3_BUCKET as string,
+        region: picked.S3_REGION as string,
+        accessKeyId: picked.S3_ACCESS_KEY_ID as string,
+        secretAccessKey: picked.S3_SECRET_ACCESS_KEY as string,
+        forcePathStyle: picked.S3_FORCE_PATH_STYLE as boolean,
+      }
+    : null;
+  return { dir: path.resolve(dir), maxBytes: picked.DOCUMENT_MAX_BYTES as number, s3 };
 }

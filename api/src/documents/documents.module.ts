@@ -3,6 +3,7 @@ import { MultipartModule } from '@nestjs/platform-fastify/multipart';
 import { DocumentsController } from './documents.controller.js';
 import { documentsConfig, DOCUMENTS_CONFIG, type DocumentsConfig } from './documents.config.js';
 import { DOCUMENT_STORE, FilesystemDocumentStore } from './document-store.js';
+import { S3DocumentStore } from './s3-document-store.js';
 import { DocumentsService } from './documents.service.js';
 
 @Module({
@@ -13,7 +14,7 @@ import { DocumentsService } from './documents.service.js';
   controllers: [DocumentsController],
   providers: [
     { provide: DOCUMENTS_CONFIG, useFactory: () => documentsConfig() },
-    { provide: DOCUMENT_STORE, inject: [DOCUMENTS_CONFIG], useFactory: (cfg: DocumentsConfig) => new FilesystemDocumentStore(cfg.dir) },
+    { provide: DOCUMENT_STORE, inject: [DOCUMENTS_CONFIG], useFactory: (cfg: DocumentsConfig) => (cfg.s3 ? new S3DocumentStore(cfg.s3) : new FilesystemDocumentStore(cfg.dir)) },
     DocumentsService,
   ],
   exports: [DocumentsService],

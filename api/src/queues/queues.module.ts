@@ -34,7 +34,10 @@ export const REDIS = Symbol('REDIS');
 
 /** A plain Redis client for counters and locks: fails fast (no offline queue) when Redis is down. */
 export function createRedis(url: string): Redis {
-  return new Redis(url, { maxRetriesPerRequest: 1, enableOfflineQueue: false, lazyConnect: false, connectTimeout: 2000 });
+  const r = new Redis(url, { maxRetriesPerRequest: 1, enableOfflineQueue: false, lazyConnect: false, connectTimeout: 2000 });
+  // reconnects by itself; an outage shows in /v1/ready and in the callers' own warnings
+  r.on('error', () => undefined);
+  return r;
 }
 
 @Injectable()
