@@ -127,3 +127,20 @@ describe('work order rules', () => {
     expectProblem(await t.http.put(`/v1/work-orders/${mine}`).set('authorization', otherAuth.engineer).send({ state: 'cancelled' }), 404);
   });
 });
+
+describe('work orders write events to the outbox', () => {
+  it('a new order emits work_order.created once (a replay emits nothing); a change emits work_order.changed', async () => {
+    const body = { externalRef: `WO-EV-${Date.now()}`, quantity: 3 };
+    const first = await t.http.post('/v1/work-orders').set(erp).send(body);
+    expect(first.status).toBe(201);
+    expect((await t.http.post('/v1/work-orders').set(erp).send(body)).status).toBe(200);
+    const id = first.body.id;
+    const created = await testDb()('events').where({ organization_id: org.id, subject_id: id, type: 'work_order.created' });
+    expect(created).toHaveLength(1);
+    expect(created[0].payload).toMatchObject({ workOrderId: id, externalRef: body.externalRef, quantity: 3 });
+    expect((await t.http.put(`/v1/work-orders/${id}`).set(erp).send({ quantity: 4 })).status).toBe(200);
+    const changed = await testDb()('events').where({ organization_id: org.id, subject_id: id, type: 'work_order.changed' });
+    expect(changed).toHaveLength(1);
+    expect(changed[0].payload.changed).toEqual(['quantity']);
+  });
+});

@@ -1,6 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
 import { createHash } from 'node:crypto';
+import { EventsService } from '../events/events.service.js';
 import { AuditService } from '../audit/audit.service.js';
 import { actorOf, type RequestContext } from '../auth/principal.js';
 import { listPage } from '../common/lists/knex-list.js';
@@ -97,7 +98,7 @@ export function requestHash(body: WorkOrderInput): string {
 
 @Injectable()
 export class WorkOrdersService {
-  constructor(@Inject(KNEX) private readonly db: Knex, private readonly audit: AuditService) {}
+  constructor(@Inject(KNEX) private readonly db: Knex, private readonly audit: AuditService, private readonly events: EventsService) {}
 
   base(orgId: string, db: Knex | Knex.Transaction = this.db) {
     return db('work_orders')
@@ -164,6 +165,7 @@ export class WorkOrdersService {
         .returning('id');
       if (row) {
         await this.audit.record({ organizationId: orgId, ...actor, action: 'work_order.posted', targetType: 'work_order', targetId: row.id, details: { externalRef: body.externalRef, quantity: body.quantity }, ip: c.ip, userAgent: c.userAgent }, trx);
+        await this.events.emit(trx, { organizationId: orgId, type: 'work_order.created', subjectType: 'work_order', subjectId: row.id, data: { workOrderId: row.id, externalRef: body.externalRef, quantity: body.quantity, state: body.state ?? 'open' } });
         return { id: row.id as string, created: true };
       }
       const existing = await trx('work_orders').where({ organization_id: orgId, external_ref: body.externalRef }).first('id', 'request_hash');
@@ -196,6 +198,7 @@ export class WorkOrdersService {
       await this.db.transaction(async (trx) => {
         await trx('work_orders').where({ id, organization_id: orgId }).update(patch);
         await this.audit.record({ organizationId: orgId, ...actorOf(c.principal), action: 'work_order.changed', targetType: 'work_order', targetId: id, details: { fields: Object.keys(patch), state: body.state }, ip: c.ip, userAgent: c.userAgent }, trx);
+        await this.events.emit(trx, { organizationId: orgId, type: 'work_order.changed', subjectType: 'work_order', subjectId: id, data: { workOrderId: id, externalRef: current.external_ref, changed: Object.keys(body).filter((k) => body[k as keyof WorkOrderInput] !== undefined) } });
       });
     }
     return this.get(c, id);
