@@ -16,7 +16,7 @@ export default {
   // a global option (ignored inside projects): app start-up in hooks needs more than 5 s on a busy 2-core machine
   testTimeout: 30000,
   projects: [
-    { ...common, displayName: 'unit', roots: ['<rootDir>/api/src', '<rootDir>/sdk/src', '<rootDir>/fakes/src'], testMatch: ['**/*.spec.ts'] },
+    { ...common, displayName: 'unit', roots: ['<rootDir>/api/src', '<rootDir>/fakes/src'], testMatch: ['**/*.spec.ts'] },
     { ...common, displayName: 'reference', roots: ['<rootDir>/test/reference'], testMatch: ['**/*.reference-spec.ts'] },
     { ...common, displayName: 'e2e', roots: ['<rootDir>/test/e2e'], testMatch: ['**/*.e2e-spec.ts'] },
   ],

@@ -61,9 +61,11 @@ async function browserSuite() {
     }
     step('browser suite: Chromium against the built console and the real API', process.execPath, [path.join(ROOT, 'test/browser/run.mjs')], { BASE_URL: `http://127.0.0.1:${port}`, MAIL_URL: `http://127.0.0.1:${mailPort}` });
   } finally {
+    // wait for a clean shutdown before the database servers stop under it
+    const exited = new Promise((r) => api.once('exit', r));
     api.kill('SIGTERM');
     catcher.kill('SIGTERM');
-    await new Promise((r) => setTimeout(r, 500));
+    await Promise.race([exited, new Promise((r) => setTimeout(r, 15_000))]);
   }
 }
 function step(name, cmd, args, extraEnv = {}) {
