@@ -4,6 +4,7 @@
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { Webhook } from 'standardwebhooks';
+import { Recorder } from './recorder.js';
 
 export interface Received {
   webhookId: string;
@@ -41,8 +42,8 @@ export interface ErpReceiver {
 
 export async function startErpReceiver(opts: { secret: string | (() => string); port?: number; host?: string; path?: string }): Promise<ErpReceiver> {
   const host = opts.host ?? '127.0.0.1';
-  const received: Received[] = [];
-  const waiters: Array<{ match: (r: Received) => boolean; resolve: (r: Received) => void }> = [];
+  const recorder = new Recorder<Received>('webhook');
+  const received = recorder.items;
   const behaviour: ReceiverBehaviour = {};
   const secret = () => (typeof opts.secret === 'function' ? opts.secret() : opts.secret);
 
@@ -72,8 +73,7 @@ export async function startErpReceiver(opts: { secret: string | (() => string); 
         if (status === 204) status = 400;
         r.answered = status;
       }
-      received.push(r);
-      for (const w of [...waiters]) if (w.match(r)) { waiters.splice(waiters.indexOf(w), 1); w.resolve(r); }
+      recorder.add(r);
       res.writeHead(status, { 'content-type': 'application/json', ...extra }).end(status < 300 ? '' : JSON.stringify({ status }));
     });
   };
@@ -108,19 +108,7 @@ export async function startErpReceiver(opts: { secret: string | (() => string); 
       return received.filter((r) => r.verified && r.answered < 300 && !seen.has(r.webhookId) && seen.add(r.webhookId));
     },
     waitFor(match, timeoutMs = 15_000) {
-      const found = received.find(match);
-      if (found) return Promise.resolve(found);
-      return new Promise((resolve, reject) => {
-        const w = { match, resolve };
-        waiters.push(w);
-        setTimeout(() => {
-          const i = waiters.indexOf(w);
-          if (i >= 0) {
-            waiters.splice(i, 1);
-            reject(new Error(`no matching webhook within ${timeoutMs} ms (${received.length} received)`));
-          }
-        }, timeoutMs).unref();
-      });
+      return recorder.waitFor(match, timeoutMs);
     },
     start,
     stop,

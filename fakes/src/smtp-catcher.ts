@@ -4,6 +4,7 @@ import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { simpleParser } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
+import { Recorder } from './recorder.js';
 
 export interface CaughtMail {
   id: number;
@@ -25,8 +26,8 @@ export interface SmtpCatcher {
 
 export async function startSmtpCatcher(opts: { smtpPort?: number; httpPort?: number | null; host?: string } = {}): Promise<SmtpCatcher> {
   const host = opts.host ?? '127.0.0.1';
-  const messages: CaughtMail[] = [];
-  const waiters: Array<{ match: (m: CaughtMail) => boolean; resolve: (m: CaughtMail) => void }> = [];
+  const recorder = new Recorder<CaughtMail>('mail');
+  const messages = recorder.items;
   const server = new SMTPServer({
     authOptional: true,
     disabledCommands: ['STARTTLS', 'AUTH'],
@@ -44,13 +45,7 @@ export async function startSmtpCatcher(opts: { smtpPort?: number; httpPort?: num
             text: parsed.text ?? '',
             receivedAt: new Date().toISOString(),
           };
-          messages.push(mail);
-          for (const w of [...waiters]) {
-            if (w.match(mail)) {
-              waiters.splice(waiters.indexOf(w), 1);
-              w.resolve(mail);
-            }
-          }
+          recorder.add(mail);
           done();
         })
         .catch((e: Error) => done(e));
@@ -84,19 +79,7 @@ export async function startSmtpCatcher(opts: { smtpPort?: number; httpPort?: num
     httpUrl: web ? `http://${host}:${(web.address() as AddressInfo).port}` : null,
     messages,
     waitFor(match, timeoutMs = 10_000) {
-      const found = messages.find(match);
-      if (found) return Promise.resolve(found);
-      return new Promise((resolve, reject) => {
-        const w = { match, resolve };
-        waiters.push(w);
-        setTimeout(() => {
-          const i = waiters.indexOf(w);
-          if (i >= 0) {
-            waiters.splice(i, 1);
-            reject(new Error(`no matching mail within ${timeoutMs} ms (${messages.length} caught)`));
-          }
-        }, timeoutMs).unref();
-      });
+      return recorder.waitFor(match, timeoutMs);
     },
     async close() {
       await new Promise<void>((resolve) => server.close(() => resolve()));
