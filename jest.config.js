@@ -15,6 +15,9 @@ const common = {
 export default {
   // a global option (ignored inside projects): app start-up in hooks needs more than 5 s on a busy 2-core machine
   testTimeout: 30000,
+  // Bull and ioredis keep reconnect timers after an app closes; a single suite run in-band would
+  // wait on them forever once every test has finished
+  forceExit: true,
   projects: [
     { ...common, displayName: 'unit', roots: ['<rootDir>/api/src', '<rootDir>/fakes/src'], testMatch: ['**/*.spec.ts'] },
     { ...common, displayName: 'reference', roots: ['<rootDir>/test/reference'], testMatch: ['**/*.reference-spec.ts'] },

@@ -13,6 +13,7 @@ import { LotsModule } from './lots/lots.module.js';
 import { MaterialsModule } from './materials/materials.module.js';
 import { MoldsModule } from './molds/molds.module.js';
 import { QcCupTestsModule } from './qc-cup-tests/qc-cup-tests.module.js';
+import { ReadingsModule } from './readings/readings.module.js';
 import { TargetsModule } from './targets/targets.module.js';
 import { WorkOrdersModule } from './work-orders/work-orders.module.js';
 import { EventsModule } from './events/events.module.js';
@@ -50,6 +51,7 @@ export class AppModule {
         WorkOrdersModule,
         TargetsModule,
         BatchesModule,
+        ReadingsModule,
         QcCupTestsModule,
         EventsModule,
         WebhooksModule.forRoot(),

@@ -33,6 +33,11 @@ const fixtures: Record<string, (org: OrgFixture) => Promise<string>> = {
   'api-keys': async (org) => (await testDb()('api_keys').insert({ organization_id: org.id, name: 'foreign', kind: 'device', environment: 'live', scopes: ['devices:read'], prefix: 'pgd_live_xxxxxxx', secret_hash: sha256(randomUUID()) }).returning('id'))[0].id,
   devices: async (org) => (await testDb()('devices').insert({ organization_id: org.id, kind: 'thermometer', serial: `F-${randomUUID()}`, name: 'foreign probe' }).returning('id'))[0].id,
   ...shopFixtures,
+  readings: async (org) => {
+    const batchId = await shopFixtures.batches!(org);
+    const [dev] = await testDb()('devices').insert({ organization_id: org.id, kind: 'scale', serial: `F-${randomUUID()}`, name: 'foreign scale' }).returning('id');
+    return (await testDb()('readings').insert({ organization_id: org.id, batch_id: batchId, device_id: dev.id, client_reading_id: randomUUID(), quantity: 'mass', subject: 'part_a', value_si: 1, unit_given: 'kg', value_given: 1, status: 'rejected' }).returning('id'))[0].id;
+  },
   'webhook-endpoints': async (org) => (await foreignEndpoint(org)).id,
   'webhook-deliveries': async (org) => {
     const ep = await foreignEndpoint(org);

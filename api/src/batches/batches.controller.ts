@@ -1,4 +1,4 @@
-import { Controller, Get, Inject, Post, Query, Res } from '@nestjs/common';
+import { Controller, Get, HttpCode, Inject, Post, Query, Res } from '@nestjs/common';
 import { ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { FastifyReply } from 'fastify';
 import type { Knex } from 'knex';
@@ -59,5 +59,13 @@ export class BatchesController {
   @ApiOperation({ summary: 'Plan a batch and compute its targets', description: 'From a work order or ad hoc. The targets are computed once, now, and stored with every input and the computation version.' })
   create(@Caller() c: RequestContext, @SchemaBody('batch.create') body: BatchInput) {
     return this.batches.create(c, body);
+  }
+
+  @Post(':id/release')
+  @Requires('readings:review')
+  @HttpCode(200)
+  @ApiOperation({ summary: 'Release a batch', description: 'When every rejected reading of the batch was waived (or none was rejected); 409 otherwise.' })
+  release(@Caller() c: RequestContext, @IdParam() id: string) {
+    return this.batches.release(c, id);
   }
 }

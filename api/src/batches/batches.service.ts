@@ -12,6 +12,9 @@ import { isoDay } from '../shop/dates.js';
 import { notFound } from '../shop/errors.js';
 import type { Quantity } from '../shop/quantities.js';
 import { type OptionsInput, type TargetsSources, TargetsService } from '../targets/targets.service.js';
+import { EventsService } from '../events/events.service.js';
+import { ProblemException } from '../common/problems.js';
+import { moveBatch } from './batch-transitions.js';
 
 export const batchesListSpec: ListSpec = {
   resource: 'batches',
@@ -121,7 +124,7 @@ export function batchView(r: BatchRow) {
 
 @Injectable()
 export class BatchesService {
-  constructor(@Inject(KNEX) private readonly db: Knex, private readonly audit: AuditService, private readonly targets: TargetsService) {}
+  constructor(@Inject(KNEX) private readonly db: Knex, private readonly audit: AuditService, private readonly targets: TargetsService, private readonly events: EventsService) {}
 
   base(orgId: string, db: Knex | Knex.Transaction = this.db) {
     return db('batches')
@@ -254,6 +257,28 @@ export class BatchesService {
       await trx('batch_state_transitions').insert({ organization_id: orgId, batch_id: row.id, from_state: null, to_state: INITIAL_BATCH_STATE, actor_type: actor.actorType, actor_id: actor.actorId, actor_label: actor.actorLabel, reason: workOrderId ? 'planned for a work order' : 'planned ad hoc' });
       await this.audit.record({ organizationId: orgId, ...actor, action: 'batch.planned', targetType: 'batch', targetId: row.id, details: { workOrderId, materialSystemRevisionId: resolved.systemRevisionId, moldId: resolved.moldId, totalMassKg: resolved.targets.totalMass.value, computationVersion: snapshot.computationVersion }, ip: c.ip, userAgent: c.userAgent }, trx);
       return row.id as string;
+    });
+    return this.get(c, id);
+  }
+
+  /**
+   * Releases a batch: allowed when it has no rejected reading left unwaived (an upheld one never
+   * releases). 409 otherwise, nothing written.
+   */
+  async release(c: RequestContext, id: string) {
+    const orgId = c.principal.organizationId;
+    await this.row(c, id);
+    const actor = actorOf(c.principal);
+    await this.db.transaction(async (trx) => {
+      const open = await trx('readings').where({ organization_id: orgId, batch_id: id, status: 'rejected' }).where((q) => q.whereNull('review_decision').orWhere('review_decision', 'uphold')).count({ n: '*' });
+      if (Number(open[0]!.n) > 0) throw new ProblemException(409, { slug: 'conflict', detail: `The batch has ${open[0]!.n} rejected reading(s) not waived.` });
+      const moved = await moveBatch(trx, this.events, orgId, id, 'released', actor, 'released by an engineer');
+      if (!moved) {
+        const b = await trx('batches').where({ id }).first('state');
+        if (b?.state !== 'released') throw new ProblemException(409, { slug: 'conflict', detail: `A ${b?.state} batch cannot be released.` });
+        return;
+      }
+      await this.audit.record({ organizationId: orgId, ...actor, action: 'batch.released', targetType: 'batch', targetId: id, details: {}, ip: c.ip, userAgent: c.userAgent }, trx);
     });
     return this.get(c, id);
   }

@@ -1,0 +1,43 @@
+import { Process, Processor } from '@nestjs/bull';
+import { BeforeApplicationShutdown, Injectable, OnApplicationBootstrap, OnApplicationShutdown } from '@nestjs/common';
+import type { Job } from 'bull';
+import { JUDGE_QUEUE, type JudgeJob, SWEEP_AFTER_MS, SWEEP_EVERY_MS } from './readings.constants.js';
+import { ReadingsService } from './readings.service.js';
+
+/** The Bull consumer: one job per reading (job id = reading id). */
+@Processor(JUDGE_QUEUE)
+export class JudgeProcessor {
+  constructor(private readonly readings: ReadingsService) {}
+
+  @Process()
+  handle(job: Job<JudgeJob>) {
+    return this.readings.judge(job.data.readingId);
+  }
+}
+
+/** At boot and on a timer, re-queues readings left pending (PostgreSQL is the source of truth). */
+@Injectable()
+export class PendingReadingsSweeper implements OnApplicationBootstrap, BeforeApplicationShutdown, OnApplicationShutdown {
+  private timer?: NodeJS.Timeout;
+  private stopped = false;
+
+  constructor(private readonly readings: ReadingsService) {}
+
+  onApplicationBootstrap(): void {
+    const run = () => {
+      if (!this.stopped) void this.readings.sweep(SWEEP_AFTER_MS, () => this.stopped).catch(() => undefined);
+    };
+    this.timer = setInterval(run, SWEEP_EVERY_MS);
+    setImmediate(run);
+    this.timer.unref();
+  }
+
+  beforeApplicationShutdown(): void {
+    this.stopped = true;
+  }
+
+  onApplicationShutdown(): void {
+    this.stopped = true;
+    if (this.timer) clearInterval(this.timer);
+  }
+}

@@ -1,0 +1,96 @@
+import { Inject, Injectable } from '@nestjs/common';
+import type { Knex } from 'knex';
+import { listPage } from '../common/lists/knex-list.js';
+import type { ListQuery, ListSpec } from '../common/lists/list-query.js';
+import { KNEX } from '../database/database.module.js';
+
+export const readingsListSpec: ListSpec = {
+  resource: 'readings',
+  sortable: ['receivedAt', 'status', 'judgedAt'],
+  filters: { status: 'eq', batchId: 'eq', deviceId: 'eq', reasonCode: 'eq', receivedAfter: 'gte', receivedBefore: 'lte', id: 'in' },
+  defaultSort: ['receivedAt', 'DESC'],
+};
+const columns = {
+  receivedAt: 'readings.received_at', status: 'readings.status', judgedAt: 'readings.judged_at', batchId: 'readings.batch_id', deviceId: 'readings.device_id',
+  receivedAfter: 'readings.received_at', receivedBefore: 'readings.received_at', id: 'readings.id',
+};
+
+export interface ReadingRow {
+  id: string;
+  organization_id: string;
+  batch_id: string;
+  device_id: string;
+  client_reading_id: string;
+  quantity: 'mass' | 'temperature' | 'humidity';
+  subject: 'part_a' | 'part_b' | 'pigment' | 'mixed' | 'mold' | 'ambient';
+  value_si: number;
+  unit_given: string;
+  value_given: number;
+  stable: boolean;
+  device_time: Date | null;
+  received_at: Date;
+  skew_seconds: number | null;
+  status: 'pending' | 'accepted' | 'rejected' | 'unused';
+  reasons: { code: string; message: string; measured: number | null; limit: number | null; unit: string | null }[];
+  judged_at: Date | null;
+  review_decision: 'waive' | 'uphold' | null;
+  review_note: string | null;
+  reviewed_by: string | null;
+  reviewed_by_label: string | null;
+  reviewed_at: Date | null;
+}
+
+export type NewReading = Omit<ReadingRow, 'id' | 'received_at' | 'status' | 'reasons' | 'judged_at' | 'review_decision' | 'review_note' | 'reviewed_by' | 'reviewed_by_label' | 'reviewed_at'>;
+
+/** Every Knex query of readings. */
+@Injectable()
+export class ReadingsRepository {
+  constructor(@Inject(KNEX) readonly db: Knex) {}
+
+  /** Inserts unless (device, client reading id) exists; returns the row either way and whether it is new. */
+  async insertOnce(trx: Knex.Transaction, r: NewReading): Promise<{ row: ReadingRow; created: boolean }> {
+    const inserted = await trx('readings').insert(r).onConflict(['device_id', 'client_reading_id']).ignore().returning('*');
+    if (inserted.length) return { row: inserted[0], created: true };
+    const row = await trx('readings').where({ device_id: r.device_id, client_reading_id: r.client_reading_id }).first();
+    return { row, created: false };
+  }
+
+  find(orgId: string, id: string, db: Knex | Knex.Transaction = this.db): Promise<ReadingRow | undefined> {
+    return db('readings').where({ organization_id: orgId, id }).first();
+  }
+
+  async list(orgId: string, q: ListQuery) {
+    const { reasonCode, ...rest } = q.filter;
+    const base = this.db('readings').where('readings.organization_id', orgId).select('readings.*');
+    if (reasonCode !== undefined) base.whereRaw('readings.reasons @> ?::jsonb', [JSON.stringify([{ code: String(reasonCode) }])]);
+    return listPage<ReadingRow>(base, { ...q, filter: rest }, readingsListSpec, columns);
+  }
+
+  lockForJudging(trx: Knex.Transaction, id: string): Promise<ReadingRow | undefined> {
+    return trx('readings').where({ id }).forUpdate().first();
+  }
+
+  /** The other part's latest stable mass received before this reading (ties broken by id), for the ratio. */
+  async otherPartMass(trx: Knex.Transaction, r: ReadingRow): Promise<number | null> {
+    const other = r.subject === 'part_a' ? 'part_b' : 'part_a';
+    const row = await trx('readings')
+      .where({ batch_id: r.batch_id, subject: other, quantity: 'mass', stable: true })
+      .whereNot('status', 'unused')
+      .where((q) => q.where('received_at', '<', r.received_at).orWhere((q2) => q2.where('received_at', r.received_at).where('id', '<', r.id)))
+      .orderBy([{ column: 'received_at', order: 'desc' }, { column: 'id', order: 'desc' }])
+      .first('value_si');
+    return row ? Number(row.value_si) : null;
+  }
+
+  async setVerdict(trx: Knex.Transaction, id: string, status: string, reasons: unknown[]) {
+    await trx('readings').where({ id }).update({ status, reasons: JSON.stringify(reasons), judged_at: trx.fn.now() });
+  }
+
+  async setReview(trx: Knex.Transaction, id: string, review: { decision: string; note: string | null; by: string; label: string }) {
+    await trx('readings').where({ id }).update({ review_decision: review.decision, review_note: review.note, reviewed_by: review.by, reviewed_by_label: review.label, reviewed_at: trx.fn.now() });
+  }
+
+  stalePending(olderThanMs: number, limit = 500): Promise<{ id: string }[]> {
+    return this.db('readings').where('status', 'pending').where('received_at', '<', new Date(Date.now() - olderThanMs)).orderBy('received_at').limit(limit).select('id');
+  }
+}

@@ -1,0 +1,235 @@
+import { InjectQueue } from '@nestjs/bull';
+import { Inject, Injectable, Logger } from '@nestjs/common';
+import type { Queue } from 'bull';
+import type { Knex } from 'knex';
+import { AuditService } from '../audit/audit.service.js';
+import { actorOf, type RequestContext } from '../auth/principal.js';
+import { SYSTEM_ACTOR, moveBatch } from '../batches/batch-transitions.js';
+import { toSI, UnitError } from '../batching/units.js';
+import type { ListQuery } from '../common/lists/list-query.js';
+import { type FieldError, ProblemException, validationProblem } from '../common/problems.js';
+import { KNEX } from '../database/database.module.js';
+import { EventsService } from '../events/events.service.js';
+import { judgeReading, type SystemFacts } from './judging.js';
+import { JUDGE_QUEUE, type JudgeJob, MAX_CLOCK_SKEW_S } from './readings.constants.js';
+import { type NewReading, type ReadingRow, ReadingsRepository } from './readings.repository.js';
+
+export interface ReadingInput {
+  batchId: string;
+  deviceId?: string;
+  clientReadingId: string;
+  quantity: 'mass' | 'temperature' | 'humidity';
+  subject: 'part_a' | 'part_b' | 'pigment' | 'mixed' | 'mold' | 'ambient';
+  value: number;
+  unit: string;
+  stable?: boolean;
+  deviceTime?: string;
+}
+
+export interface ReviewInput {
+  decision: 'waive' | 'uphold';
+  note?: string;
+  scrap?: boolean;
+}
+
+const HUMIDITY_UNITS = ['%', '%RH', 'percent'];
+
+export function readingView(r: ReadingRow) {
+  return {
+    id: r.id,
+    batchId: r.batch_id,
+    deviceId: r.device_id,
+    clientReadingId: r.client_reading_id,
+    quantity: r.quantity,
+    subject: r.subject,
+    valueSi: r.value_si,
+    unitSi: r.quantity === 'mass' ? 'kg' : r.quantity === 'temperature' ? 'degC' : '%',
+    given: { value: r.value_given, unit: r.unit_given },
+    stable: r.stable,
+    deviceTime: r.device_time,
+    receivedAt: r.received_at,
+    clockSkewSeconds: r.skew_seconds,
+    clockSkewFlagged: r.skew_seconds !== null && Math.abs(r.skew_seconds) > MAX_CLOCK_SKEW_S,
+    status: r.status,
+    reasons: r.reasons,
+    judgedAt: r.judged_at,
+    review: r.review_decision ? { decision: r.review_decision, note: r.review_note, by: r.reviewed_by_label, at: r.reviewed_at } : null,
+    statusUrl: `/v1/readings/${r.id}`,
+  };
+}
+
+/** Ingest, judge and review readings. */
+@Injectable()
+export class ReadingsService {
+  private readonly log = new Logger('readings');
+
+  constructor(
+    @Inject(KNEX) private readonly db: Knex,
+    private readonly repo: ReadingsRepository,
+    private readonly audit: AuditService,
+    private readonly events: EventsService,
+    @InjectQueue(JUDGE_QUEUE) private readonly queue: Queue<JudgeJob>,
+  ) {}
+
+  /** Checks and converts every item; all refused together, with pointers, before anything is written. */
+  private async prepare(c: RequestContext, items: ReadingInput[], at: (i: number) => string): Promise<NewReading[]> {
+    const orgId = c.principal.organizationId;
+    const errors: FieldError[] = [];
+    const boundDevice = c.principal.kind === 'api_key' ? c.principal.deviceId : null;
+    const deviceIds = [...new Set(items.map((r) => r.deviceId ?? boundDevice).filter((x): x is string => !!x))];
+    const batchIds = [...new Set(items.map((r) => r.batchId))];
+    const devices = new Set((await this.db('devices').where('organization_id', orgId).whereIn('id', deviceIds).select('id')).map((d) => d.id as string));
+    const batches = new Set((await this.db('batches').where('organization_id', orgId).whereIn('id', batchIds).select('id')).map((b) => b.id as string));
+    const now = Date.now();
+    const out: NewReading[] = [];
+    items.forEach((r, i) => {
+      const p = at(i);
+      let deviceId = r.deviceId ?? boundDevice;
+      if (boundDevice && r.deviceId && r.deviceId !== boundDevice) errors.push({ pointer: `${p}/deviceId`, detail: 'differs from the device this key is bound to', code: 'conflicting' });
+      if (!deviceId) errors.push({ pointer: `${p}/deviceId`, detail: 'is required unless the key is bound to a device', code: 'required' });
+      else if (!devices.has(deviceId)) errors.push({ pointer: `${p}/deviceId`, detail: 'no device with that id in your organization', code: 'reference' });
+      if (!batches.has(r.batchId)) errors.push({ pointer: `${p}/batchId`, detail: 'no batch with that id in your organization', code: 'reference' });
+      let valueSi = NaN;
+      if (!Number.isFinite(r.value)) errors.push({ pointer: `${p}/value`, detail: 'must be a finite number', code: 'type' });
+      else if (r.quantity === 'humidity') {
+        if (!HUMIDITY_UNITS.includes(r.unit)) errors.push({ pointer: `${p}/unit`, detail: `relative humidity is given in % (one of ${HUMIDITY_UNITS.join(', ')})`, code: 'unit' });
+        else if (r.value < 0 || r.value > 100) errors.push({ pointer: `${p}/value`, detail: 'must be between 0 and 100 %', code: 'range' });
+        valueSi = r.value;
+      } else {
+        try {
+          valueSi = toSI(r.quantity, r.value, r.unit);
+          if (r.quantity === 'mass' && valueSi < 0) errors.push({ pointer: `${p}/value`, detail: 'a net mass cannot be negative', code: 'minimum' });
+          if (r.quantity === 'temperature' && valueSi < -273.15) errors.push({ pointer: `${p}/value`, detail: 'is below absolute zero', code: 'minimum' });
+        } catch (e) {
+          if (!(e instanceof UnitError)) throw e;
+          errors.push({ pointer: `${p}/unit`, detail: e.message, code: 'unit' });
+        }
+      }
+      if (r.quantity === 'mass' && !['part_a', 'part_b', 'pigment', 'mixed'].includes(r.subject)) errors.push({ pointer: `${p}/subject`, detail: 'a mass is of part_a, part_b, pigment or mixed', code: 'enum' });
+      const deviceTime = r.deviceTime ? new Date(r.deviceTime) : null;
+      out.push({
+        organization_id: orgId,
+        batch_id: r.batchId,
+        device_id: deviceId ?? '',
+        client_reading_id: r.clientReadingId,
+        quantity: r.quantity,
+        subject: r.subject,
+        value_si: valueSi,
+        unit_given: r.unit,
+        value_given: r.value,
+        stable: r.stable ?? true,
+        device_time: deviceTime,
+        skew_seconds: deviceTime ? Math.round((now - deviceTime.getTime()) / 100) / 10 : null,
+      });
+    });
+    if (errors.length) throw validationProblem(errors);
+    return out;
+  }
+
+  /** Commits the readings pending, then queues their judging; a failed queue is left to the sweeper. */
+  async ingest(c: RequestContext, items: ReadingInput[], at: (i: number) => string) {
+    const rows = await this.prepare(c, items, at);
+    const results = await this.db.transaction(async (trx) => {
+      const out: { row: ReadingRow; created: boolean }[] = [];
+      for (const r of rows) out.push(await this.repo.insertOnce(trx, r));
+      return out;
+    });
+    await Promise.all(results.filter((r) => r.created).map((r) => this.enqueue(r.row.id)));
+    return results.map(({ row, created }) =>
+      created ? { id: row.id, status: row.status, statusUrl: `/v1/readings/${row.id}`, replayed: false } : { ...readingView(row), replayed: true },
+    );
+  }
+
+  async enqueue(id: string): Promise<boolean> {
+    try {
+      await this.queue.add({ readingId: id }, { jobId: id, attempts: 5, backoff: { type: 'exponential', delay: 1000 }, removeOnComplete: true, removeOnFail: true, timeout: 30_000 });
+      return true;
+    } catch (e) {
+      this.log.warn(`reading ${id} stays pending; the sweeper will queue it (${(e as Error).message})`);
+      return false;
+    }
+  }
+
+  /** Re-queues pending readings whose job was lost (Redis down at ingest, a worker crash). */
+  async sweep(olderThanMs: number, stopped: () => boolean = () => false): Promise<number> {
+    let n = 0;
+    for (const { id } of await this.repo.stalePending(olderThanMs)) {
+      if (stopped()) break;
+      if (await this.enqueue(id)) n++;
+    }
+    return n;
+  }
+
+  async list(c: RequestContext, q: ListQuery) {
+    const { rows, total } = await this.repo.list(c.principal.organizationId, q);
+    return { rows: rows.map(readingView), total };
+  }
+
+  async get(c: RequestContext, id: string) {
+    const r = await this.repo.find(c.principal.organizationId, id);
+    if (!r) throw new ProblemException(404, { detail: 'No reading with that id in your organization.' });
+    return readingView(r);
+  }
+
+  /**
+   * Judges one reading. A reading already judged is left as it is, so a job run twice (a retry, the
+   * sweeper racing a slow worker) gives the same verdict and emits nothing more.
+   */
+  async judge(id: string): Promise<{ status: string }> {
+    return this.db.transaction(async (trx) => {
+      const r = await this.repo.lockForJudging(trx, id);
+      if (!r) return { status: 'missing' };
+      if (r.status !== 'pending') return { status: r.status };
+      const device = await trx('devices').where({ id: r.device_id }).first('capacity_kg', 'calibration_due');
+      const batch = await trx('batches').where({ id: r.batch_id }).first('state', 'targets');
+      const system = (batch?.targets?.input?.system ?? null) as SystemFacts | null;
+      const otherPartMassKg = r.quantity === 'mass' && (r.subject === 'part_a' || r.subject === 'part_b') ? await this.repo.otherPartMass(trx, r) : null;
+      const verdict = judgeReading({
+        quantity: r.quantity,
+        subject: r.subject,
+        valueSi: Number(r.value_si),
+        stable: r.stable,
+        device: { capacityKg: device?.capacity_kg ?? null, calibrationDue: calibrationDay(device?.calibration_due) },
+        day: new Date(r.received_at).toISOString().slice(0, 10),
+        system: system?.ratio ? system : null,
+        otherPartMassKg,
+      });
+      await this.repo.setVerdict(trx, id, verdict.status, verdict.reasons);
+      const orgId = r.organization_id;
+      if (verdict.status !== 'unused') {
+        await this.events.emit(trx, { organizationId: orgId, type: verdict.status === 'accepted' ? 'reading.accepted' : 'reading.rejected', subjectType: 'reading', subjectId: id, data: { readingId: id, batchId: r.batch_id, status: verdict.status, reasons: verdict.reasons } });
+      }
+      await moveBatch(trx, this.events, orgId, r.batch_id, 'weighing', SYSTEM_ACTOR, 'first reading received');
+      if (verdict.status === 'rejected') await moveBatch(trx, this.events, orgId, r.batch_id, 'on_hold', SYSTEM_ACTOR, `reading ${id} rejected: ${verdict.reasons.map((x) => x.code).join(', ')}`);
+      return { status: verdict.status };
+    });
+  }
+
+  /** Waive (with a note) or uphold a rejected reading; upholding holds the batch, or scraps it. */
+  async review(c: RequestContext, id: string, body: ReviewInput) {
+    const orgId = c.principal.organizationId;
+    if (body.decision === 'waive' && !body.note?.trim()) throw validationProblem([{ pointer: '/note', detail: 'a waiver needs a note saying why', code: 'required' }]);
+    if (body.decision === 'waive' && body.scrap) throw validationProblem([{ pointer: '/scrap', detail: 'only an upheld rejection scraps a batch', code: 'conflicting' }]);
+    const actor = actorOf(c.principal);
+    await this.db.transaction(async (trx) => {
+      const r = await trx('readings').where({ organization_id: orgId, id }).forUpdate().first();
+      if (!r) throw new ProblemException(404, { detail: 'No reading with that id in your organization.' });
+      if (r.status !== 'rejected') throw new ProblemException(409, { slug: 'conflict', detail: `Only rejected readings are reviewed; this one is ${r.status}.` });
+      if (r.review_decision) throw new ProblemException(409, { slug: 'conflict', detail: `This reading was already reviewed (${r.review_decision}).` });
+      await this.repo.setReview(trx, id, { decision: body.decision, note: body.note ?? null, by: actor.actorId, label: actor.actorLabel });
+      const data = { readingId: id, batchId: r.batch_id, decision: body.decision, note: body.note ?? null, reviewedBy: actor.actorLabel };
+      await this.events.emit(trx, { organizationId: orgId, type: body.decision === 'waive' ? 'reading.waived' : 'reading.upheld', subjectType: 'reading', subjectId: id, data });
+      if (body.decision === 'uphold') {
+        await moveBatch(trx, this.events, orgId, r.batch_id, body.scrap ? 'scrapped' : 'on_hold', actor, `rejection of reading ${id} upheld${body.note ? `: ${body.note}` : ''}`);
+      }
+      await this.audit.record({ organizationId: orgId, ...actor, action: `reading.${body.decision === 'waive' ? 'waived' : 'upheld'}`, targetType: 'reading', targetId: id, details: { note: body.note ?? null, scrap: !!body.scrap, batchId: r.batch_id }, ip: c.ip, userAgent: c.userAgent }, trx);
+    });
+    return this.get(c, id);
+  }
+}
+
+function calibrationDay(v: unknown): string | null {
+  if (v === null || v === undefined) return null;
+  if (v instanceof Date) return v.toISOString().slice(0, 10);
+  return String(v).slice(0, 10);
+}

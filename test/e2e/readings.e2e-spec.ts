@@ -1,0 +1,257 @@
+import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
+import { randomBytes, randomUUID } from 'node:crypto';
+import type { Role } from '../../api/src/auth/permissions.js';
+import { sha256 } from '../../api/src/auth/tokens.service.js';
+import { closeTestDb, makeOrg, type OrgFixture, testDb, tokensFor } from './support/fixtures.js';
+import { startTestApp, type TestApp } from './support/app.js';
+import { expectProblem, flexSystem } from './support/shop.js';
+
+// Checks: ±5 % ratio tolerance and "excess isocyanate side: harder; excess polyol side: softer and
+// tackier" are common practice; components conditioned near 22 °C (window 18–27 °C here) likewise.
+// 1 lb = 0.45359237 kg exactly (NIST SP 811).
+
+let t: TestApp;
+let org: OrgFixture;
+let other: OrgFixture;
+let auth: Record<Role, string>;
+let otherAuth: Record<Role, string>;
+let systemId: string;
+let scaleId: string;
+let probeId: string;
+let deviceKey: string;
+
+const as = (role: Role) => ({ authorization: auth[role] });
+
+async function newBatch(a: Record<Role, string> = auth, sys = systemId): Promise<string> {
+  const res = await t.http.post('/v1/batches').set('authorization', a.engineer).send({ materialSystemId: sys, freeRiseCup: { volume: { value: 1, unit: 'L' } } });
+  expect(res.status).toBe(201);
+  return res.body.id;
+}
+
+function reading(batchId: string, over: Record<string, unknown> = {}) {
+  return { batchId, deviceId: scaleId, clientReadingId: randomUUID(), quantity: 'mass', subject: 'part_a', value: 1, unit: 'kg', stable: true, ...over };
+}
+
+async function judged(id: string): Promise<Record<string, any>> {
+  for (let i = 0; i < 100; i++) {
+    const res = await t.http.get(`/v1/readings/${id}`).set(as('viewer'));
+    if (res.body.status !== 'pending') return res.body;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`reading ${id} was never judged`);
+}
+
+async function postJudged(body: Record<string, unknown>) {
+  const res = await t.http.post('/v1/readings').set(as('engineer')).send(body);
+  expect(res.status).toBe(202);
+  return judged(res.body.id);
+}
+
+const batchState = async (id: string) => (await testDb()('batches').where({ id }).first('state')).state as string;
+const readingCount = async (orgId = org.id) => Number((await testDb()('readings').where({ organization_id: orgId }).count({ n: '*' }))[0]!.n);
+
+beforeAll(async () => {
+  t = await startTestApp({ PROCESS_ROLE: 'all', OUTBOX_RELAY: 'off' });
+  org = await makeOrg('readings');
+  other = await makeOrg('readings-other');
+  auth = await tokensFor(t.http, org);
+  otherAuth = await tokensFor(t.http, other);
+  // 100:100 by weight, B the isocyanate side, ±5 %
+  const sys = await t.http.post('/v1/material-systems').set(as('engineer')).send(flexSystem({ ratio: { a: 100, b: 100 }, specificGravityA: 1.1, specificGravityB: 1.1 }));
+  expect(sys.status).toBe(201);
+  systemId = sys.body.id;
+  [{ id: scaleId }] = await testDb()('devices').insert({ organization_id: org.id, kind: 'scale', serial: `S-${randomUUID()}`, name: 'bench scale', readability_kg: 0.001, capacity_kg: 5, calibration_due: '2099-01-01' }).returning('id');
+  [{ id: probeId }] = await testDb()('devices').insert({ organization_id: org.id, kind: 'thermometer', serial: `T-${randomUUID()}`, name: 'drum probe' }).returning('id');
+  deviceKey = `pgd_live_${randomBytes(32).toString('base64url')}`;
+  await testDb()('api_keys').insert({ organization_id: org.id, name: 'scale key', kind: 'device', environment: 'live', scopes: ['readings:write'], prefix: deviceKey.slice(0, 16), secret_hash: sha256(deviceKey), device_id: scaleId });
+}, 60_000);
+afterAll(async () => {
+  await t.close();
+  await closeTestDb();
+});
+
+describe('ingest', () => {
+  it('answers 202 with a status URL, moves the batch to weighing, and takes the device from a bound key', async () => {
+    const batchId = await newBatch();
+    const { deviceId: _drop, ...body } = reading(batchId, { value: 2, unit: 'lb' });
+    const res = await t.http.post('/v1/readings').set('x-api-key', deviceKey).send(body);
+    expect(res.status).toBe(202);
+    expect(res.body).toMatchObject({ status: 'pending', statusUrl: `/v1/readings/${res.body.id}` });
+    const r = await judged(res.body.id);
+    expect(r.deviceId).toBe(scaleId);
+    expect(r.valueSi).toBeCloseTo(2 * 0.45359237, 12);
+    expect(r.status).toBe('accepted');
+    expect(await batchState(batchId)).toBe('weighing');
+    const events = await testDb()('events').where({ organization_id: org.id, subject_id: res.body.id }).select('type');
+    expect(events.map((e) => e.type)).toEqual(['reading.accepted']);
+  });
+
+  it('stores one row for the same reading posted three times at once; the replays answer 200', async () => {
+    const body = reading(await newBatch());
+    const all = await Promise.all([1, 2, 3].map(() => t.http.post('/v1/readings').set(as('engineer')).send(body)));
+    expect(all.map((r) => r.status).sort()).toEqual([200, 200, 202]);
+    expect(new Set(all.map((r) => r.body.id)).size).toBe(1);
+    expect(all.filter((r) => r.body.replayed).length).toBe(2);
+    expect(Number((await testDb()('readings').where({ client_reading_id: body.clientReadingId }).count({ n: '*' }))[0]!.n)).toBe(1);
+  });
+
+  it('flags a device clock more than 5 minutes off', async () => {
+    const batchId = await newBatch();
+    const r = await postJudged(reading(batchId, { deviceTime: new Date(Date.now() - 10 * 60_000).toISOString() }));
+    expect(r.clockSkewFlagged).toBe(true);
+    expect(r.clockSkewSeconds).toBeGreaterThan(590);
+    const ok = await postJudged(reading(batchId, { deviceTime: new Date().toISOString() }));
+    expect(ok.clockSkewFlagged).toBe(false);
+  });
+
+  it('takes up to 1000 readings at once', async () => {
+    const batchId = await newBatch();
+    const res = await t.http.post('/v1/readings/bulk').set(as('engineer')).send({ readings: [reading(batchId, { quantity: 'temperature', subject: 'ambient', value: 21, unit: 'degC', deviceId: probeId }), reading(batchId, { quantity: 'humidity', subject: 'ambient', value: 45, unit: '%', deviceId: probeId })] });
+    expect(res.status).toBe(202);
+    expect(res.body.items).toHaveLength(2);
+    for (const i of res.body.items) expect((await judged(i.id)).status).toBe('accepted');
+  });
+});
+
+describe('refused input writes nothing', () => {
+  let batchId: string;
+  let foreignBatch: string;
+  beforeAll(async () => {
+    batchId = await newBatch();
+    const sys = await t.http.post('/v1/material-systems').set('authorization', otherAuth.engineer).send(flexSystem());
+    foreignBatch = await newBatch(otherAuth, sys.body.id);
+  });
+  const cases: [string, () => unknown, number, string][] = [
+    ['a string for the value', () => reading(batchId, { value: '1.0' }), 422, '/value'],
+    ['NaN spelled as a string', () => reading(batchId, { value: 'NaN' }), 422, '/value'],
+    ['a number for the unit', () => reading(batchId, { unit: 5 }), 422, '/unit'],
+    ['a negative mass', () => reading(batchId, { value: -0.2 }), 422, '/value'],
+    ['an unknown unit', () => reading(batchId, { unit: 'stone-ish' }), 422, '/unit'],
+    ['an unknown quantity', () => reading(batchId, { quantity: 'pressure' }), 422, '/quantity'],
+    ['an unknown batch', () => reading(randomUUID()), 422, '/batchId'],
+    ["another organization's batch", () => reading(foreignBatch), 422, '/batchId'],
+    ['no device for a person', () => reading(batchId, { deviceId: undefined }), 422, '/deviceId'],
+    ['1001 readings', () => ({ readings: Array.from({ length: 1001 }, () => reading(batchId)) }), 422, '/readings'],
+    ['one bad item among good ones', () => ({ readings: [reading(batchId), reading(batchId, { unit: 'furlong' })] }), 422, '/readings/1/unit'],
+  ];
+  it.each(cases)('%s', async (_label, body, status, pointer) => {
+    const before = await readingCount();
+    const b = body() as Record<string, unknown>;
+    const path = 'readings' in b ? '/v1/readings/bulk' : '/v1/readings';
+    expectProblem(await t.http.post(path).set(as('engineer')).send(b), status, pointer);
+    expect(await readingCount()).toBe(before);
+  });
+  it('refuses a viewer (403) and writes nothing', async () => {
+    const before = await readingCount();
+    expectProblem(await t.http.post('/v1/readings').set(as('viewer')).send(reading(batchId)), 403);
+    expect(await readingCount()).toBe(before);
+  });
+});
+
+describe('judging', () => {
+  it.each([
+    ['A heavy by exactly 5.0 % passes', 'part_a', 1.05, 'accepted', null],
+    ['A heavy by 5.1 % is rejected, polyol side named (softer and tackier)', 'part_a', 1.051, 'rejected', /polyol side \(part A\) is heavy.*softer and tackier/],
+    ['B heavy by exactly 5.0 % passes', 'part_b', 1.05, 'accepted', null],
+    ['B heavy by 5.1 % is rejected, isocyanate side named (harder)', 'part_b', 1.051, 'rejected', /isocyanate side \(part B\) is heavy.*harder/],
+  ] as const)('%s', async (_label, heavy, heavyMass, status, message) => {
+    const batchId = await newBatch();
+    const light = heavy === 'part_a' ? 'part_b' : 'part_a';
+    // e = (m_A/m_B) ÷ (target m_A/m_B) − 1 against 100:100, the light part weighed first at 1 kg.
+    // A heavy: m_A = 1.05 gives e = +5.0 %. B heavy: e = −5.0 % needs m_B = 1 / 0.95 (so m_A/m_B = 0.95).
+    expect((await postJudged(reading(batchId, { subject: light, value: 1 }))).status).toBe('accepted');
+    const mass = heavy === 'part_a' ? heavyMass : 1 / (2 - heavyMass);
+    const r = await postJudged(reading(batchId, { subject: heavy, value: mass }));
+    expect(r.status).toBe(status);
+    if (message) {
+      expect(r.reasons[0]).toMatchObject({ code: heavy === 'part_a' ? 'RATIO_POLYOL_HEAVY' : 'RATIO_ISOCYANATE_HEAVY', unit: '%' });
+      expect(Math.abs(r.reasons[0].measured)).toBeCloseTo(5.1, 6);
+      expect(r.reasons[0].message).toMatch(message);
+      expect(await batchState(batchId)).toBe('on_hold');
+    } else {
+      expect(await batchState(batchId)).toBe('weighing');
+    }
+  });
+
+  it('judges a component temperature just inside and just outside the window (18–27 °C)', async () => {
+    const batchId = await newBatch();
+    const inside = await postJudged(reading(batchId, { deviceId: probeId, quantity: 'temperature', subject: 'part_a', value: 80.6, unit: 'degF' })); // 27.0 °C
+    expect(inside.status).toBe('accepted');
+    const outside = await postJudged(reading(batchId, { deviceId: probeId, quantity: 'temperature', subject: 'part_b', value: 27.1, unit: 'degC' }));
+    expect(outside.status).toBe('rejected');
+    expect(outside.reasons[0]).toMatchObject({ code: 'TEMPERATURE_ABOVE_WINDOW', measured: 27.1, limit: 27, unit: 'degC' });
+    const cold = await postJudged(reading(batchId, { deviceId: probeId, quantity: 'temperature', subject: 'part_a', value: 17.9, unit: 'degC' }));
+    expect(cold.reasons[0]).toMatchObject({ code: 'TEMPERATURE_BELOW_WINDOW', limit: 18 });
+  });
+
+  it('sets aside an unstable reading and rejects one over the scale capacity', async () => {
+    const batchId = await newBatch();
+    const shaky = await postJudged(reading(batchId, { stable: false }));
+    expect(shaky.status).toBe('unused');
+    expect(shaky.reasons[0].code).toBe('SCALE_NOT_STABLE');
+    const heavy = await postJudged(reading(batchId, { value: 5.001 }));
+    expect(heavy.status).toBe('rejected');
+    expect(heavy.reasons[0]).toMatchObject({ code: 'OVER_CAPACITY', measured: 5.001, limit: 5, unit: 'kg' });
+  });
+
+  it('rejects a reading from a scale past its calibration date', async () => {
+    const [{ id }] = await testDb()('devices').insert({ organization_id: org.id, kind: 'scale', serial: `S-${randomUUID()}`, name: 'old scale', capacity_kg: 5, calibration_due: '2020-01-01' }).returning('id');
+    const r = await postJudged(reading(await newBatch(), { deviceId: id }));
+    expect(r.status).toBe('rejected');
+    expect(r.reasons.map((x: { code: string }) => x.code)).toContain('CALIBRATION_OVERDUE');
+  });
+});
+
+describe('review', () => {
+  async function rejectedBatch() {
+    const batchId = await newBatch();
+    const r = await postJudged(reading(batchId, { value: 5.5 }));
+    expect(r.status).toBe('rejected');
+    return { batchId, readingId: r.id as string };
+  }
+
+  it('lists the review queue by status and reason code', async () => {
+    const { readingId } = await rejectedBatch();
+    const res = await t.http.get('/v1/readings').query({ filter: JSON.stringify({ status: 'rejected', reasonCode: 'OVER_CAPACITY' }) }).set(as('viewer'));
+    expect(res.status).toBe(200);
+    expect(res.headers['content-range']).toMatch(/^readings \d+-\d+\/\d+$/);
+    expect(res.body.map((r: { id: string }) => r.id)).toContain(readingId);
+    expect(res.body.every((r: { status: string }) => r.status === 'rejected')).toBe(true);
+  });
+
+  it('a waiver needs a note; once every rejection is waived the batch can be released', async () => {
+    const { batchId, readingId } = await rejectedBatch();
+    expect(await batchState(batchId)).toBe('on_hold');
+    expectProblem(await t.http.post(`/v1/batches/${batchId}/release`).set(as('engineer')), 409);
+    expectProblem(await t.http.post(`/v1/readings/${readingId}/review`).set(as('engineer')).send({ decision: 'waive' }), 422, '/note');
+    expectProblem(await t.http.post(`/v1/readings/${readingId}/review`).set(as('viewer')).send({ decision: 'waive', note: 'x' }), 403);
+    const w = await t.http.post(`/v1/readings/${readingId}/review`).set(as('engineer')).send({ decision: 'waive', note: 'tare was wrong; re-weighed by hand' });
+    expect(w.status).toBe(200);
+    expect(w.body.review).toMatchObject({ decision: 'waive', note: 'tare was wrong; re-weighed by hand' });
+    expectProblem(await t.http.post(`/v1/readings/${readingId}/review`).set(as('engineer')).send({ decision: 'uphold' }), 409);
+    const rel = await t.http.post(`/v1/batches/${batchId}/release`).set(as('engineer'));
+    expect(rel.status).toBe(200);
+    expect(rel.body.state).toBe('released');
+    const types = (await testDb()('events').where({ organization_id: org.id }).whereIn('subject_id', [batchId, readingId]).orderBy('seq').select('type')).map((e) => e.type);
+    expect(types).toEqual(expect.arrayContaining(['reading.rejected', 'reading.waived', 'batch.on_hold', 'batch.released']));
+    expect(await testDb()('audit_events').where({ organization_id: org.id, action: 'reading.waived', target_id: readingId }).first()).toBeTruthy();
+  });
+
+  it('uphold keeps the batch on hold, or scraps it with scrap: true', async () => {
+    const held = await rejectedBatch();
+    const u = await t.http.post(`/v1/readings/${held.readingId}/review`).set(as('engineer')).send({ decision: 'uphold', note: 'confirmed' });
+    expect(u.status).toBe(200);
+    expect(await batchState(held.batchId)).toBe('on_hold');
+    expectProblem(await t.http.post(`/v1/batches/${held.batchId}/release`).set(as('engineer')), 409);
+    const scrapped = await rejectedBatch();
+    await t.http.post(`/v1/readings/${scrapped.readingId}/review`).set(as('engineer')).send({ decision: 'uphold', scrap: true });
+    expect(await batchState(scrapped.batchId)).toBe('scrapped');
+    const events = await testDb()('events').where({ subject_id: scrapped.batchId, type: 'batch.scrapped' });
+    expect(events).toHaveLength(1);
+  });
+
+  it("does not show another organization's reading", async () => {
+    const { readingId } = await rejectedBatch();
+    expectProblem(await t.http.get(`/v1/readings/${readingId}`).set('authorization', otherAuth.viewer), 404);
+  });
+});
