@@ -86,8 +86,7 @@ function rewriteRefs(node: unknown): unknown {
   for (const [k, v] of Object.entries(node)) {
     if (k === '$ref' && typeof v === 'string' && v.startsWith(ID_PREFIX)) {
       const [name, frag] = v.slice(ID_PREFIX.length).split('#');
-      out[k] = `#/components/schemas/${name}${frag ? frag.replace(/^\/\$defs\//, '/$defs/') : ''}`;
-      if (frag) out[k] = `#/components/schemas/${name}${frag}`;
+      out[k] = `#/components/schemas/${name}${frag ?? ''}`;
     } else out[k] = rewriteRefs(v);
   }
   return out;
