@@ -220,7 +220,7 @@ async function inviteAcceptAndDisable({ newPage }) {
   await dialog.locator('input[name="email"]').fill(email);
   await dialog.getByRole('radio', { name: /Process engineer/ }).check();
   await dialog.getByRole('button', { name: 'Send invitation' }).click();
-  await admin.getByText(`Invitation sent to ${email}.`).waitFor();
+  await admin.getByText(`Invitation sent to ${email}.`).waitFor({ timeout: 45_000 }); // the POST waits for the SMTP hand-off, slow on a busy 2-core machine
   await admin.locator('[data-menu-entry="invitations"]').click();
   await admin.getByRole('row', { name: new RegExp(email.replace(/\./g, '\\.')) }).getByText('Waiting').waitFor();
 
