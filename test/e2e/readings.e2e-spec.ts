@@ -202,6 +202,79 @@ describe('judging', () => {
   });
 });
 
+describe('judging: mold, shop air, humidity, the mixed shot and timing', () => {
+  // TDS-style windows: mold 40–50 °C, shop air 18–30 °C, at most 70 % RH (values from memory, typical of
+  // supplier sheets); pot life 90 s and demold 12 min come from flexSystem. 104 °F = 40 °C exactly.
+  let floorSystemId: string;
+  beforeAll(async () => {
+    const sys = await t.http.post('/v1/material-systems').set(as('engineer')).send(flexSystem({
+      moldTemperatureWindow: { min: { value: 40, unit: 'degC' }, max: { value: 50, unit: 'degC' } },
+      ambientTemperatureWindow: { min: { value: 18, unit: 'degC' }, max: { value: 30, unit: 'degC' } },
+      maxRelativeHumidity: 70,
+    }));
+    expect(sys.status).toBe(201);
+    floorSystemId = sys.body.id;
+  });
+  const probe = (batchId: string, over: Record<string, unknown>) => reading(batchId, { deviceId: probeId, quantity: 'temperature', unit: 'degC', ...over });
+  const milestone = (batchId: string, subject: string, at: Date) => ({ batchId, deviceId: scaleId, clientReadingId: randomUUID(), quantity: 'milestone', subject, deviceTime: at.toISOString() });
+
+  it('judges the mold in °F and °C and the shop air against their own windows', async () => {
+    const batchId = await newBatch(auth, floorSystemId);
+    expect((await postJudged(probe(batchId, { subject: 'mold', value: 104, unit: 'degF' }))).status).toBe('accepted');
+    const cold = await postJudged(probe(batchId, { subject: 'mold', value: 103.8, unit: 'degF' }));
+    expect(cold.reasons[0]).toMatchObject({ code: 'MOLD_TEMPERATURE_BELOW_WINDOW', limit: 40, unit: 'degC' });
+    expect((await postJudged(probe(batchId, { subject: 'mold', value: 50.2 }))).reasons[0].code).toBe('MOLD_TEMPERATURE_ABOVE_WINDOW');
+    expect((await postJudged(probe(batchId, { subject: 'ambient', value: 30 }))).status).toBe('accepted');
+    expect((await postJudged(probe(batchId, { subject: 'ambient', value: 31 }))).reasons[0].code).toBe('AMBIENT_TEMPERATURE_ABOVE_WINDOW');
+  });
+
+  it('rejects humidity over the limit and accepts it at the limit', async () => {
+    const batchId = await newBatch(auth, floorSystemId);
+    expect((await postJudged(probe(batchId, { quantity: 'humidity', subject: 'ambient', value: 70, unit: '%RH' }))).status).toBe('accepted');
+    const damp = await postJudged(probe(batchId, { quantity: 'humidity', subject: 'ambient', value: 71, unit: '%' }));
+    expect(damp.reasons[0]).toMatchObject({ code: 'HUMIDITY_ABOVE_LIMIT', measured: 71, limit: 70, unit: '%' });
+    expect(await batchState(batchId)).toBe('on_hold');
+  });
+
+  it('judges the mixed shot against the batch total', async () => {
+    const batchId = await newBatch(auth, floorSystemId);
+    const total = Number((await testDb()('batches').where({ id: batchId }).first('total_mass_kg')).total_mass_kg);
+    expect((await postJudged(reading(batchId, { subject: 'mixed', value: total * 0.97 }))).status).toBe('accepted');
+    const short = await postJudged(reading(batchId, { subject: 'mixed', value: total * 0.9 }));
+    expect(short.reasons[0]).toMatchObject({ code: 'TOTAL_MASS_LOW', unit: 'kg' });
+    expect(short.reasons[0].limit).toBeCloseTo(total * 0.95, 6);
+  });
+
+  it('times the pot life from mix start to pour and the demold from pour, moving the batch to mixed and curing', async () => {
+    const onTime = await newBatch(auth, floorSystemId);
+    const t0 = new Date(Date.now() - 30 * 60_000);
+    const mix = await postJudged(milestone(onTime, 'mix_start', t0));
+    expect(mix).toMatchObject({ status: 'accepted', quantity: 'milestone', unitSi: 's' });
+    expect(await batchState(onTime)).toBe('mixed');
+    const pour = await postJudged(milestone(onTime, 'pour', new Date(t0.getTime() + 90_000)));
+    expect(pour).toMatchObject({ status: 'accepted', valueSi: 90 });
+    expect(await batchState(onTime)).toBe('curing');
+    const early = await postJudged(milestone(onTime, 'demold', new Date(t0.getTime() + 90_000 + 11 * 60_000)));
+    expect(early.reasons[0]).toMatchObject({ code: 'DEMOLDED_EARLY', measured: 660, limit: 720, unit: 's' });
+    expect(await batchState(onTime)).toBe('on_hold');
+
+    const late = await newBatch(auth, floorSystemId);
+    await postJudged(milestone(late, 'mix_start', t0));
+    const overrun = await postJudged(milestone(late, 'pour', new Date(t0.getTime() + 95_000)));
+    expect(overrun.reasons[0]).toMatchObject({ code: 'POT_LIFE_EXCEEDED', measured: 95, limit: 90, unit: 's' });
+  });
+
+  it('refuses a milestone with a value and a mass of a milestone subject, writing nothing', async () => {
+    const batchId = await newBatch(auth, floorSystemId);
+    const before = await readingCount();
+    const withValue = await t.http.post('/v1/readings').set(as('engineer')).send({ ...milestone(batchId, 'pour', new Date()), value: 1, unit: 's' });
+    expectProblem(withValue, 422, '/value');
+    const massPour = await t.http.post('/v1/readings').set(as('engineer')).send(reading(batchId, { subject: 'pour' }));
+    expectProblem(massPour, 422, '/subject');
+    expect(await readingCount()).toBe(before);
+  });
+});
+
 describe('review', () => {
   async function rejectedBatch() {
     const batchId = await newBatch();

@@ -70,6 +70,14 @@ export interface MaterialSystemParameters {
   readonly ratioTolerancePercent?: number;
   /** Component temperature window, °C. */
   readonly componentTemperatureWindow?: { readonly min: number; readonly max: number };
+  /** Mold surface temperatures the system is made for, °C. */
+  readonly moldTemperatureWindow?: { readonly min: number; readonly max: number };
+  /** Shop air temperatures the system is made for, °C. */
+  readonly ambientTemperatureWindow?: { readonly min: number; readonly max: number };
+  /** Highest relative humidity of the shop air, percent (moisture reacts with isocyanate). */
+  readonly maxRelativeHumidity?: number;
+  /** ± band on the weighed masses against their targets, percent; the ratio tolerance when absent. */
+  readonly massTolerancePercent?: number;
   /** Working time from when A meets B, s. */
   readonly potLife?: number;
   /** s. */
@@ -254,14 +262,17 @@ function validateSystem(issues: IssueCollector, system: MaterialSystemParameters
   issues.number(at('freeRiseReferenceTemperature'), system.freeRiseReferenceTemperature, { required: true, min: ABSOLUTE_ZERO_C, unit: '°C' });
   issues.number(at('freeRiseDensitySlope'), system.freeRiseDensitySlope);
   issues.number(at('ratioTolerancePercent'), system.ratioTolerancePercent, { above: 0, below: 100, unit: '%' });
-  const window = system.componentTemperatureWindow;
-  if (window !== undefined) {
-    const minOk = issues.number(at('componentTemperatureWindow', 'min'), window?.min, { required: true, min: ABSOLUTE_ZERO_C, unit: '°C' });
-    const maxOk = issues.number(at('componentTemperatureWindow', 'max'), window?.max, { required: true, min: ABSOLUTE_ZERO_C, unit: '°C' });
+  for (const field of ['componentTemperatureWindow', 'moldTemperatureWindow', 'ambientTemperatureWindow'] as const) {
+    const window = system[field];
+    if (window === undefined) continue;
+    const minOk = issues.number(at(field, 'min'), window?.min, { required: true, min: ABSOLUTE_ZERO_C, unit: '°C' });
+    const maxOk = issues.number(at(field, 'max'), window?.max, { required: true, min: ABSOLUTE_ZERO_C, unit: '°C' });
     if (minOk && maxOk && window.min > window.max) {
-      issues.add(at('componentTemperatureWindow', 'max'), 'must not be below the window minimum', 'out_of_range');
+      issues.add(at(field, 'max'), 'must not be below the window minimum', 'out_of_range');
     }
   }
+  issues.number(at('maxRelativeHumidity'), system.maxRelativeHumidity, { above: 0, max: 100, unit: '%' });
+  issues.number(at('massTolerancePercent'), system.massTolerancePercent, { above: 0, below: 100, unit: '%' });
   for (const field of ['potLife', 'demoldTime', 'fullCureTime'] as const) {
     issues.number(at(field), system[field], { min: 0, unit: 's' });
   }

@@ -22,6 +22,10 @@ export interface MaterialSystemInput {
   freeRiseDensitySlope?: Quantity | null;
   ratioTolerancePercent?: number;
   componentTemperatureWindow?: { min: Quantity; max: Quantity } | null;
+  moldTemperatureWindow?: { min: Quantity; max: Quantity } | null;
+  ambientTemperatureWindow?: { min: Quantity; max: Quantity } | null;
+  maxRelativeHumidity?: number | null;
+  massTolerancePercent?: number | null;
   potLife?: Quantity | null;
   demoldTime?: Quantity | null;
   fullCureTime?: Quantity | null;
@@ -59,6 +63,12 @@ export interface RevisionColumns {
   hydroxyl_number_mg_koh_g: number | null;
   water_pbw: number | null;
   cautions_text: string | null;
+  mold_temperature_min_c: number | null;
+  mold_temperature_max_c: number | null;
+  ambient_temperature_min_c: number | null;
+  ambient_temperature_max_c: number | null;
+  max_relative_humidity_percent: number | null;
+  mass_tolerance_percent: number | null;
 }
 
 export const REVISION_COLUMNS: readonly (keyof RevisionColumns)[] = [
@@ -67,7 +77,10 @@ export const REVISION_COLUMNS: readonly (keyof RevisionColumns)[] = [
   'ratio_tolerance_percent', 'component_temperature_min_c', 'component_temperature_max_c', 'pot_life_s',
   'demold_time_s', 'full_cure_time_s', 'max_pigment_percent', 'max_pack_factor', 'exotherm_mass_limit_kg',
   'nco_percent', 'hydroxyl_number_mg_koh_g', 'water_pbw', 'cautions_text',
+  'mold_temperature_min_c', 'mold_temperature_max_c', 'ambient_temperature_min_c', 'ambient_temperature_max_c',
+  'max_relative_humidity_percent', 'mass_tolerance_percent',
 ];
+const WINDOWS = new Set(['componentTemperatureWindow', 'moldTemperatureWindow', 'ambientTemperatureWindow']);
 
 /** API fields given as `{ value, unit }`: a pointer at one of them names its value. */
 const QUANTITY_FIELDS = new Set(['freeRiseDensity', 'freeRiseReferenceTemperature', 'freeRiseDensitySlope', 'potLife', 'demoldTime', 'fullCureTime', 'exothermMassLimit']);
@@ -82,7 +95,7 @@ export function systemPointer(pointer: string, base = ''): string {
   if (parts.length === 0) return base || '/';
   const field = API_NAME[parts[0]!] ?? parts[0]!;
   const rest = parts.slice(1);
-  const isQuantity = QUANTITY_FIELDS.has(field) || (field === 'componentTemperatureWindow' && rest.length === 1);
+  const isQuantity = QUANTITY_FIELDS.has(field) || (WINDOWS.has(field) && rest.length === 1);
   return [base, field, ...rest].join('/') + (isQuantity ? '/value' : '');
 }
 
@@ -91,6 +104,8 @@ export function readSystemInput(body: MaterialSystemInput, base = ''): { cols: R
   const q = new QuantityReader();
   const at = (p: string) => `${base}/${p}`;
   const window = body.componentTemperatureWindow ?? null;
+  const mold = body.moldTemperatureWindow ?? null;
+  const air = body.ambientTemperatureWindow ?? null;
   const cols: RevisionColumns = {
     ratio_basis: body.ratioBasis,
     ratio_a: body.ratio?.a,
@@ -114,6 +129,12 @@ export function readSystemInput(body: MaterialSystemInput, base = ''): { cols: R
     hydroxyl_number_mg_koh_g: body.hydroxylNumber ?? null,
     water_pbw: body.waterPbw ?? null,
     cautions_text: body.cautionsText?.trim() ? body.cautionsText.trim() : null,
+    mold_temperature_min_c: mold ? (q.read('temperature', mold.min, at('moldTemperatureWindow/min')) ?? null) : null,
+    mold_temperature_max_c: mold ? (q.read('temperature', mold.max, at('moldTemperatureWindow/max')) ?? null) : null,
+    ambient_temperature_min_c: air ? (q.read('temperature', air.min, at('ambientTemperatureWindow/min')) ?? null) : null,
+    ambient_temperature_max_c: air ? (q.read('temperature', air.max, at('ambientTemperatureWindow/max')) ?? null) : null,
+    max_relative_humidity_percent: body.maxRelativeHumidity ?? null,
+    mass_tolerance_percent: body.massTolerancePercent ?? null,
   };
   const errors = [...q.errors];
   if (errors.length === 0) {
@@ -129,10 +150,7 @@ export function readSystemInput(body: MaterialSystemInput, base = ''): { cols: R
 
 /** SI revision columns → the computation's parameters. */
 export function parametersOf(r: RevisionColumns): MaterialSystemParameters {
-  const window =
-    r.component_temperature_min_c !== null && r.component_temperature_max_c !== null
-      ? { min: r.component_temperature_min_c, max: r.component_temperature_max_c }
-      : undefined;
+  const window = windowOf(r.component_temperature_min_c, r.component_temperature_max_c);
   return {
     ratioBasis: r.ratio_basis,
     ratio: { a: r.ratio_a, b: r.ratio_b },
@@ -144,6 +162,10 @@ export function parametersOf(r: RevisionColumns): MaterialSystemParameters {
     freeRiseDensitySlope: opt(r.free_rise_density_slope_kg_m3_per_c),
     ratioTolerancePercent: r.ratio_tolerance_percent,
     componentTemperatureWindow: window,
+    moldTemperatureWindow: windowOf(r.mold_temperature_min_c ?? null, r.mold_temperature_max_c ?? null),
+    ambientTemperatureWindow: windowOf(r.ambient_temperature_min_c ?? null, r.ambient_temperature_max_c ?? null),
+    maxRelativeHumidity: opt(r.max_relative_humidity_percent ?? null),
+    massTolerancePercent: opt(r.mass_tolerance_percent ?? null),
     potLife: opt(r.pot_life_s),
     demoldTime: opt(r.demold_time_s),
     fullCureTime: opt(r.full_cure_time_s),
@@ -155,6 +177,10 @@ export function parametersOf(r: RevisionColumns): MaterialSystemParameters {
     exothermMassLimit: opt(r.exotherm_mass_limit_kg),
     cautionsText: opt(r.cautions_text),
   };
+}
+
+function windowOf(min: number | null, max: number | null): { min: number; max: number } | undefined {
+  return min !== null && max !== null ? { min, max } : undefined;
 }
 
 /** True when two revisions pin down the same parameters (a PUT that changes none writes no revision). */
@@ -177,6 +203,12 @@ export function parametersView(r: RevisionColumns) {
     ratioTolerancePercent: r.ratio_tolerance_percent,
     componentTemperatureMinC: r.component_temperature_min_c,
     componentTemperatureMaxC: r.component_temperature_max_c,
+    moldTemperatureMinC: r.mold_temperature_min_c ?? null,
+    moldTemperatureMaxC: r.mold_temperature_max_c ?? null,
+    ambientTemperatureMinC: r.ambient_temperature_min_c ?? null,
+    ambientTemperatureMaxC: r.ambient_temperature_max_c ?? null,
+    maxRelativeHumidityPercent: r.max_relative_humidity_percent ?? null,
+    massTolerancePercent: r.mass_tolerance_percent ?? null,
     potLifeS: r.pot_life_s,
     demoldTimeS: r.demold_time_s,
     fullCureTimeS: r.full_cure_time_s,

@@ -3,15 +3,16 @@ import type { Knex } from 'knex';
 import { listPage } from '../common/lists/knex-list.js';
 import type { ListQuery, ListSpec } from '../common/lists/list-query.js';
 import { KNEX } from '../database/database.module.js';
+import type { ReadingQuantity, ReadingSubject } from './judging.js';
 
 export const readingsListSpec: ListSpec = {
   resource: 'readings',
-  sortable: ['receivedAt', 'status', 'judgedAt'],
-  filters: { status: 'eq', batchId: 'eq', deviceId: 'eq', reasonCode: 'eq', receivedAfter: 'gte', receivedBefore: 'lte', id: 'in' },
+  sortable: ['receivedAt', 'deviceTime', 'status', 'judgedAt'],
+  filters: { status: 'eq', batchId: 'eq', deviceId: 'eq', quantity: 'eq', subject: 'eq', reasonCode: 'eq', receivedAfter: 'gte', receivedBefore: 'lte', id: 'in' },
   defaultSort: ['receivedAt', 'DESC'],
 };
 const columns = {
-  receivedAt: 'readings.received_at', status: 'readings.status', judgedAt: 'readings.judged_at', batchId: 'readings.batch_id', deviceId: 'readings.device_id',
+  receivedAt: 'readings.received_at', deviceTime: 'readings.device_time', quantity: 'readings.quantity', subject: 'readings.subject', status: 'readings.status', judgedAt: 'readings.judged_at', batchId: 'readings.batch_id', deviceId: 'readings.device_id',
   receivedAfter: 'readings.received_at', receivedBefore: 'readings.received_at', id: 'readings.id',
 };
 
@@ -21,8 +22,8 @@ export interface ReadingRow {
   batch_id: string;
   device_id: string;
   client_reading_id: string;
-  quantity: 'mass' | 'temperature' | 'humidity';
-  subject: 'part_a' | 'part_b' | 'pigment' | 'mixed' | 'mold' | 'ambient';
+  quantity: ReadingQuantity;
+  subject: ReadingSubject;
   value_si: number;
   unit_given: string;
   value_given: number;
@@ -71,10 +72,14 @@ export class ReadingsRepository {
   }
 
   /** The other part's latest stable mass received before this reading (ties broken by id), for the ratio. */
-  async otherPartMass(trx: Knex.Transaction, r: ReadingRow): Promise<number | null> {
-    const other = r.subject === 'part_a' ? 'part_b' : 'part_a';
+  otherPartMass(trx: Knex.Transaction, r: ReadingRow): Promise<number | null> {
+    return this.latestMass(trx, r, r.subject === 'part_a' ? 'part_b' : 'part_a');
+  }
+
+  /** The latest stable, judged-or-pending mass of `subject` in the batch received before this reading. */
+  async latestMass(trx: Knex.Transaction, r: ReadingRow, subject: ReadingSubject): Promise<number | null> {
     const row = await trx('readings')
-      .where({ batch_id: r.batch_id, subject: other, quantity: 'mass', stable: true })
+      .where({ batch_id: r.batch_id, subject, quantity: 'mass', stable: true })
       .whereNot('status', 'unused')
       .where((q) => q.where('received_at', '<', r.received_at).orWhere((q2) => q2.where('received_at', r.received_at).where('id', '<', r.id)))
       .orderBy([{ column: 'received_at', order: 'desc' }, { column: 'id', order: 'desc' }])
@@ -82,8 +87,23 @@ export class ReadingsRepository {
     return row ? Number(row.value_si) : null;
   }
 
-  async setVerdict(trx: Knex.Transaction, id: string, status: string, reasons: unknown[]) {
-    await trx('readings').where({ id }).update({ status, reasons: JSON.stringify(reasons), judged_at: trx.fn.now() });
+  /**
+   * When the latest `subject` milestone of the batch happened (device time when the device gave one),
+   * among those that happened before this reading; null when there is none.
+   */
+  async milestoneTime(trx: Knex.Transaction, r: ReadingRow, subject: ReadingSubject): Promise<Date | null> {
+    const at = r.device_time ?? r.received_at;
+    const row = await trx('readings')
+      .where({ batch_id: r.batch_id, subject, quantity: 'milestone' })
+      .whereNot('id', r.id)
+      .whereRaw('coalesce(device_time, received_at) <= ?', [at])
+      .orderByRaw('coalesce(device_time, received_at) desc, id desc')
+      .first(trx.raw('coalesce(device_time, received_at) as at'));
+    return row ? new Date(row.at) : null;
+  }
+
+  async setVerdict(trx: Knex.Transaction, id: string, status: string, reasons: unknown[], valueSi?: number) {
+    await trx('readings').where({ id }).update({ status, reasons: JSON.stringify(reasons), judged_at: trx.fn.now(), ...(valueSi === undefined ? {} : { value_si: valueSi }) });
   }
 
   async setReview(trx: Knex.Transaction, id: string, review: { decision: string; note: string | null; by: string; label: string }) {

@@ -10,7 +10,7 @@ import type { ListQuery } from '../common/lists/list-query.js';
 import { type FieldError, ProblemException, validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
 import { EventsService } from '../events/events.service.js';
-import { judgeReading, type SystemFacts } from './judging.js';
+import { judgeReading, MASS_SUBJECTS, MILESTONE_SUBJECTS, type MassTargets, type ReadingQuantity, type ReadingSubject, type SystemFacts } from './judging.js';
 import { JUDGE_QUEUE, type JudgeJob, MAX_CLOCK_SKEW_S } from './readings.constants.js';
 import { type NewReading, type ReadingRow, ReadingsRepository } from './readings.repository.js';
 
@@ -18,10 +18,10 @@ export interface ReadingInput {
   batchId: string;
   deviceId?: string;
   clientReadingId: string;
-  quantity: 'mass' | 'temperature' | 'humidity';
-  subject: 'part_a' | 'part_b' | 'pigment' | 'mixed' | 'mold' | 'ambient';
-  value: number;
-  unit: string;
+  quantity: ReadingQuantity;
+  subject: ReadingSubject;
+  value?: number;
+  unit?: string;
   stable?: boolean;
   deviceTime?: string;
 }
@@ -33,6 +33,7 @@ export interface ReviewInput {
 }
 
 const HUMIDITY_UNITS = ['%', '%RH', 'percent'];
+const UNIT_SI: Record<ReadingQuantity, string> = { mass: 'kg', temperature: 'degC', humidity: '%', milestone: 's' };
 
 export function readingView(r: ReadingRow) {
   return {
@@ -43,7 +44,7 @@ export function readingView(r: ReadingRow) {
     quantity: r.quantity,
     subject: r.subject,
     valueSi: r.value_si,
-    unitSi: r.quantity === 'mass' ? 'kg' : r.quantity === 'temperature' ? 'degC' : '%',
+    unitSi: UNIT_SI[r.quantity],
     given: { value: r.value_given, unit: r.unit_given },
     stable: r.stable,
     deviceTime: r.device_time,
@@ -90,14 +91,25 @@ export class ReadingsService {
       else if (!devices.has(deviceId)) errors.push({ pointer: `${p}/deviceId`, detail: 'no device with that id in your organization', code: 'reference' });
       if (!batches.has(r.batchId)) errors.push({ pointer: `${p}/batchId`, detail: 'no batch with that id in your organization', code: 'reference' });
       let valueSi = NaN;
-      if (!Number.isFinite(r.value)) errors.push({ pointer: `${p}/value`, detail: 'must be a finite number', code: 'type' });
+      const isMilestone = r.quantity === 'milestone';
+      if (isMilestone) {
+        // the clock is the measurement: seconds since the milestone before it, filled in by the judge
+        valueSi = 0;
+        if (!(MILESTONE_SUBJECTS as readonly string[]).includes(r.subject)) errors.push({ pointer: `${p}/subject`, detail: `a milestone is one of ${MILESTONE_SUBJECTS.join(', ')}`, code: 'enum' });
+        if (r.value !== undefined || r.unit !== undefined) errors.push({ pointer: `${p}/value`, detail: 'a milestone carries no value; its time is deviceTime (or when it was received)', code: 'not_allowed' });
+      } else if (r.value === undefined || r.unit === undefined) {
+        if (r.value === undefined) errors.push({ pointer: `${p}/value`, detail: 'is required', code: 'required' });
+        if (r.unit === undefined) errors.push({ pointer: `${p}/unit`, detail: 'is required', code: 'required' });
+      } else if ((MILESTONE_SUBJECTS as readonly string[]).includes(r.subject)) {
+        errors.push({ pointer: `${p}/subject`, detail: `${r.subject} is a milestone: post it with quantity "milestone"`, code: 'enum' });
+      } else if (!Number.isFinite(r.value)) errors.push({ pointer: `${p}/value`, detail: 'must be a finite number', code: 'type' });
       else if (r.quantity === 'humidity') {
         if (!HUMIDITY_UNITS.includes(r.unit)) errors.push({ pointer: `${p}/unit`, detail: `relative humidity is given in % (one of ${HUMIDITY_UNITS.join(', ')})`, code: 'unit' });
         else if (r.value < 0 || r.value > 100) errors.push({ pointer: `${p}/value`, detail: 'must be between 0 and 100 %', code: 'range' });
         valueSi = r.value;
       } else {
         try {
-          valueSi = toSI(r.quantity, r.value, r.unit);
+          valueSi = toSI(r.quantity as 'mass' | 'temperature', r.value, r.unit);
           if (r.quantity === 'mass' && valueSi < 0) errors.push({ pointer: `${p}/value`, detail: 'a net mass cannot be negative', code: 'minimum' });
           if (r.quantity === 'temperature' && valueSi < -273.15) errors.push({ pointer: `${p}/value`, detail: 'is below absolute zero', code: 'minimum' });
         } catch (e) {
@@ -105,7 +117,7 @@ export class ReadingsService {
           errors.push({ pointer: `${p}/unit`, detail: e.message, code: 'unit' });
         }
       }
-      if (r.quantity === 'mass' && !['part_a', 'part_b', 'pigment', 'mixed'].includes(r.subject)) errors.push({ pointer: `${p}/subject`, detail: 'a mass is of part_a, part_b, pigment or mixed', code: 'enum' });
+      if (r.quantity === 'mass' && !(MASS_SUBJECTS as readonly string[]).includes(r.subject)) errors.push({ pointer: `${p}/subject`, detail: `a mass is of ${MASS_SUBJECTS.join(', ')}`, code: 'enum' });
       const deviceTime = r.deviceTime ? new Date(r.deviceTime) : null;
       out.push({
         organization_id: orgId,
@@ -115,8 +127,8 @@ export class ReadingsService {
         quantity: r.quantity,
         subject: r.subject,
         value_si: valueSi,
-        unit_given: r.unit,
-        value_given: r.value,
+        unit_given: isMilestone ? 's' : (r.unit ?? ''),
+        value_given: isMilestone ? 0 : (r.value ?? NaN),
         stable: r.stable ?? true,
         device_time: deviceTime,
         skew_seconds: deviceTime ? Math.round((now - deviceTime.getTime()) / 100) / 10 : null,
@@ -183,23 +195,37 @@ export class ReadingsService {
       const device = await trx('devices').where({ id: r.device_id }).first('capacity_kg', 'calibration_due');
       const batch = await trx('batches').where({ id: r.batch_id }).first('state', 'targets');
       const system = (batch?.targets?.input?.system ?? null) as SystemFacts | null;
-      const otherPartMassKg = r.quantity === 'mass' && (r.subject === 'part_a' || r.subject === 'part_b') ? await this.repo.otherPartMass(trx, r) : null;
+      const isPart = r.quantity === 'mass' && (r.subject === 'part_a' || r.subject === 'part_b');
+      const otherPartMassKg = isPart ? await this.repo.otherPartMass(trx, r) : null;
+      const partMassesKg = r.quantity === 'mass' && r.subject === 'pigment' ? { a: await this.repo.latestMass(trx, r, 'part_a'), b: await this.repo.latestMass(trx, r, 'part_b') } : undefined;
+      let elapsedS: number | null = null;
+      if (r.quantity === 'milestone' && r.subject !== 'mix_start') {
+        const since = await this.repo.milestoneTime(trx, r, r.subject === 'pour' ? 'mix_start' : 'pour');
+        const at = r.device_time ?? r.received_at;
+        elapsedS = since ? Math.round((new Date(at).getTime() - since.getTime()) / 10) / 100 : null;
+      }
+      const takenAt = r.device_time ?? r.received_at;
       const verdict = judgeReading({
         quantity: r.quantity,
         subject: r.subject,
         valueSi: Number(r.value_si),
         stable: r.stable,
         device: { capacityKg: device?.capacity_kg ?? null, calibrationDue: calibrationDay(device?.calibration_due) },
-        day: new Date(r.received_at).toISOString().slice(0, 10),
+        day: new Date(takenAt).toISOString().slice(0, 10),
         system: system?.ratio ? system : null,
+        targets: massTargets(batch?.targets?.targets),
         otherPartMassKg,
+        partMassesKg,
+        elapsedS,
       });
-      await this.repo.setVerdict(trx, id, verdict.status, verdict.reasons);
+      await this.repo.setVerdict(trx, id, verdict.status, verdict.reasons, r.quantity === 'milestone' ? (elapsedS ?? 0) : undefined);
       const orgId = r.organization_id;
       if (verdict.status !== 'unused') {
-        await this.events.emit(trx, { organizationId: orgId, type: verdict.status === 'accepted' ? 'reading.accepted' : 'reading.rejected', subjectType: 'reading', subjectId: id, data: { readingId: id, batchId: r.batch_id, status: verdict.status, reasons: verdict.reasons } });
+        await this.events.emit(trx, { organizationId: orgId, type: verdict.status === 'accepted' ? 'reading.accepted' : 'reading.rejected', subjectType: 'reading', subjectId: id, data: { readingId: id, batchId: r.batch_id, deviceId: r.device_id, quantity: r.quantity, subject: r.subject, status: verdict.status, reasons: verdict.reasons } });
       }
-      await moveBatch(trx, this.events, orgId, r.batch_id, 'weighing', SYSTEM_ACTOR, 'first reading received');
+      const next = r.subject === 'mix_start' ? 'mixed' : r.subject === 'pour' ? 'curing' : r.subject === 'demold' ? null : 'weighing';
+      const why = r.subject === 'mix_start' ? 'mix started (A met B)' : r.subject === 'pour' ? 'poured into the mold' : 'first reading received';
+      if (next) await moveBatch(trx, this.events, orgId, r.batch_id, next, SYSTEM_ACTOR, why);
       if (verdict.status === 'rejected') await moveBatch(trx, this.events, orgId, r.batch_id, 'on_hold', SYSTEM_ACTOR, `reading ${id} rejected: ${verdict.reasons.map((x) => x.code).join(', ')}`);
       return { status: verdict.status };
     });
@@ -226,6 +252,14 @@ export class ReadingsService {
     });
     return this.get(c, id);
   }
+}
+
+/** The target masses from a batch's stored targets (absent for a batch planned before targets had them). */
+function massTargets(t: { components?: { A?: { mass?: { value: number } }; B?: { mass?: { value: number } }; pigment?: { mass?: { value: number } } }; totalMass?: { value: number } } | undefined): MassTargets | null {
+  const a = t?.components?.A?.mass?.value;
+  const b = t?.components?.B?.mass?.value;
+  if (a === undefined || b === undefined) return null;
+  return { a, b, pigment: t?.components?.pigment?.mass?.value ?? 0, total: t?.totalMass?.value ?? a + b };
 }
 
 function calibrationDay(v: unknown): string | null {
