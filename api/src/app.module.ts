@@ -1,8 +1,10 @@
 import { DynamicModule, Module } from '@nestjs/common';
+import { APP_INTERCEPTOR } from '@nestjs/core';
 import { ConfigModule } from '@nestjs/config';
 import { ApiKeysModule } from './api-keys/api-keys.module.js';
 import { AuditModule } from './audit/audit.module.js';
 import { AuthModule } from './auth/auth.module.js';
+import { IdempotencyInterceptor } from './common/idempotency/idempotency.interceptor.js';
 import { ProblemsController } from './common/problems.controller.js';
 import { validateEnv } from './config/env.js';
 import { workerEnabled } from './config/process-role.js';
@@ -58,7 +60,7 @@ export class AppModule {
         HealthModule,
       ],
       controllers: [ProblemsController],
-      providers: [...(workerEnabled() ? [HeartbeatProcessor] : [])],
+      providers: [{ provide: APP_INTERCEPTOR, useClass: IdempotencyInterceptor }, ...(workerEnabled() ? [HeartbeatProcessor] : [])],
     };
   }
 }

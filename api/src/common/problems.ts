@@ -29,6 +29,8 @@ export const PROBLEM_TYPES = {
   'payload-too-large': { title: 'The request body is too large', description: 'The body is over the size limit of the route.' },
   'method-not-allowed': { title: 'Method not allowed', description: 'The path exists but does not take this method; the Allow header lists the methods it takes.' },
   'not-found': { title: 'Not found', description: 'Nothing exists at this path, or it belongs to another organization.' },
+  'idempotency-key-reused': { title: 'Idempotency-Key reused with another request', description: 'This Idempotency-Key was already used by you with a different method, path or body. Use a new key for a new request.' },
+  'idempotency-key-in-flight': { title: 'A request with this Idempotency-Key is still in progress', description: 'The first request with this key has not finished; retry after the number of seconds in Retry-After to get its response.' },
   conflict: { title: 'Conflict', description: 'The request conflicts with the current state of the resource.' },
   'service-unavailable': { title: 'Service temporarily unavailable', description: 'A backing service (database or queue) is not reachable. Retry after the number of seconds in Retry-After; nothing was written.' },
   'internal-error': { title: 'Internal error', description: 'An unexpected error. The request id in the response lets an operator find the log line.' },

@@ -1,5 +1,6 @@
 import type { INestApplication } from '@nestjs/common';
 import { DocumentBuilder, OpenAPIObject, SwaggerModule } from '@nestjs/swagger';
+import { IDEMPOTENCY_TTL_HOURS } from '../common/idempotency/idempotency.interceptor.js';
 import { schemaRegistry } from '../common/schemas/schema-registry.js';
 
 export const API_KEY_HEADER = 'X-Api-Key';
@@ -25,7 +26,26 @@ export function buildOpenApiDocument(app: INestApplication): OpenAPIObject {
   doc.components ??= {};
   doc.components.schemas = { ...(doc.components.schemas ?? {}), ...schemaRegistry().openApiComponents() } as NonNullable<OpenAPIObject['components']>['schemas'];
   addProblemResponses(doc);
+  addIdempotencyKeyHeader(doc);
   return doc;
+}
+
+/** Every authenticated POST takes an Idempotency-Key, except those idempotent by their own means. */
+function addIdempotencyKeyHeader(doc: OpenAPIObject): void {
+  for (const item of Object.values(doc.paths)) {
+    const op = item.post as (typeof item.post & Record<string, unknown>) | undefined;
+    if (!op || op['x-pourgate-public'] || op['x-pourgate-idempotency']) continue;
+    op.parameters = [
+      ...(op.parameters ?? []),
+      {
+        name: 'Idempotency-Key',
+        in: 'header',
+        required: false,
+        schema: { type: 'string', minLength: 1, maxLength: 255 },
+        description: `A unique key per request (a UUID). Within ${IDEMPOTENCY_TTL_HOURS} h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key.`,
+      },
+    ];
+  }
 }
 
 /** Every operation can fail with problem+json; say so once, here, instead of on every route. */

@@ -4,6 +4,7 @@ import type { FastifyReply } from 'fastify';
 import { Caller, type RequestContext } from '../auth/principal.js';
 import { Requires } from '../auth/requires.decorator.js';
 import { IdParam } from '../common/decorators/uuid-param.js';
+import { OwnIdempotency } from '../common/idempotency/idempotency.interceptor.js';
 import { ListRoute, parseListQuery, setContentRange } from '../common/lists/list-query.js';
 import { SchemaBody } from '../common/schemas/schema.pipe.js';
 import { readingsListSpec } from './readings.repository.js';
@@ -34,6 +35,7 @@ export class ReadingsController {
 
   @Post()
   @Requires('readings:write')
+  @OwnIdempotency('(device, clientReadingId): a reading posted again answers 200 with the first one')
   @ApiOperation({ summary: 'Post one reading', description: '202 with a status URL; judged by a queued job. The same (device, clientReadingId) again answers 200 with the first reading and replayed: true.' })
   async create(@Caller() c: RequestContext, @SchemaBody('reading.create') body: ReadingInput, @Res({ passthrough: true }) reply: FastifyReply) {
     const [one] = await this.readings.ingest(c, [body], () => '');
@@ -43,6 +45,7 @@ export class ReadingsController {
 
   @Post('bulk')
   @Requires('readings:write')
+  @OwnIdempotency('(device, clientReadingId) of each item')
   @ApiOperation({ summary: 'Post up to 1000 readings', description: 'All or nothing: one bad item refuses the whole post, with a pointer to each bad field.' })
   async bulk(@Caller() c: RequestContext, @SchemaBody('reading.bulk') body: { readings: ReadingInput[] }, @Res({ passthrough: true }) reply: FastifyReply) {
     const items = await this.readings.ingest(c, body.readings, (i) => `/readings/${i}`);

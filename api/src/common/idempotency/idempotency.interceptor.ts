@@ -1,0 +1,121 @@
+import { applyDecorators, type CallHandler, type ExecutionContext, Inject, Injectable, type NestInterceptor, SetMetadata } from '@nestjs/common';
+import { Reflector } from '@nestjs/core';
+import { ApiExtension } from '@nestjs/swagger';
+import type { FastifyReply, FastifyRequest } from 'fastify';
+import type { Knex } from 'knex';
+import { createHash } from 'node:crypto';
+import { lastValueFrom, type Observable, of } from 'rxjs';
+import type { Principal } from '../../auth/principal.js';
+import { KNEX } from '../../database/database.module.js';
+import { IS_PUBLIC } from '../decorators/public.decorator.js';
+import { malformed, ProblemException } from '../problems.js';
+
+/** How long a key and its response are kept. */
+export const IDEMPOTENCY_TTL_HOURS = 24;
+/** An in-flight key older than this belongs to a request that died; a retry may take it over. */
+export const IN_FLIGHT_TAKEOVER_S = 60;
+export const REPLAYED_HEADER = 'idempotent-replayed';
+
+const SKIP = 'pourgate:idempotency-skip';
+/**
+ * Marks a POST that is idempotent by its own means (a reading's (device, clientReadingId), an
+ * imported file's hash): the Idempotency-Key header is ignored there.
+ */
+export const OwnIdempotency = (how: string) => applyDecorators(SetMetadata(SKIP, true), ApiExtension('x-pourgate-idempotency', how));
+
+/** The header as a structured-field string (`"abc"`) or a bare token; printable ASCII, 1–255 characters. */
+export function parseIdempotencyKey(raw: string): string | null {
+  const m = /^"([\x20-\x21\x23-\x5b\x5d-\x7e]{1,255})"$/.exec(raw) ?? /^([\x21\x23-\x7e]{1,255})$/.exec(raw);
+  return m ? m[1]! : null;
+}
+
+/** JSON with object keys sorted, so two bodies that differ only in key order are the same request. */
+export function canonicalJson(v: unknown): string {
+  if (Array.isArray(v)) return `[${v.map(canonicalJson).join(',')}]`;
+  if (v && typeof v === 'object') {
+    return `{${Object.keys(v as object).sort().map((k) => `${JSON.stringify(k)}:${canonicalJson((v as Record<string, unknown>)[k])}`).join(',')}}`;
+  }
+  return JSON.stringify(v ?? null);
+}
+
+/** Method, path, query and canonical body: what makes two requests "the same request". */
+export function requestHash(method: string, url: string, body: unknown): string {
+  return createHash('sha256').update(`${method} ${url}\n${canonicalJson(body)}`).digest('hex');
+}
+
+interface KeyRow {
+  request_hash: string;
+  state: 'in_flight' | 'done';
+  response_status: number | null;
+  response_headers: Record<string, string> | null;
+  response_body: string | null;
+}
+
+/**
+ * `Idempotency-Key` on every authenticated POST (the IETF httpapi draft's semantics), scoped to the
+ * caller: the first request runs and its response is stored; a retry with the same key and body
+ * gets that response again (with `Idempotent-Replayed: true`); the same key with another request is
+ * a 422; a retry while the first is still running is a 409 with Retry-After. A request that fails
+ * (an error response) keeps no key, so a corrected retry may reuse it.
+ */
+@Injectable()
+export class IdempotencyInterceptor implements NestInterceptor {
+  constructor(@Inject(KNEX) private readonly db: Knex, private readonly reflector: Reflector) {}
+
+  async intercept(ctx: ExecutionContext, next: CallHandler): Promise<Observable<unknown>> {
+    if (ctx.getType() !== 'http') return next.handle();
+    const req = ctx.switchToHttp().getRequest<FastifyRequest & { principal?: Principal }>();
+    const raw = req.headers['idempotency-key'];
+    if (req.method !== 'POST' || raw === undefined) return next.handle();
+    const targets = [ctx.getHandler(), ctx.getClass()];
+    if (this.reflector.getAllAndOverride<boolean>(SKIP, targets) || this.reflector.getAllAndOverride<boolean>(IS_PUBLIC, targets) || !req.principal) return next.handle();
+    const key = parseIdempotencyKey(Array.isArray(raw) ? raw.join(',') : raw);
+    if (!key) throw malformed('The Idempotency-Key header must be 1–255 printable ASCII characters (a UUID is a good key).', [{ pointer: '/headers/idempotency-key', detail: 'must be 1–255 printable ASCII characters', code: 'format' }]);
+    const p = req.principal;
+    const scope = `${p.organizationId}:${p.kind}:${p.id}`;
+    const hash = requestHash(req.method, req.url, req.body);
+    const reply = ctx.switchToHttp().getResponse<FastifyReply>();
+
+    const held = await this.claim(scope, key, hash);
+    if (held) {
+      if (held.request_hash !== hash) throw new ProblemException(422, { slug: 'idempotency-key-reused', detail: 'This Idempotency-Key was used with a different request. Use a new key for a new request.' });
+      if (held.state === 'in_flight') throw new ProblemException(409, { slug: 'idempotency-key-in-flight', detail: 'The first request with this Idempotency-Key is still running; retry shortly for its response.' }, { 'retry-after': '1' });
+      void reply.status(held.response_status!);
+      void reply.header(REPLAYED_HEADER, 'true');
+      for (const [h, v] of Object.entries(held.response_headers ?? {})) void reply.header(h, v);
+      return of(held.response_body === null ? undefined : JSON.parse(held.response_body));
+    }
+    try {
+      const body = await lastValueFrom(next.handle(), { defaultValue: undefined });
+      const headers: Record<string, string> = {};
+      for (const h of ['location', 'content-range']) {
+        const v = reply.getHeader(h);
+        if (typeof v === 'string') headers[h] = v;
+      }
+      await this.db('idempotency_keys').where({ scope, key }).update({ state: 'done', response_status: reply.statusCode, response_headers: JSON.stringify(headers), response_body: body === undefined ? null : JSON.stringify(body) });
+      return of(body);
+    } catch (e) {
+      await this.db('idempotency_keys').where({ scope, key }).del().catch(() => undefined);
+      throw e;
+    }
+  }
+
+  /** Takes the key for this request (null), or returns the row of the request that holds it. */
+  private async claim(scope: string, key: string, hash: string, tries = 3): Promise<KeyRow | null> {
+    // an expired key, or one held by a request that died long ago, is free again
+    await this.db('idempotency_keys')
+      .where({ scope, key })
+      .andWhere((q) => q.where('expires_at', '<', this.db.fn.now()).orWhere((q2) => q2.where('state', 'in_flight').andWhere('created_at', '<', this.db.raw(`now() - make_interval(secs => ${IN_FLIGHT_TAKEOVER_S})`))))
+      .del();
+    const inserted = await this.db('idempotency_keys')
+      .insert({ scope, key, request_hash: hash, state: 'in_flight', expires_at: this.db.raw(`now() + make_interval(hours => ${IDEMPOTENCY_TTL_HOURS})`) })
+      .onConflict(['scope', 'key'])
+      .ignore()
+      .returning('key');
+    if (inserted.length) return null;
+    const row = await this.db('idempotency_keys').where({ scope, key }).first<KeyRow | undefined>('request_hash', 'state', 'response_status', 'response_headers', 'response_body');
+    // freed between the two statements (its holder failed): try to take it again
+    if (!row && tries > 0) return this.claim(scope, key, hash, tries - 1);
+    return row ?? { request_hash: hash, state: 'in_flight', response_status: null, response_headers: null, response_body: null };
+  }
+}
