@@ -130,3 +130,21 @@ describe('SDS and TDS documents of a material system', () => {
     expectProblem(await t.http.get(`/v1/material-systems/${systemId}/documents/${docId}/content`).set('authorization', otherAuth.viewer), 404);
   });
 });
+
+describe('retried uploads', () => {
+  it('honours an Idempotency-Key on the upload: the same file again is the first document, another file is a 422', async () => {
+    const key = `upload-${Date.now()}`;
+    const file = makePdf('Safety data sheet - retried upload');
+    const send = (f: Buffer) => t.http.post(`/v1/material-systems/${systemId}/documents`).set('authorization', auth.engineer).set('idempotency-key', key).field('kind', 'SDS').attach('file', f, { filename: 'retry.pdf', contentType: 'application/pdf' });
+    const first = await send(file);
+    expect(first.status).toBe(201);
+    const again = await send(file);
+    expect(again.status).toBe(201);
+    expect(again.headers['idempotent-replayed']).toBe('true');
+    expect(again.body.id).toBe(first.body.id);
+    const other = await send(makePdf('Another sheet'));
+    expect(other.status).toBe(422);
+    expect(other.body.type).toBe('/v1/problems/idempotency-key-reused');
+    expect(stored().filter((f) => f.includes(first.body.id))).toHaveLength(1);
+  });
+});

@@ -5,6 +5,7 @@ import type { FastifyRequest } from 'fastify';
 import { Caller, type RequestContext } from '../auth/principal.js';
 import { Requires } from '../auth/requires.decorator.js';
 import { IdParam } from '../common/decorators/uuid-param.js';
+import { UploadIdempotencyInterceptor } from '../common/idempotency/idempotency.interceptor.js';
 import { ProblemException } from '../common/problems.js';
 import { DOCUMENT_KINDS, DocumentsService } from './documents.service.js';
 
@@ -26,7 +27,7 @@ export class DocumentsController {
 
   @Post()
   @Requires('shop:write')
-  @UseInterceptors(FileInterceptor('file'))
+  @UseInterceptors(FileInterceptor('file'), UploadIdempotencyInterceptor)
   @ApiConsumes('multipart/form-data')
   @ApiBody({
     schema: {

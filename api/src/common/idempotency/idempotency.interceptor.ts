@@ -17,6 +17,8 @@ export const IN_FLIGHT_TAKEOVER_S = 60;
 export const REPLAYED_HEADER = 'idempotent-replayed';
 
 const SKIP = 'pourgate:idempotency-skip';
+const SKIP_REQUEST = Symbol('not handled here');
+const MULTIPART = /^multipart\/form-data\b/i;
 /**
  * Marks a POST that is idempotent by its own means (a reading's (device, clientReadingId), an
  * imported file's hash): the Idempotency-Key header is ignored there.
@@ -62,18 +64,29 @@ interface KeyRow {
 export class IdempotencyInterceptor implements NestInterceptor {
   constructor(@Inject(KNEX) private readonly db: Knex, private readonly reflector: Reflector) {}
 
+  /**
+   * What identifies the request besides method and URL. A multipart body is not parsed yet when the
+   * global interceptor runs: upload routes put `UploadIdempotencyInterceptor` after their file
+   * interceptor instead.
+   */
+  protected requestBody(req: FastifyRequest): unknown {
+    return MULTIPART.test(String(req.headers['content-type'] ?? '')) ? SKIP_REQUEST : req.body;
+  }
+
   async intercept(ctx: ExecutionContext, next: CallHandler): Promise<Observable<unknown>> {
     if (ctx.getType() !== 'http') return next.handle();
     const req = ctx.switchToHttp().getRequest<FastifyRequest & { principal?: Principal }>();
     const raw = req.headers['idempotency-key'];
     if (req.method !== 'POST' || raw === undefined) return next.handle();
+    const body = this.requestBody(req);
+    if (body === SKIP_REQUEST) return next.handle();
     const targets = [ctx.getHandler(), ctx.getClass()];
     if (this.reflector.getAllAndOverride<boolean>(SKIP, targets) || this.reflector.getAllAndOverride<boolean>(IS_PUBLIC, targets) || !req.principal) return next.handle();
     const key = parseIdempotencyKey(Array.isArray(raw) ? raw.join(',') : raw);
     if (!key) throw malformed('The Idempotency-Key header must be 1–255 printable ASCII characters (a UUID is a good key).', [{ pointer: '/headers/idempotency-key', detail: 'must be 1–255 printable ASCII characters', code: 'format' }]);
     const p = req.principal;
     const scope = `${p.organizationId}:${p.kind}:${p.id}`;
-    const hash = requestHash(req.method, req.url, req.body);
+    const hash = requestHash(req.method, req.url, body);
     const reply = ctx.switchToHttp().getResponse<FastifyReply>();
 
     const held = await this.claim(scope, key, hash);
@@ -117,5 +130,19 @@ export class IdempotencyInterceptor implements NestInterceptor {
     // freed between the two statements (its holder failed): try to take it again
     if (!row && tries > 0) return this.claim(scope, key, hash, tries - 1);
     return row ?? { request_hash: hash, state: 'in_flight', response_status: null, response_headers: null, response_body: null };
+  }
+}
+
+/**
+ * The same, for an upload route, placed after its file interceptor: the request is the form fields
+ * and the SHA-256 of the file's bytes.
+ */
+@Injectable()
+export class UploadIdempotencyInterceptor extends IdempotencyInterceptor {
+  protected override requestBody(req: FastifyRequest & { file?: { buffer?: Buffer; originalname?: string } }): unknown {
+    // anything else was handled by the global interceptor already
+    if (!MULTIPART.test(String(req.headers['content-type'] ?? ''))) return SKIP_REQUEST;
+    const file = req.file?.buffer ? { name: req.file.originalname ?? null, sha256: createHash('sha256').update(req.file.buffer).digest('hex') } : null;
+    return { fields: req.body ?? null, file };
   }
 }
