@@ -11,6 +11,7 @@ import { workerEnabled } from './config/process-role.js';
 import { DevicesModule } from './devices/devices.module.js';
 import { BatchesModule } from './batches/batches.module.js';
 import { DocumentsModule } from './documents/documents.module.js';
+import { ImportsModule } from './imports/imports.module.js';
 import { LotsModule } from './lots/lots.module.js';
 import { MaterialsModule } from './materials/materials.module.js';
 import { MoldsModule } from './molds/molds.module.js';
@@ -54,6 +55,7 @@ export class AppModule {
         TargetsModule,
         BatchesModule,
         ReadingsModule,
+        ImportsModule,
         QcCupTestsModule,
         EventsModule,
         WebhooksModule.forRoot(),

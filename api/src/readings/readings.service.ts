@@ -74,6 +74,16 @@ export class ReadingsService {
 
   /** Checks and converts every item; all refused together, with pointers, before anything is written. */
   private async prepare(c: RequestContext, items: ReadingInput[], at: (i: number) => string): Promise<NewReading[]> {
+    const { rows, errors } = await this.check(c, items, at);
+    if (errors.length) throw validationProblem(errors);
+    return rows;
+  }
+
+  /**
+   * Converts every item and collects what is wrong with each (pointers from `at(i)`), writing
+   * nothing. `rows[i]` is item i, meaningful only when no error points into it.
+   */
+  async check(c: RequestContext, items: ReadingInput[], at: (i: number) => string): Promise<{ rows: NewReading[]; errors: FieldError[] }> {
     const orgId = c.principal.organizationId;
     const errors: FieldError[] = [];
     const boundDevice = c.principal.kind === 'api_key' ? c.principal.deviceId : null;
@@ -134,13 +144,16 @@ export class ReadingsService {
         skew_seconds: deviceTime ? Math.round((now - deviceTime.getTime()) / 100) / 10 : null,
       });
     });
-    if (errors.length) throw validationProblem(errors);
-    return out;
+    return { rows: out, errors };
   }
 
   /** Commits the readings pending, then queues their judging; a failed queue is left to the sweeper. */
   async ingest(c: RequestContext, items: ReadingInput[], at: (i: number) => string) {
-    const rows = await this.prepare(c, items, at);
+    return this.store(await this.prepare(c, items, at));
+  }
+
+  /** Writes readings already checked by `check` (one transaction) and queues the new ones. */
+  async store(rows: NewReading[]) {
     const results = await this.db.transaction(async (trx) => {
       const out: { row: ReadingRow; created: boolean }[] = [];
       for (const r of rows) out.push(await this.repo.insertOnce(trx, r));

@@ -73,6 +73,8 @@ export const shopFixtures: Record<string, (org: OrgFixture) => Promise<string>> 
         .returning('id')
     )[0].id;
   },
+  imports: async (org) =>
+    (await testDb()('reading_imports').insert({ organization_id: org.id, file_name: 'fixture.csv', sha256: randomUUID(), size_bytes: 1, content: Buffer.from('x'), status: 'done', actor_type: 'system' }).returning('id'))[0].id,
   'qc-cup-tests': async (org) => {
     const { systemId } = await systemRow(org);
     return (await testDb()('qc_cup_tests').insert({ organization_id: org.id, material_system_id: systemId, component_temperature_a_c: 22, component_temperature_b_c: 22, free_rise_density_kg_m3: 45, tested_at: new Date() }).returning('id'))[0].id;

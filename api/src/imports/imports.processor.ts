@@ -1,0 +1,37 @@
+import { Process, Processor } from '@nestjs/bull';
+import { BeforeApplicationShutdown, Injectable, OnApplicationBootstrap } from '@nestjs/common';
+import type { Job } from 'bull';
+import { IMPORT_QUEUE, type ImportJob } from './imports.constants.js';
+import { ImportsService } from './imports.service.js';
+
+const SWEEP_AFTER_MS = 30_000;
+const SWEEP_EVERY_MS = 30_000;
+
+@Processor(IMPORT_QUEUE)
+export class ImportProcessor {
+  constructor(private readonly imports: ImportsService) {}
+
+  @Process()
+  handle(job: Job<ImportJob>) {
+    return this.imports.run(job.data.importId);
+  }
+}
+
+/** At boot and on a timer, queues imports whose job was lost. */
+@Injectable()
+export class ImportSweeper implements OnApplicationBootstrap, BeforeApplicationShutdown {
+  private timer?: NodeJS.Timeout;
+
+  constructor(private readonly imports: ImportsService) {}
+
+  onApplicationBootstrap(): void {
+    const run = () => void this.imports.sweep(SWEEP_AFTER_MS).catch(() => undefined);
+    this.timer = setInterval(run, SWEEP_EVERY_MS);
+    this.timer.unref();
+    setImmediate(run);
+  }
+
+  beforeApplicationShutdown(): void {
+    if (this.timer) clearInterval(this.timer);
+  }
+}
