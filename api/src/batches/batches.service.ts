@@ -255,6 +255,7 @@ export class BatchesService {
         })
         .returning('id');
       await trx('batch_state_transitions').insert({ organization_id: orgId, batch_id: row.id, from_state: null, to_state: INITIAL_BATCH_STATE, actor_type: actor.actorType, actor_id: actor.actorId, actor_label: actor.actorLabel, reason: workOrderId ? 'planned for a work order' : 'planned ad hoc' });
+      await this.events.emit(trx, { organizationId: orgId, type: 'batch.created', subjectType: 'batch', subjectId: row.id, data: { batchId: row.id, workOrderId, materialSystemId: resolved.systemId, subject: resolved.targets.subject, totalMassKg: resolved.targets.totalMass.value, state: INITIAL_BATCH_STATE } });
       await this.audit.record({ organizationId: orgId, ...actor, action: 'batch.planned', targetType: 'batch', targetId: row.id, details: { workOrderId, materialSystemRevisionId: resolved.systemRevisionId, moldId: resolved.moldId, totalMassKg: resolved.targets.totalMass.value, computationVersion: snapshot.computationVersion }, ip: c.ip, userAgent: c.userAgent }, trx);
       return row.id as string;
     });

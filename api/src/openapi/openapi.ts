@@ -1,5 +1,6 @@
 import type { INestApplication } from '@nestjs/common';
 import { DocumentBuilder, OpenAPIObject, SwaggerModule } from '@nestjs/swagger';
+import { EVENT_TYPES } from '../events/event-types.js';
 import { IDEMPOTENCY_TTL_HOURS } from '../common/idempotency/idempotency.interceptor.js';
 import { schemaRegistry } from '../common/schemas/schema-registry.js';
 
@@ -27,7 +28,30 @@ export function buildOpenApiDocument(app: INestApplication): OpenAPIObject {
   doc.components.schemas = { ...(doc.components.schemas ?? {}), ...schemaRegistry().openApiComponents() } as NonNullable<OpenAPIObject['components']>['schemas'];
   addProblemResponses(doc);
   addIdempotencyKeyHeader(doc);
+  addWebhooks(doc);
   return doc;
+}
+
+/**
+ * OpenAPI 3.1's `webhooks`: one entry per event type, the envelope with `type` fixed and `data`
+ * from schemas/event.<type>.schema.json, signed as the Standard Webhooks specification says.
+ */
+function addWebhooks(doc: OpenAPIObject): void {
+  const hooks: Record<string, unknown> = {};
+  for (const [type, summary] of Object.entries(EVENT_TYPES)) {
+    hooks[type] = {
+      post: {
+        summary,
+        description: 'Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.',
+        requestBody: {
+          required: true,
+          content: { 'application/json': { schema: { allOf: [{ $ref: '#/components/schemas/event' }, { type: 'object', properties: { type: { const: type }, data: { $ref: `#/components/schemas/event.${type}` } } }] } } },
+        },
+        responses: { '2XX': { description: 'Received' }, '410': { description: 'Gone: Pourgate disables the endpoint' } },
+      },
+    };
+  }
+  (doc as OpenAPIObject & { webhooks?: Record<string, unknown> }).webhooks = hooks;
 }
 
 /** Every authenticated POST takes an Idempotency-Key, except those idempotent by their own means. */
