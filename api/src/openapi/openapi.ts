@@ -51,7 +51,7 @@ function addWebhooks(doc: OpenAPIObject): void {
       },
     };
   }
-  (doc as OpenAPIObject & { webhooks?: Record<string, unknown> }).webhooks = hooks;
+  (doc as { webhooks?: unknown }).webhooks = hooks;
 }
 
 /** Every authenticated POST takes an Idempotency-Key, except those idempotent by their own means. */
