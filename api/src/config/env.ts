@@ -35,6 +35,9 @@ export const envSchema = {
     WEBHOOK_TIMEOUT_MS: { type: 'integer', minimum: 100, maximum: 60000, default: 15000 },
     WEBHOOK_RELAY_INTERVAL_MS: { type: 'integer', minimum: 20, maximum: 60000, default: 250 },
     OUTBOX_RELAY: { enum: ['on', 'off'], default: 'on' },
+    NOTIFICATIONS: { enum: ['on', 'off'], default: 'on', description: 'Whether this worker sends rejection e-mails' },
+    NOTIFY_INTERVAL_MS: { type: 'integer', minimum: 20, maximum: 600000, default: 1000, description: 'How often one-by-one rejection e-mails are sent' },
+    NOTIFY_DIGEST_INTERVAL_MS: { type: 'integer', minimum: 100, maximum: 86400000, default: 3600000, description: 'How often rejection digests are sent (hourly)' },
     QUEUE_PREFIX: { type: 'string', pattern: '^[A-Za-z0-9:_-]+$', default: 'bull' },
   },
   required: ['DATABASE_URL', 'REDIS_URL'],
@@ -69,6 +72,9 @@ export interface Env {
   WEBHOOK_TIMEOUT_MS: number;
   WEBHOOK_RELAY_INTERVAL_MS: number;
   OUTBOX_RELAY: 'on' | 'off';
+  NOTIFICATIONS: 'on' | 'off';
+  NOTIFY_INTERVAL_MS: number;
+  NOTIFY_DIGEST_INTERVAL_MS: number;
   QUEUE_PREFIX: string;
 }
 

@@ -3,6 +3,7 @@ import { ConfigService } from '@nestjs/config';
 import type { Knex } from 'knex';
 import type { Env } from '../config/env.js';
 import { KNEX } from '../database/database.module.js';
+import { NotificationsService } from '../notifications/notifications.service.js';
 import { WebhooksService } from './webhooks.service.js';
 
 /**
@@ -18,7 +19,12 @@ export class RelayService implements OnApplicationBootstrap, OnApplicationShutdo
   private running = false;
   private stopped = false;
 
-  constructor(@Inject(KNEX) private readonly db: Knex, private readonly webhooks: WebhooksService, private readonly config: ConfigService<Env, true>) {}
+  constructor(
+    @Inject(KNEX) private readonly db: Knex,
+    private readonly webhooks: WebhooksService,
+    private readonly notifications: NotificationsService,
+    private readonly config: ConfigService<Env, true>,
+  ) {}
 
   onApplicationBootstrap(): void {
     if (this.config.get('OUTBOX_RELAY', { infer: true }) === 'off') return;
@@ -50,8 +56,10 @@ export class RelayService implements OnApplicationBootstrap, OnApplicationShutdo
   /** One claim-and-fan-out round; returns how many events it took. */
   async relayBatch(limit = 200): Promise<number> {
     const created = await this.db.transaction(async (trx) => {
-      const events = await trx('events').whereNull('relayed_at').orderBy('seq').limit(limit).forUpdate().skipLocked().select('id', 'seq', 'organization_id', 'type');
+      const events = await trx('events').whereNull('relayed_at').orderBy('seq').limit(limit).forUpdate().skipLocked().select('id', 'seq', 'organization_id', 'type', 'subject_id');
       if (!events.length) return null;
+      // e-mail notices ride on the same claim, so an event is taken for webhooks and mail at once
+      await this.notifications.fanOut(trx, events);
       const orgs = [...new Set(events.map((e) => e.organization_id))];
       const endpoints = await trx('webhook_endpoints').whereIn('organization_id', orgs).where({ enabled: true }).select('id', 'organization_id', 'event_types');
       const rows = events.flatMap((ev) =>

@@ -27,12 +27,13 @@ let appCount = 0;
 /**
  * The real application on the test PostgreSQL and Redis that `npm test` started. Test apps serve
  * HTTP only unless a suite asks for workers (PROCESS_ROLE: 'all'); each has a queue prefix of its
- * own, so suites running side by side never take each other's jobs.
+ * own, so suites running side by side never take each other's jobs. Only a suite that asks for them
+ * sends rejection e-mails (NOTIFICATIONS: 'on'), so each message reaches that suite's mail catcher.
  */
 export async function startTestApp(env: Record<string, string> = {}): Promise<TestApp> {
   const saved: Record<string, string | undefined> = {};
   const prefix = `test-${process.pid}-${++appCount}`;
-  for (const [k, v] of Object.entries({ LOG_LEVEL: 'info', PROCESS_ROLE: 'api', QUEUE_PREFIX: prefix, ...env })) {
+  for (const [k, v] of Object.entries({ LOG_LEVEL: 'info', PROCESS_ROLE: 'api', QUEUE_PREFIX: prefix, NOTIFICATIONS: 'off', ...env })) {
     saved[k] = process.env[k];
     process.env[k] = v;
   }

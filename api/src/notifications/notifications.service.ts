@@ -1,0 +1,108 @@
+import { Inject, Injectable, Logger } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import type { Knex } from 'knex';
+import type { Env } from '../config/env.js';
+import { KNEX } from '../database/database.module.js';
+import { MailService } from '../mail/mail.service.js';
+import { digestMail, type NoticeFacts, rejectionMail } from './rejection-mail.js';
+
+const MAX_ATTEMPTS = 6;
+
+interface NoticeRow {
+  id: string;
+  user_id: string;
+  reading_id: string;
+  attempts: number;
+  email: string;
+}
+
+/** Engineers' e-mail about rejected readings: one per reading, or a digest, or none (their choice). */
+@Injectable()
+export class NotificationsService {
+  private readonly log = new Logger('notifications');
+  private readonly publicUrl: string;
+
+  constructor(@Inject(KNEX) private readonly db: Knex, private readonly mail: MailService, config: ConfigService<Env, true>) {
+    this.publicUrl = config.get('PUBLIC_URL', { infer: true });
+  }
+
+  /** In the relay's transaction: a notice row per engineer who wants one, for each reading.rejected. */
+  async fanOut(trx: Knex.Transaction, events: { id: string; organization_id: string; type: string; subject_id: string }[]): Promise<number> {
+    const rejected = events.filter((e) => e.type === 'reading.rejected');
+    if (!rejected.length) return 0;
+    const people = await trx('users').whereIn('organization_id', [...new Set(rejected.map((e) => e.organization_id))]).where({ role: 'engineer', disabled: false }).whereNot('notify_rejections', 'off').select('id', 'organization_id', 'notify_rejections');
+    const rows = rejected.flatMap((e) => people.filter((p) => p.organization_id === e.organization_id).map((p) => ({ organization_id: e.organization_id, user_id: p.id, event_id: e.id, reading_id: e.subject_id, mode: p.notify_rejections })));
+    if (rows.length) await trx('rejection_notices').insert(rows).onConflict(['user_id', 'event_id']).ignore();
+    return rows.length;
+  }
+
+  /** Sends due one-by-one notices; a failed send is retried with backoff, then given up. */
+  async sendEach(limit = 20): Promise<number> {
+    return this.db.transaction(async (trx) => {
+      const due: NoticeRow[] = await trx('rejection_notices as n').join('users as u', 'u.id', 'n.user_id')
+        .where({ 'n.status': 'pending', 'n.mode': 'each' }).where('n.next_attempt_at', '<=', trx.fn.now())
+        .orderBy('n.created_at').limit(limit).forUpdate('n').skipLocked().select('n.id', 'n.user_id', 'n.reading_id', 'n.attempts', 'u.email');
+      for (const n of due) {
+        const [facts] = await this.facts(trx, [n.reading_id]);
+        await this.deliver(trx, [n], () => (facts ? rejectionMail(facts, this.publicUrl) : null), n.email);
+      }
+      return due.length;
+    });
+  }
+
+  /** One message per person gathering every pending digest notice. */
+  async sendDigests(): Promise<number> {
+    return this.db.transaction(async (trx) => {
+      const due: NoticeRow[] = await trx('rejection_notices as n').join('users as u', 'u.id', 'n.user_id')
+        .where({ 'n.status': 'pending', 'n.mode': 'digest' }).where('n.next_attempt_at', '<=', trx.fn.now())
+        .orderBy('n.created_at').limit(2000).forUpdate('n').skipLocked().select('n.id', 'n.user_id', 'n.reading_id', 'n.attempts', 'u.email');
+      const byUser = new Map<string, NoticeRow[]>();
+      for (const n of due) byUser.set(n.user_id, [...(byUser.get(n.user_id) ?? []), n]);
+      for (const notices of byUser.values()) {
+        const facts = await this.facts(trx, notices.map((n) => n.reading_id));
+        await this.deliver(trx, notices, () => (facts.length ? digestMail(facts, this.publicUrl) : null), notices[0]!.email);
+      }
+      return byUser.size;
+    });
+  }
+
+  private async deliver(trx: Knex.Transaction, notices: NoticeRow[], compose: () => { subject: string; text: string } | null, to: string): Promise<void> {
+    const ids = notices.map((n) => n.id);
+    const m = compose();
+    // the reading is gone (its organization deleted): nothing to say
+    if (!m) return void (await trx('rejection_notices').whereIn('id', ids).update({ status: 'failed', last_error: 'reading not found' }));
+    try {
+      await this.mail.send({ to, ...m });
+      await trx('rejection_notices').whereIn('id', ids).update({ status: 'sent', sent_at: trx.fn.now(), attempts: trx.raw('attempts + 1') });
+    } catch (e) {
+      const attempts = Math.max(...notices.map((n) => n.attempts)) + 1;
+      const delayS = Math.min(3600, 5 * 2 ** attempts);
+      this.log.warn(`rejection notice to ${to} not sent (attempt ${attempts}): ${(e as Error).message}`);
+      await trx('rejection_notices').whereIn('id', ids).update({
+        attempts,
+        last_error: (e as Error).message.slice(0, 500),
+        ...(attempts >= MAX_ATTEMPTS ? { status: 'failed' } : { next_attempt_at: trx.raw(`now() + make_interval(secs => ${delayS})`) }),
+      });
+    }
+  }
+
+  private async facts(trx: Knex.Transaction, readingIds: string[]): Promise<NoticeFacts[]> {
+    const rows = await trx('readings as r')
+      .join('batches as b', 'b.id', 'r.batch_id')
+      .leftJoin('work_orders as w', 'w.id', 'b.work_order_id')
+      .leftJoin('devices as d', 'd.id', 'r.device_id')
+      .whereIn('r.id', readingIds)
+      .orderBy('r.received_at')
+      .select('r.id', 'r.batch_id', 'r.quantity', 'r.subject', 'r.reasons', 'r.device_time', 'r.received_at', 'w.external_ref', 'd.name as device_name');
+    return rows.map((r) => ({
+      readingId: r.id,
+      batchId: r.batch_id,
+      batchLabel: r.external_ref ? `${r.external_ref} / ${String(r.batch_id).slice(0, 8)}` : String(r.batch_id).slice(0, 8),
+      deviceName: r.device_name ?? null,
+      quantity: r.quantity,
+      subject: r.subject,
+      takenAt: new Date(r.device_time ?? r.received_at).toISOString(),
+      reasons: r.reasons,
+    }));
+  }
+}
