@@ -1,5 +1,5 @@
-import { Process, Processor } from '@nestjs/bull';
-import { BeforeApplicationShutdown, Injectable, OnApplicationBootstrap } from '@nestjs/common';
+import { OnQueueStalled, Process, Processor } from '@nestjs/bull';
+import { BeforeApplicationShutdown, Injectable, Logger, OnApplicationBootstrap } from '@nestjs/common';
 import type { Job } from 'bull';
 import { IMPORT_QUEUE, type ImportJob } from './imports.constants.js';
 import { ImportsService } from './imports.service.js';
@@ -11,9 +11,16 @@ const SWEEP_EVERY_MS = 30_000;
 export class ImportProcessor {
   constructor(private readonly imports: ImportsService) {}
 
+  private readonly log = new Logger('imports');
+
   @Process()
   handle(job: Job<ImportJob>) {
     return this.imports.run(job.data.importId);
+  }
+
+  @OnQueueStalled()
+  stalled(job: Job<ImportJob>) {
+    this.log.warn(`import ${job.data.importId} stalled; it starts again (rows already imported are not added twice)`);
   }
 }
 

@@ -1,5 +1,5 @@
-import { Process, Processor } from '@nestjs/bull';
-import { BeforeApplicationShutdown, Injectable, OnApplicationBootstrap, OnApplicationShutdown } from '@nestjs/common';
+import { OnQueueFailed, OnQueueStalled, Process, Processor } from '@nestjs/bull';
+import { BeforeApplicationShutdown, Injectable, Logger, OnApplicationBootstrap, OnApplicationShutdown } from '@nestjs/common';
 import type { Job } from 'bull';
 import { JUDGE_QUEUE, type JudgeJob, SWEEP_AFTER_MS, SWEEP_EVERY_MS } from './readings.constants.js';
 import { ReadingsService } from './readings.service.js';
@@ -7,11 +7,24 @@ import { ReadingsService } from './readings.service.js';
 /** The Bull consumer: one job per reading (job id = reading id). */
 @Processor(JUDGE_QUEUE)
 export class JudgeProcessor {
+  private readonly log = new Logger('judging');
+
   constructor(private readonly readings: ReadingsService) {}
 
   @Process()
   handle(job: Job<JudgeJob>) {
     return this.readings.judge(job.data.readingId);
+  }
+
+  /** A worker died or hung holding the job; Bull hands it to another (judging twice is harmless). */
+  @OnQueueStalled()
+  stalled(job: Job<JudgeJob>) {
+    this.log.warn(`judging of reading ${job.data.readingId} stalled; it is being retried`);
+  }
+
+  @OnQueueFailed()
+  failed(job: Job<JudgeJob>, err: Error) {
+    this.log.warn(`judging of reading ${job.data.readingId} failed (attempt ${job.attemptsMade}): ${err.message}; the reading stays pending for a retry or the sweeper`);
   }
 }
 
