@@ -10,7 +10,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { DestinationStream } from 'pino';
 import { AppModule } from './app.module.js';
-import { ProblemDetailsFilter } from './common/filters/problem-details.filter.js';
+import { frameworkErrorProblem, ProblemDetailsFilter } from './common/filters/problem-details.filter.js';
 import { RouteTable } from './common/filters/route-table.js';
 import { validateEnv } from './config/env.js';
 import { PROJECT_ROOT } from './config/paths.js';
@@ -31,6 +31,7 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
     genReqId,
     bodyLimit: env.BODY_LIMIT_BYTES,
     trustProxy: false,
+    frameworkErrors: frameworkErrorProblem as never,
   });
   const routes = new RouteTable();
   routes.attach(adapter.getInstance());

@@ -30,7 +30,7 @@ function plain(status: number, slug: ProblemSlug | null, detail?: string): Probl
 function isUnavailable(err: ErrorLike): boolean {
   if (err.code && (DB_UNAVAILABLE_SQLSTATES.has(err.code) || NET_UNAVAILABLE.has(err.code))) return true;
   const m = err.message ?? '';
-  return /Connection terminated|connect ECONNREFUSED|Knex: Timeout acquiring a connection|Connection is closed|Redis connection|MaxRetriesPerRequest/i.test(m);
+  return /Connection terminated|connect ECONNREFUSED|Knex: Timeout acquiring a connection|Connection is closed|is not queryable|Redis connection|MaxRetriesPerRequest/i.test(m);
 }
 
 /** Maps anything thrown to an RFC 9457 problem; unknown errors become a 500 with no internals leaked. */
@@ -78,6 +78,18 @@ export function toProblem(exception: unknown, req: FastifyRequest, routes?: Rout
     return { problem: plain(503, 'service-unavailable', 'A backing service is not reachable; nothing was written. Retry shortly.'), headers: { 'retry-after': '5' } };
   }
   return { problem: plain(500, 'internal-error', 'An unexpected error occurred.'), headers: {} };
+}
+
+/**
+ * Fastify's router answers some requests before Nest sees them (a path parameter over
+ * `maxParamLength`: 414; a URL it cannot decode: 400) with its own JSON; pass this as the adapter's
+ * `frameworkErrors` so those are problem details too.
+ */
+export function frameworkErrorProblem(err: Error & ErrorLike, req: FastifyRequest, reply: FastifyReply): void {
+  const status = typeof err.statusCode === 'number' && err.statusCode >= 400 && err.statusCode < 600 ? err.statusCode : 400;
+  const detail = err.code === 'FST_ERR_MAX_PARAM_LENGTH' ? 'A path parameter is longer than any id this API issues.' : 'The URL could not be parsed.';
+  const problem: Problem = { ...plain(status, status === 400 ? 'malformed-request' : null, detail), requestId: req.id };
+  void reply.status(status).header('content-type', PROBLEM_JSON).send(JSON.stringify(problem));
 }
 
 @Catch()
