@@ -1,7 +1,7 @@
 import { OnQueueFailed, OnQueueStalled, Process, Processor } from '@nestjs/bull';
 import { BeforeApplicationShutdown, Injectable, Logger, OnApplicationBootstrap, OnApplicationShutdown } from '@nestjs/common';
 import type { Job } from 'bull';
-import { JUDGE_QUEUE, type JudgeJob, SWEEP_AFTER_MS, SWEEP_EVERY_MS } from './readings.constants.js';
+import { JUDGE_CONCURRENCY, JUDGE_QUEUE, type JudgeJob, SWEEP_AFTER_MS, SWEEP_EVERY_MS } from './readings.constants.js';
 import { ReadingsService } from './readings.service.js';
 
 /** The Bull consumer: one job per reading (job id = reading id). */
@@ -11,7 +11,8 @@ export class JudgeProcessor {
 
   constructor(private readonly readings: ReadingsService) {}
 
-  @Process()
+  // judgings of one batch serialise on its row lock; different batches run side by side
+  @Process({ concurrency: JUDGE_CONCURRENCY })
   handle(job: Job<JudgeJob>) {
     return this.readings.judge(job.data.readingId);
   }

@@ -9,6 +9,9 @@ export const MAX_CLOCK_SKEW_S = 300;
 
 export const MAX_BULK_READINGS = 1000;
 
+/** Judging jobs a worker runs at once. */
+export const JUDGE_CONCURRENCY = 4;
+
 export interface JudgeJob {
   readingId: string;
 }

@@ -154,24 +154,35 @@ export class ReadingsService {
 
   /** Writes readings already checked by `check` (one transaction) and queues the new ones. */
   async store(rows: NewReading[]) {
-    const results = await this.db.transaction(async (trx) => {
-      const out: { row: ReadingRow; created: boolean }[] = [];
-      for (const r of rows) out.push(await this.repo.insertOnce(trx, r));
-      return out;
-    });
-    await Promise.all(results.filter((r) => r.created).map((r) => this.enqueue(r.row.id)));
+    const results = await this.db.transaction((trx) => this.repo.insertMany(trx, rows));
+    await this.enqueueMany(results.filter((r) => r.created).map((r) => r.row.id));
     return results.map(({ row, created }) =>
       created ? { id: row.id, status: row.status, statusUrl: `/v1/readings/${row.id}`, replayed: false } : { ...readingView(row), replayed: true },
     );
   }
 
+  private jobOptions(id: string) {
+    return { jobId: id, attempts: 5, backoff: { type: 'exponential', delay: 1000 }, removeOnComplete: true, removeOnFail: true, timeout: 30_000 };
+  }
+
   async enqueue(id: string): Promise<boolean> {
     try {
-      await this.queue.add({ readingId: id }, { jobId: id, attempts: 5, backoff: { type: 'exponential', delay: 1000 }, removeOnComplete: true, removeOnFail: true, timeout: 30_000 });
+      await this.queue.add({ readingId: id }, this.jobOptions(id));
       return true;
     } catch (e) {
       this.log.warn(`reading ${id} stays pending; the sweeper will queue it (${(e as Error).message})`);
       return false;
+    }
+  }
+
+  /** One round trip to Redis for a whole post; on failure the readings wait for the sweeper. */
+  async enqueueMany(ids: string[]): Promise<void> {
+    if (ids.length === 0) return;
+    if (ids.length === 1) return void (await this.enqueue(ids[0]!));
+    try {
+      await this.queue.addBulk(ids.map((id) => ({ data: { readingId: id }, opts: this.jobOptions(id) })));
+    } catch (e) {
+      this.log.warn(`${ids.length} readings stay pending; the sweeper will queue them (${(e as Error).message})`);
     }
   }
 

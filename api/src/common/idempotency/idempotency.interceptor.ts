@@ -8,7 +8,7 @@ import { lastValueFrom, type Observable, of } from 'rxjs';
 import type { Principal } from '../../auth/principal.js';
 import { KNEX } from '../../database/database.module.js';
 import { IS_PUBLIC } from '../decorators/public.decorator.js';
-import { malformed, ProblemException } from '../problems.js';
+import { malformed, ProblemException, validationProblem } from '../problems.js';
 
 /** How long a key and its response are kept. */
 export const IDEMPOTENCY_TTL_HOURS = 24;
@@ -31,11 +31,15 @@ export function parseIdempotencyKey(raw: string): string | null {
   return m ? m[1]! : null;
 }
 
+/** Deeper than any request of this API; a body nested further is refused before it is hashed. */
+export const MAX_BODY_DEPTH = 64;
+
 /** JSON with object keys sorted, so two bodies that differ only in key order are the same request. */
-export function canonicalJson(v: unknown): string {
-  if (Array.isArray(v)) return `[${v.map(canonicalJson).join(',')}]`;
+export function canonicalJson(v: unknown, depth = 0): string {
+  if (depth > MAX_BODY_DEPTH) throw validationProblem([{ pointer: '', detail: `is nested deeper than ${MAX_BODY_DEPTH} levels`, code: 'depth' }], 'The body is nested too deeply.');
+  if (Array.isArray(v)) return `[${v.map((x) => canonicalJson(x, depth + 1)).join(',')}]`;
   if (v && typeof v === 'object') {
-    return `{${Object.keys(v as object).sort().map((k) => `${JSON.stringify(k)}:${canonicalJson((v as Record<string, unknown>)[k])}`).join(',')}}`;
+    return `{${Object.keys(v as object).sort().map((k) => `${JSON.stringify(k)}:${canonicalJson((v as Record<string, unknown>)[k], depth + 1)}`).join(',')}}`;
   }
   return JSON.stringify(v ?? null);
 }
