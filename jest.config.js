@@ -19,7 +19,7 @@ export default {
   // wait on them forever once every test has finished
   forceExit: true,
   projects: [
-    { ...common, displayName: 'unit', roots: ['<rootDir>/api/src', '<rootDir>/fakes/src'], testMatch: ['**/*.spec.ts'] },
+    { ...common, displayName: 'unit', roots: ['<rootDir>/api/src', '<rootDir>/fakes/src', '<rootDir>/sdk/src'], testMatch: ['**/*.spec.ts'] },
     { ...common, displayName: 'reference', roots: ['<rootDir>/test/reference'], testMatch: ['**/*.reference-spec.ts'] },
     { ...common, displayName: 'e2e', roots: ['<rootDir>/test/e2e'], testMatch: ['**/*.e2e-spec.ts'] },
   ],

@@ -1,9 +1,10 @@
 // The ERP's webhook receiver, as a shop's ERP gateway would run it: it verifies every delivery with
-// the reference Standard Webhooks library, de-duplicates on webhook-id, and records what it got.
+// the SDK's verifyWebhook (the reference Standard Webhooks library underneath), de-duplicates on
+// webhook-id, and records what it got.
 // For tests and the demo it can be told to misbehave: fail N times, answer 410, ask to retry later.
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
-import { Webhook } from 'standardwebhooks';
+import { verifyWebhook } from '@pourgate/sdk';
 import { Recorder } from './recorder.js';
 
 export interface Received {
@@ -40,7 +41,14 @@ export interface ErpReceiver {
   close(): Promise<void>;
 }
 
-export async function startErpReceiver(opts: { secret: string | (() => string); port?: number; host?: string; path?: string }): Promise<ErpReceiver> {
+export async function startErpReceiver(opts: {
+  secret: string | (() => string);
+  port?: number;
+  host?: string;
+  path?: string;
+  /** Called for every delivery, verified or not, after it is recorded. */
+  onReceived?: (r: Received) => void;
+}): Promise<ErpReceiver> {
   const host = opts.host ?? '127.0.0.1';
   const recorder = new Recorder<Received>('webhook');
   const received = recorder.items;
@@ -66,7 +74,7 @@ export async function startErpReceiver(opts: { secret: string | (() => string); 
       }
       const r: Received = { webhookId: headers['webhook-id'] ?? '', timestamp: headers['webhook-timestamp'] ?? '', verified: false, rawBody, headers, at: Date.now(), answered: status };
       try {
-        r.event = new Webhook(secret()).verify(rawBody, headers) as Received['event'];
+        r.event = verifyWebhook(headers, rawBody, secret()) as unknown as Received['event'];
         r.verified = true;
       } catch (e) {
         r.error = (e as Error).message;
@@ -74,6 +82,7 @@ export async function startErpReceiver(opts: { secret: string | (() => string); 
         r.answered = status;
       }
       recorder.add(r);
+      opts.onReceived?.(r);
       res.writeHead(status, { 'content-type': 'application/json', ...extra }).end(status < 300 ? '' : JSON.stringify({ status }));
     });
   };

@@ -1,0 +1,6167 @@
+/**
+ * Generated from sdk/openapi.json by openapi-typescript. Do not edit: run `npm run sdk:generate`.
+ */
+
+export interface paths {
+    "/v1/audit-events": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The audit log: sign-ins, invitations, role changes, keys, review decisions */
+        get: operations["Audit_list"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/users": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** People of the organization */
+        get: operations["Users_list"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/users/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One person */
+        get: operations["Users_get"];
+        /**
+         * Change a person’s name, role or disabled state
+         * @description Disabling ends the person’s sessions. The last active admin cannot be demoted or disabled (409).
+         */
+        put: operations["Users_update"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/invitations": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Invitations sent */
+        get: operations["Invitations_list"];
+        put?: never;
+        /**
+         * Invite a person by e-mail
+         * @description The e-mail carries a one-time link that expires (INVITATION_TTL_HOURS). Inviting the same address again revokes the earlier link.
+         */
+        post: operations["Invitations_invite"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/invitations/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One invitation */
+        get: operations["Invitations_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/invitations/{id}/revoke": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Revoke a pending invitation */
+        post: operations["Invitations_revoke"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/invitations/accept": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Accept an invitation: set name and password
+         * @description Works once; a used, revoked or expired link answers 410.
+         */
+        post: operations["Invitations_accept"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/api-keys": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** API keys: prefix, name, scopes, creator, last use, expiry, state (never the secret) */
+        get: operations["ApiKeys_list"];
+        put?: never;
+        /**
+         * Issue an API key
+         * @description The response carries `secret` — the only time it is shown. Send it in the X-Api-Key header.
+         */
+        post: operations["ApiKeys_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/api-keys/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One API key (never the secret) */
+        get: operations["ApiKeys_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/api-keys/{id}/revoke": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Revoke a key at once */
+        post: operations["ApiKeys_revoke"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/api-keys/{id}/rotate": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Rotate a key: a new secret now, the old one valid for the grace period */
+        post: operations["ApiKeys_rotate"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/auth/sign-in": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Sign in with e-mail and password
+         * @description Failed attempts are throttled per account and per address (429 with Retry-After). The message never says whether the e-mail exists.
+         */
+        post: operations["Auth_signIn"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/auth/refresh": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Trade a refresh token for a new session
+         * @description Refresh tokens rotate: each works once. Presenting a used one ends every session of its family.
+         */
+        post: operations["Auth_refresh"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/auth/sign-out": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** End the session of a refresh token (and its rotations) */
+        post: operations["Auth_signOut"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/me": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The signed-in person, their organization and allowed actions */
+        get: operations["Auth_me"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        /** Change one’s own name, unit system, notification setting or password */
+        patch: operations["Auth_updateMe"];
+        trace?: never;
+    };
+    "/v1/devices": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Scales, thermometers, hygrometers, loggers and gateways */
+        get: operations["Devices_list"];
+        put?: never;
+        /**
+         * Register a device
+         * @description Scales need readability (the division d) and capacity, in any mass unit; stored in kg.
+         */
+        post: operations["Devices_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/devices/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One device */
+        get: operations["Devices_get"];
+        /** Change a device (station, calibration due date, readability, retired) */
+        put: operations["Devices_update"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/material-systems": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Material systems (two-part formulations), each at its current revision */
+        get: operations["MaterialSystems_list"];
+        put?: never;
+        /**
+         * Define a material system
+         * @description Quantities in any accepted unit; stored in SI. The mix ratio tolerance is ±5 % unless given.
+         */
+        post: operations["MaterialSystems_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/material-systems/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One material system at its current revision */
+        get: operations["MaterialSystems_get"];
+        /**
+         * Revise a material system
+         * @description The whole system again. A change of any parameter writes a new revision and makes it current.
+         */
+        put: operations["MaterialSystems_update"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/material-systems/{id}/revisions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Every revision of a material system, newest first
+         * @description Batches keep the revision they were computed with.
+         */
+        get: operations["MaterialSystems_revisions"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/material-systems/{id}/documents": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The system's SDS and TDS documents
+         * @description Everyone who reads shop data can reach the SDS of every chemical they handle.
+         */
+        get: operations["Documents_list"];
+        put?: never;
+        /** Upload an SDS or TDS (PDF, multipart/form-data) */
+        post: operations["Documents_upload"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/material-systems/{id}/documents/{documentId}/content": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Download a document (application/pdf) */
+        get: operations["Documents_content"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/lots": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Component lots (part A, part B, pigment) with their received, opened and expiry dates */
+        get: operations["Lots_list"];
+        put?: never;
+        /** Record a received lot */
+        post: operations["Lots_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/lots/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One lot */
+        get: operations["Lots_get"];
+        /**
+         * Change a lot (e.g. the date it was opened)
+         * @description Part and material system cannot change once batches or cup tests use the lot.
+         */
+        put: operations["Lots_update"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/molds": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Molds with their cavity volumes (m³) */
+        get: operations["Molds_list"];
+        put?: never;
+        /**
+         * Define a mold
+         * @description Cavity from box or cylinder dimensions, a water fill (mass ÷ density of water at its temperature) or an entered volume; less inserts; times cavities.
+         */
+        post: operations["Molds_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/molds/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One mold */
+        get: operations["Molds_get"];
+        /** Change a mold (the whole record) */
+        put: operations["Molds_update"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/work-orders": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Work orders */
+        get: operations["WorkOrders_list"];
+        put?: never;
+        /**
+         * Post a work order (the ERP, with a key scoped work-orders:write)
+         * @description Idempotent on externalRef: the same reference and body again answers 200 with the existing order; a different body for the same reference answers 409.
+         */
+        post: operations["WorkOrders_post"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/work-orders/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One work order */
+        get: operations["WorkOrders_get"];
+        /** Change a work order (state, quantity, due date, ...) */
+        put: operations["WorkOrders_update"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/targets/preview": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Compute batch targets without storing anything
+         * @description A system (by id, or inline) and a mold (by id, inline, or a free-rise cup) with options give every figure with its unit and SI alongside, warnings, and the cautions. Nothing is written.
+         */
+        post: operations["Targets_preview"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/batches": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Batches (one mix each), newest first */
+        get: operations["Batches_list"];
+        put?: never;
+        /**
+         * Plan a batch and compute its targets
+         * @description From a work order or ad hoc. The targets are computed once, now, and stored with every input and the computation version.
+         */
+        post: operations["Batches_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/batches/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One batch, with a summary of its targets (kg) */
+        get: operations["Batches_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/batches/{id}/targets": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The targets stored with a batch
+         * @description Exactly as computed when the batch was planned (the system revision and mold volume of that moment), in the caller's unit system with SI alongside.
+         */
+        get: operations["Batches_targets"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/batches/{id}/transitions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The state history of a batch */
+        get: operations["Batches_transitions"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/batches/{id}/release": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Release a batch
+         * @description When every rejected reading of the batch was waived (or none was rejected); 409 otherwise.
+         */
+        post: operations["Batches_release"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/readings": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Readings and their verdicts (the review queue is status=rejected) */
+        get: operations["Readings_list"];
+        put?: never;
+        /**
+         * Post one reading
+         * @description 202 with a status URL; judged by a queued job. The same (device, clientReadingId) again answers 200 with the first reading and replayed: true.
+         */
+        post: operations["Readings_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/readings/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One reading, with its verdict and reasons */
+        get: operations["Readings_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/readings/bulk": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Post up to 1000 readings
+         * @description All or nothing: one bad item refuses the whole post, with a pointer to each bad field.
+         */
+        post: operations["Readings_bulk"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/readings/{id}/review": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Waive or uphold a rejected reading
+         * @description A waiver needs a note; upholding holds the batch, or scraps it with scrap: true.
+         */
+        post: operations["Readings_review"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/imports": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Imports, newest first */
+        get: operations["Imports_list"];
+        put?: never;
+        /**
+         * Import a logger CSV
+         * @description 202 with the import and its status URL; a queued job checks and ingests every row (GET /v1/imports/{id} shows processed/total, percent and the bad rows with their line numbers).
+         */
+        post: operations["Imports_upload"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/imports/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One import: status, progress and bad rows */
+        get: operations["Imports_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/qc-cup-tests": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** QC cup tests (ASTM D7487 terms: cream, top-of-cup and tack-free times; free-rise density) */
+        get: operations["QcCupTests_list"];
+        put?: never;
+        /**
+         * Record a cup test
+         * @description It joins the system's least-squares fit of expected free-rise density against component temperature.
+         */
+        post: operations["QcCupTests_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/qc-cup-tests/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One cup test */
+        get: operations["QcCupTests_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/material-systems/{id}/free-rise-fit": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The least-squares line of the system's cup tests: free-rise density against component temperature
+         * @description Null fit below three cups or when all were at one temperature.
+         */
+        get: operations["QcCupTests_fit"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/events": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The event feed, for systems that poll instead of receiving webhooks
+         * @description Pass the `next` cursor of one page as `after` to get the following page; every event appears once, in order. Types: webhook.test, reading.accepted, reading.rejected, reading.waived, reading.upheld, batch.created, batch.state_changed, batch.released, batch.on_hold, batch.scrapped, work_order.created, work_order.changed.
+         */
+        get: operations["Events_feed"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/webhook-endpoints": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Webhook endpoints (never their secrets) */
+        get: operations["WebhookEndpoints_list"];
+        put?: never;
+        /**
+         * Add an endpoint
+         * @description The response carries `secret` (Standard Webhooks `whsec_…`), shown this once. URLs must be http(s) and resolve to public addresses.
+         */
+        post: operations["WebhookEndpoints_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/webhook-endpoints/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One webhook endpoint */
+        get: operations["WebhookEndpoints_get"];
+        /** Change an endpoint (URL, description, event types, enabled) */
+        put: operations["WebhookEndpoints_update"];
+        post?: never;
+        /** Remove an endpoint (returns what was removed) */
+        delete: operations["WebhookEndpoints_remove"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/webhook-endpoints/{id}/rotate-secret": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * New signing secret; both sign during the overlap
+         * @description During the overlap every delivery carries two signatures in webhook-signature, so receivers can switch at their pace.
+         */
+        post: operations["WebhookEndpoints_rotate"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/webhook-endpoints/{id}/test": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Send a webhook.test event now and see what the receiver answered */
+        post: operations["WebhookEndpoints_test"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/webhook-deliveries": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The delivery log: status, attempts, last answer, next attempt */
+        get: operations["WebhookDeliveries_list"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/webhook-deliveries/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One delivery with every attempt */
+        get: operations["WebhookDeliveries_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/webhook-deliveries/{id}/replay": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Send a finished (delivered, dead or cancelled) delivery again, same webhook-id */
+        post: operations["WebhookDeliveries_replay"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/webhook-deliveries/replay": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Replay every dead-lettered delivery since a time (optionally of one endpoint) */
+        post: operations["WebhookDeliveries_replayAll"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/health": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Liveness: the process answers
+         * @description Never touches PostgreSQL or Redis.
+         */
+        get: operations["Health_alive"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/ready": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Readiness: PostgreSQL and Redis are reachable */
+        get: operations["Health_ready"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+}
+export interface webhooks {
+    "webhook.test": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A test event sent from POST /v1/webhook-endpoints/{id}/test
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "webhook.test";
+                        data?: components["schemas"]["event.webhook.test"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "reading.accepted": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A reading was judged within every tolerance
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "reading.accepted";
+                        data?: components["schemas"]["event.reading.accepted"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "reading.rejected": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A reading was judged outside a tolerance; the reasons say which and by how much
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "reading.rejected";
+                        data?: components["schemas"]["event.reading.rejected"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "reading.waived": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * An engineer accepted a rejected reading anyway, with a note
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "reading.waived";
+                        data?: components["schemas"]["event.reading.waived"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "reading.upheld": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * An engineer confirmed a rejection
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "reading.upheld";
+                        data?: components["schemas"]["event.reading.upheld"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "batch.created": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A batch was planned and its targets computed
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "batch.created";
+                        data?: components["schemas"]["event.batch.created"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "batch.state_changed": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A batch moved from one state to another
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "batch.state_changed";
+                        data?: components["schemas"]["event.batch.state_changed"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "batch.released": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A batch was released: every rejection waived or none
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "batch.released";
+                        data?: components["schemas"]["event.batch.released"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "batch.on_hold": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A batch was put on hold pending review
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "batch.on_hold";
+                        data?: components["schemas"]["event.batch.on_hold"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "batch.scrapped": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A batch was scrapped
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "batch.scrapped";
+                        data?: components["schemas"]["event.batch.scrapped"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "work_order.created": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A work order arrived (from the ERP or an engineer)
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "work_order.created";
+                        data?: components["schemas"]["event.work_order.created"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "work_order.changed": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A work order was changed
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "work_order.changed";
+                        data?: components["schemas"]["event.work_order.changed"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+}
+export interface components {
+    schemas: {
+        /** Issue an API key */
+        "api-key.create": {
+            /** @example Scale at station 2 */
+            name: string;
+            /**
+             * @description device: a scale, thermometer or logger (may be bound to one device); integration: an ERP or other system
+             * @enum {unknown}
+             */
+            kind: "device" | "integration";
+            /**
+             * @default live
+             * @enum {unknown}
+             */
+            environment?: "live" | "test";
+            scopes: ("readings:write" | "targets:read" | "work-orders:write" | "events:read" | "devices:read" | "shop:read")[];
+            /**
+             * Format: uuid
+             * @description Bind a device key to one device: its readings are then attributed to it
+             */
+            deviceId?: string | null;
+            /** Format: date-time */
+            expiresAt?: string | null;
+        };
+        /** Rotate an API key */
+        "api-key.rotate": {
+            /**
+             * @description How long the old secret keeps working (at most 7 days), so devices can be switched over
+             * @default 86400
+             */
+            graceSeconds?: number;
+        };
+        /** Refresh or end a session */
+        "auth.refresh": {
+            refreshToken: string;
+        };
+        /** A signed-in session */
+        "auth.session": {
+            /** @description JWT for Authorization: Bearer; short-lived */
+            accessToken: string;
+            /** Format: date-time */
+            accessTokenExpiresAt: string;
+            /** @description One use only: each refresh returns a new one */
+            refreshToken: string;
+            /** Format: date-time */
+            refreshTokenExpiresAt: string;
+            user: components["schemas"]["me"];
+        };
+        /** Sign in */
+        "auth.sign-in": {
+            /** Format: email */
+            email: string;
+            password: string;
+        };
+        /**
+         * How to pour: density, pigment, allowances, scale, lots
+         * @description Give a targetDensity or a packFactor (or neither, to use the mold's default pack factor). Percents are numbers (5 = 5 %).
+         */
+        "batch-options": {
+            /** @description Molded (packed) density to aim at (density) */
+            targetDensity?: components["schemas"]["quantity"];
+            /** @description Molded density ÷ free-rise density */
+            packFactor?: number;
+            /** @description Pigment, percent of A+B */
+            pigmentPercent?: number;
+            /** @description Extra foam over what the cavity holds, percent of the foam mass */
+            overfillPercent?: number;
+            /** @description Share of the mixed mass left in the container, percent */
+            retentionPercent?: number;
+            /** @description multiplicative: m × (1 + a); delivered: m ÷ (1 − a). Default: overfill multiplicative, retention delivered. */
+            allowanceConvention?: {
+                /** @enum {unknown} */
+                overfill: "multiplicative" | "delivered";
+                /** @enum {unknown} */
+                retention: "multiplicative" | "delivered";
+            };
+            /** @description Measured component temperature, for the expected free-rise density (temperature) */
+            componentTemperature?: components["schemas"]["quantity"];
+            /**
+             * Format: uuid
+             * @description A registered scale: masses are rounded to its readability
+             */
+            scaleDeviceId?: string;
+            /** @description A scale given inline (instead of scaleDeviceId) */
+            scale?: {
+                readability: components["schemas"]["quantity"];
+                capacity?: components["schemas"]["quantity"];
+                /** Format: date */
+                calibrationDueOn?: string;
+            };
+            lots?: {
+                /** Format: uuid */
+                A?: string;
+                /** Format: uuid */
+                B?: string;
+                /** Format: uuid */
+                pigment?: string;
+            };
+            /**
+             * Format: date
+             * @description The day of the pour (lot expiry and calibration are judged for it); today when not given
+             */
+            plannedFor?: string;
+            /** @description Scale divisions the ratio band on the smaller part must span (5 when not given) */
+            minimumToleranceDivisions?: number;
+        };
+        /**
+         * Plan a batch (one mix) and compute its targets
+         * @description From a work order (its mold and material system are used unless given) or ad hoc. Give a moldId, or freeRiseCup for a cup test.
+         */
+        "batch.create": {
+            /** Format: uuid */
+            workOrderId?: string | null;
+            /** Format: uuid */
+            materialSystemId?: string;
+            /** @description The system's current revision when not given */
+            materialSystemRevision?: number;
+            /** Format: uuid */
+            moldId?: string;
+            freeRiseCup?: {
+                volume: components["schemas"]["quantity"];
+            };
+            stationCode?: string | null;
+            options?: components["schemas"]["batch-options"];
+            notes?: string | null;
+        };
+        /** Register a device */
+        "device.create": {
+            /** @enum {unknown} */
+            kind: "scale" | "thermometer" | "hygrometer" | "logger" | "gateway";
+            serial: string;
+            name: string;
+            /** @description The station the device sits at; created on first use */
+            stationCode?: string | null;
+            /** @description Scales: the scale division d (mass) */
+            readability?: components["schemas"]["quantity"];
+            /** @description Scales: maximum capacity (mass) */
+            capacity?: components["schemas"]["quantity"];
+            /** Format: date */
+            calibrationDue?: string | null;
+            retired?: boolean;
+        };
+        /**
+         * Change a device
+         * @description PUT sends the whole record; read-only fields (id, kind, createdAt, ...) are accepted and ignored.
+         */
+        "device.update": {
+            serial?: string;
+            name?: string;
+            stationCode?: string | null;
+            readability?: components["schemas"]["quantity"] | null;
+            capacity?: components["schemas"]["quantity"] | null;
+            /** Format: date */
+            calibrationDue?: string | null;
+            retired?: boolean;
+        };
+        /**
+         * The data of a batch.created event
+         * @description A batch was planned and its targets computed
+         */
+        "event.batch.created": {
+            /** Format: uuid */
+            batchId: string;
+            /** Format: uuid */
+            workOrderId: string | null;
+            /** Format: uuid */
+            materialSystemId: string;
+            /** @enum {unknown} */
+            subject: "mold" | "free_rise_cup";
+            totalMassKg: number;
+            /** @constant */
+            state: "planned";
+        };
+        /**
+         * The data of a batch.on_hold event
+         * @description A batch was put on hold pending review
+         */
+        "event.batch.on_hold": {
+            /** Format: uuid */
+            batchId: string;
+            /** @enum {unknown} */
+            from: "planned" | "weighing" | "mixed" | "curing" | "on_hold" | "released" | "scrapped";
+            /** @enum {unknown} */
+            to: "planned" | "weighing" | "mixed" | "curing" | "on_hold" | "released" | "scrapped";
+            reason: string;
+        };
+        /**
+         * The data of a batch.released event
+         * @description A batch was released: every rejection waived or none
+         */
+        "event.batch.released": {
+            /** Format: uuid */
+            batchId: string;
+            /** @enum {unknown} */
+            from: "planned" | "weighing" | "mixed" | "curing" | "on_hold" | "released" | "scrapped";
+            /** @enum {unknown} */
+            to: "planned" | "weighing" | "mixed" | "curing" | "on_hold" | "released" | "scrapped";
+            reason: string;
+        };
+        /**
+         * The data of a batch.scrapped event
+         * @description A batch was scrapped
+         */
+        "event.batch.scrapped": {
+            /** Format: uuid */
+            batchId: string;
+            /** @enum {unknown} */
+            from: "planned" | "weighing" | "mixed" | "curing" | "on_hold" | "released" | "scrapped";
+            /** @enum {unknown} */
+            to: "planned" | "weighing" | "mixed" | "curing" | "on_hold" | "released" | "scrapped";
+            reason: string;
+        };
+        /**
+         * The data of a batch.state_changed event
+         * @description A batch moved from one state to another
+         */
+        "event.batch.state_changed": {
+            /** Format: uuid */
+            batchId: string;
+            /** @enum {unknown} */
+            from: "planned" | "weighing" | "mixed" | "curing" | "on_hold" | "released" | "scrapped";
+            /** @enum {unknown} */
+            to: "planned" | "weighing" | "mixed" | "curing" | "on_hold" | "released" | "scrapped";
+            reason: string;
+        };
+        /** Event feed query */
+        "event.feed-query": {
+            /** @description The next cursor of the previous page; omit for the oldest events */
+            after?: string;
+            /** @default 100 */
+            limit?: number;
+            /** @description Only these event types (repeat the parameter) */
+            type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
+        };
+        /** A page of the event feed */
+        "event.feed": {
+            events: components["schemas"]["event"][];
+            /** @description Pass as after= for the next page (also when empty: poll again later with it) */
+            next: string | null;
+            hasMore: boolean;
+        };
+        /**
+         * The data of a reading.accepted event
+         * @description A reading was judged within every tolerance
+         */
+        "event.reading.accepted": {
+            /** Format: uuid */
+            readingId: string;
+            /** Format: uuid */
+            batchId: string;
+            /** Format: uuid */
+            deviceId: string;
+            /** @enum {unknown} */
+            quantity: "mass" | "temperature" | "humidity" | "milestone";
+            /** @enum {unknown} */
+            subject: "part_a" | "part_b" | "pigment" | "mixed" | "mold" | "ambient" | "mix_start" | "pour" | "demold";
+            /** @constant */
+            status: "accepted";
+            reasons: components["schemas"]["reading.reason"][];
+        };
+        /**
+         * The data of a reading.rejected event
+         * @description A reading was judged outside a tolerance; the reasons say which and by how much
+         */
+        "event.reading.rejected": {
+            /** Format: uuid */
+            readingId: string;
+            /** Format: uuid */
+            batchId: string;
+            /** Format: uuid */
+            deviceId: string;
+            /** @enum {unknown} */
+            quantity: "mass" | "temperature" | "humidity" | "milestone";
+            /** @enum {unknown} */
+            subject: "part_a" | "part_b" | "pigment" | "mixed" | "mold" | "ambient" | "mix_start" | "pour" | "demold";
+            /** @constant */
+            status: "rejected";
+            reasons: components["schemas"]["reading.reason"][];
+        };
+        /**
+         * The data of a reading.upheld event
+         * @description An engineer confirmed a rejection
+         */
+        "event.reading.upheld": {
+            /** Format: uuid */
+            readingId: string;
+            /** Format: uuid */
+            batchId: string;
+            /** @constant */
+            decision: "uphold";
+            note: string | null;
+            reviewedBy: string | null;
+        };
+        /**
+         * The data of a reading.waived event
+         * @description An engineer accepted a rejected reading anyway, with a note
+         */
+        "event.reading.waived": {
+            /** Format: uuid */
+            readingId: string;
+            /** Format: uuid */
+            batchId: string;
+            /** @constant */
+            decision: "waive";
+            note: string | null;
+            reviewedBy: string | null;
+        };
+        /**
+         * An event: the body of every webhook and each item of the feed
+         * @description The webhook-id header carries the same id on every retry: receivers de-duplicate on it.
+         */
+        event: {
+            /** Format: uuid */
+            id: string;
+            /** @enum {unknown} */
+            type: "webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed";
+            /** Format: date-time */
+            occurredAt: string;
+            subject: {
+                type: string;
+                id: string;
+            };
+            /** @description Per type; see the event.<type> schemas */
+            data: Record<string, never>;
+        };
+        /**
+         * The data of a webhook.test event
+         * @description A test event sent from POST /v1/webhook-endpoints/{id}/test
+         */
+        "event.webhook.test": {
+            message: string;
+            /** Format: uuid */
+            endpointId: string;
+        };
+        /**
+         * The data of a work_order.changed event
+         * @description A work order was changed
+         */
+        "event.work_order.changed": {
+            /** Format: uuid */
+            workOrderId: string;
+            externalRef: string;
+            changed: string[];
+        };
+        /**
+         * The data of a work_order.created event
+         * @description A work order arrived (from the ERP or an engineer)
+         */
+        "event.work_order.created": {
+            /** Format: uuid */
+            workOrderId: string;
+            externalRef: string;
+            quantity: number;
+            state: string;
+        };
+        /** Accept an invitation and set a password */
+        "invitation.accept": {
+            token: string;
+            name: string;
+            /** @description At least 10 characters */
+            password: string;
+        };
+        /** Invite a person */
+        "invitation.create": {
+            /** Format: email */
+            email: string;
+            /** @enum {unknown} */
+            role: "admin" | "engineer" | "integrator" | "viewer";
+            /** @description Optional; the person can change it when accepting */
+            name?: string;
+        };
+        /** Record (POST) or change (PUT) a component lot */
+        "lot.create": {
+            /** @enum {unknown} */
+            part: "A" | "B" | "pigment";
+            /**
+             * Format: uuid
+             * @description Required for parts A and B; a pigment may serve several systems
+             */
+            materialSystemId?: string | null;
+            /** @description The supplier's lot (batch) number as printed on the drum */
+            lotNumber: string;
+            /** Format: date */
+            receivedOn: string;
+            /**
+             * Format: date
+             * @description Last day the lot may be used
+             */
+            expiresOn: string;
+            /** Format: date */
+            openedOn?: string | null;
+            notes?: string | null;
+        };
+        /**
+         * Define (POST) or revise (PUT) a material system
+         * @description The whole system: a PUT that changes any parameter writes a new revision; batches keep the revision they were computed with.
+         */
+        "material-system.create": {
+            name: unknown;
+            kind: unknown;
+        } & WithRequired<components["schemas"]["material-system.parameters"], "name" | "kind">;
+        /**
+         * A material system: a two-part polyurethane formulation
+         * @description Everything the computation needs to know about a system, in any accepted shop units (stored in SI). Used whole by POST/PUT /v1/material-systems and as an inline system by POST /v1/targets/preview.
+         */
+        "material-system.parameters": {
+            /** @example Demo Flex 28 */
+            name?: string;
+            /** @enum {unknown} */
+            kind?: "flexible" | "integral-skin" | "other";
+            /**
+             * @description Whether the mix ratio is by weight or by volume
+             * @enum {unknown}
+             */
+            ratioBasis: "weight" | "volume";
+            /** @description Mix ratio A:B in parts, e.g. 100:45 */
+            ratio: {
+                a: number;
+                b: number;
+            };
+            /** @description Specific gravity of part A (density relative to water) */
+            specificGravityA: number;
+            /** @description Specific gravity of part B */
+            specificGravityB: number;
+            /**
+             * @description Which part is the isocyanate side
+             * @enum {unknown}
+             */
+            isocyanatePart: "A" | "B";
+            /** @description Free-rise density (density) at the reference component temperature */
+            freeRiseDensity: components["schemas"]["quantity"];
+            /** @description Component temperature (temperature) the free-rise density was measured at */
+            freeRiseReferenceTemperature: components["schemas"]["quantity"];
+            /** @description Change of free-rise density per degree of component temperature; unit written <density>/<temperature>, e.g. kg/m3/degC or lb/ft3/degF (usually negative) */
+            freeRiseDensitySlope?: components["schemas"]["quantity"] | null;
+            /**
+             * @description ± tolerance on the A:B ratio, percent (5 when not given: common practice)
+             * @default 5
+             */
+            ratioTolerancePercent?: number;
+            /** @description Component temperatures the system is made for (temperature) */
+            componentTemperatureWindow?: {
+                min: components["schemas"]["quantity"];
+                max: components["schemas"]["quantity"];
+            } | null;
+            /** @description Mold surface temperatures the system is made for (temperature) */
+            moldTemperatureWindow?: {
+                min: components["schemas"]["quantity"];
+                max: components["schemas"]["quantity"];
+            } | null;
+            /** @description Shop air temperatures the system is made for (temperature) */
+            ambientTemperatureWindow?: {
+                min: components["schemas"]["quantity"];
+                max: components["schemas"]["quantity"];
+            } | null;
+            /** @description Highest relative humidity of the shop air, percent (moisture reacts with the isocyanate side) */
+            maxRelativeHumidity?: number | null;
+            /** @description ± band on weighed masses (A, B, pigment, total) against their targets, percent; the ratio tolerance when not given */
+            massTolerancePercent?: number | null;
+            /** @description Working time from when A meets B (time) */
+            potLife?: components["schemas"]["quantity"] | null;
+            /** @description Time */
+            demoldTime?: components["schemas"]["quantity"] | null;
+            /** @description Time */
+            fullCureTime?: components["schemas"]["quantity"] | null;
+            /** @description Highest pigment, percent of A+B */
+            maxPigmentPercent?: number | null;
+            /** @description Highest pack factor the system is made for (at least 1) */
+            maxPackFactor?: number | null;
+            /** @description Largest single pour the supplier allows for exotherm (mass); 2 kg when not given */
+            exothermMassLimit?: components["schemas"]["quantity"] | null;
+            /** @description %NCO of the isocyanate side */
+            ncoPercent?: number | null;
+            /** @description OH number of the polyol side as supplied, mg KOH/g */
+            hydroxylNumber?: number | null;
+            /** @description Water in the polyol side, parts per 100 parts of the polyol side */
+            waterPbw?: number | null;
+            /** @description The system's own cautions, returned after the standard ones */
+            cautionsText?: string | null;
+            /** @description Why this revision was made (PUT) */
+            changeNote?: string | null;
+        };
+        /** The signed-in person */
+        me: {
+            /** Format: uuid */
+            id: string;
+            email: string;
+            name: string;
+            /** @enum {unknown} */
+            role: "admin" | "engineer" | "integrator" | "viewer";
+            /** @enum {unknown} */
+            unitSystem: "metric" | "imperial";
+            /** @enum {unknown} */
+            notifyRejections?: "each" | "digest" | "off";
+            organization: {
+                /** Format: uuid */
+                id: string;
+                name: string;
+                /** @enum {unknown} */
+                unitSystem?: "metric" | "imperial";
+            };
+            /** @description What this person may do, from the role x action matrix */
+            actions: string[];
+        };
+        /** Change one's own profile */
+        "me.update": {
+            name?: string;
+            /** @enum {unknown} */
+            unitSystem?: "metric" | "imperial";
+            /**
+             * @description E-mail for each rejected reading, a daily digest, or none
+             * @enum {unknown}
+             */
+            notifyRejections?: "each" | "digest" | "off";
+            currentPassword?: string;
+            newPassword?: string;
+        };
+        /** Define (POST) or change (PUT) a mold */
+        "mold.create": {
+            name: unknown;
+            cavity: unknown;
+        } & WithRequired<components["schemas"]["mold.geometry"], "name" | "cavity">;
+        /**
+         * A mold: its cavity, inserts and cavities
+         * @description Used whole by POST/PUT /v1/molds and as an inline mold by POST /v1/targets/preview.
+         */
+        "mold.geometry": {
+            /** @example Seat cushion, 2-up */
+            name?: string;
+            /** @description A short code of your own, unique in the organization */
+            code?: string | null;
+            /** @description One cavity, as measured (a water fill made with the inserts in place already excludes them) */
+            cavity: components["schemas"]["volume-measurement"];
+            /** @description Inserts, cores and embedded parts of one cavity that the foam does not fill */
+            inserts?: components["schemas"]["volume-measurement"][];
+            /**
+             * @description Identical cavities filled from one mix
+             * @default 1
+             */
+            cavities?: number;
+            /** @description Pack factor used when a batch gives neither a target density nor a pack factor */
+            defaultPackFactor?: number | null;
+            notes?: string | null;
+        };
+        /** Problem details (RFC 9457) */
+        problem: {
+            /** @description A URI reference naming the kind of problem; about:blank for a plain HTTP status. */
+            type: string;
+            /** @description A short summary of the kind of problem. */
+            title: string;
+            status: number;
+            /** @description What went wrong with this request, for a person. */
+            detail?: string;
+            /** @description The path of the request. */
+            instance?: string;
+            /** @description Quote this when asking an operator about the request. */
+            requestId?: string;
+            /** @description Validation failures, each located by a JSON Pointer (RFC 6901) into the body or the query. */
+            errors?: {
+                /** @example /readings/3/value */
+                pointer: string;
+                detail: string;
+                /** @description The JSON Schema keyword or rule that failed. */
+                code?: string;
+            }[];
+        };
+        /**
+         * Record a QC cup test
+         * @description A free-rise cup test in the terms of ASTM D7487: cream time, top-of-cup time, tack-free time (from the moment A meets B) and free-rise density. Cup tests feed the least-squares fit of expected free-rise density against component temperature.
+         */
+        "qc-cup-test.create": {
+            /** Format: uuid */
+            materialSystemId: string;
+            /** Format: uuid */
+            lotAId?: string | null;
+            /** Format: uuid */
+            lotBId?: string | null;
+            /** @description Temperature */
+            componentTemperatureA: components["schemas"]["quantity"];
+            /** @description Temperature */
+            componentTemperatureB: components["schemas"]["quantity"];
+            /** @description Time */
+            creamTime?: components["schemas"]["quantity"] | null;
+            /** @description Time */
+            topOfCupTime?: components["schemas"]["quantity"] | null;
+            /** @description Time */
+            tackFreeTime?: components["schemas"]["quantity"] | null;
+            /** @description Density */
+            freeRiseDensity: components["schemas"]["quantity"];
+            /** Format: date-time */
+            testedAt: string;
+            notes?: string | null;
+        };
+        /**
+         * A measured quantity: a value and its unit
+         * @description The API accepts common shop units and stores SI. Mass: g, kg, lb, oz. Volume: mL, L, cm3, m3, in3, ft3, gal (US). Density: kg/m3, g/cm3, lb/ft3 (pcf). Temperature: degC, degF. Length: mm, cm, m, in, ft. Time: s, min, h. GET /v1/units lists them all.
+         */
+        quantity: {
+            value: number;
+            /**
+             * @example g
+             * @example lb
+             * @example degC
+             */
+            unit: string;
+        };
+        /** Up to 1000 readings at once */
+        "reading.bulk": {
+            readings: components["schemas"]["reading.create"][];
+        };
+        /**
+         * One reading from a scale, thermometer, hygrometer or logger, or a milestone of the pour
+         * @description A device key's bound device is used; people name the device with deviceId. clientReadingId makes a replay harmless. A milestone (quantity "milestone": mix_start, pour, demold) carries no value: its time is deviceTime, or when it was received; pot life is judged from mix start to pour and the demold time from pour to demold.
+         * @example {
+         *       "batchId": "6f1c2d3e-0000-4000-8000-000000000001",
+         *       "clientReadingId": "scale-2-000417",
+         *       "quantity": "mass",
+         *       "subject": "part_a",
+         *       "value": 1.254,
+         *       "unit": "kg",
+         *       "stable": true,
+         *       "deviceTime": "2026-06-01T08:15:02Z"
+         *     }
+         * @example {
+         *       "batchId": "6f1c2d3e-0000-4000-8000-000000000001",
+         *       "clientReadingId": "station-2-pour-17",
+         *       "quantity": "milestone",
+         *       "subject": "pour",
+         *       "deviceTime": "2026-06-01T08:16:40Z"
+         *     }
+         */
+        "reading.create": {
+            /** Format: uuid */
+            batchId: string;
+            /** Format: uuid */
+            deviceId?: string;
+            clientReadingId: string;
+            /** @enum {unknown} */
+            quantity: "mass" | "temperature" | "humidity" | "milestone";
+            /** @enum {unknown} */
+            subject: "part_a" | "part_b" | "pigment" | "mixed" | "mold" | "ambient" | "mix_start" | "pour" | "demold";
+            /** @description Required except for a milestone */
+            value?: number;
+            /** @description Required except for a milestone: kg, g, lb, oz; degC, degF, K; % for humidity */
+            unit?: string;
+            /**
+             * @description The scale's stable (motion) flag; unstable masses are kept but not judged
+             * @default true
+             */
+            stable?: boolean;
+            /**
+             * Format: date-time
+             * @description The device's clock; readings are ordered by it and a skew over 300 s from the received time is flagged
+             */
+            deviceTime?: string;
+        };
+        /**
+         * A reason in a reading's verdict
+         * @description Why a reading was rejected (or set aside): what was measured against which limit, in which unit
+         */
+        "reading.reason": {
+            /** @example RATIO_ISOCYANATE_HEAVY */
+            code: string;
+            message: string;
+            measured: number | null;
+            limit: number | null;
+            /**
+             * @example %
+             * @example kg
+             * @example degC
+             * @example s
+             */
+            unit: string | null;
+        };
+        /**
+         * Waive or uphold a rejected reading
+         * @description A waiver needs a note. Upholding puts the batch on hold, or scraps it with scrap: true.
+         */
+        "reading.review": {
+            /** @enum {unknown} */
+            decision: "waive" | "uphold";
+            note?: string;
+            /** @default false */
+            scrap?: boolean;
+        };
+        /**
+         * Compute batch targets without storing anything
+         * @description A system by id (current or a given revision) or inline; a mold by id or inline, or a free-rise cup; and the options.
+         */
+        "targets.preview": {
+            system: {
+                /** Format: uuid */
+                id?: string;
+                revision?: number;
+            };
+            mold?: {
+                /** Format: uuid */
+                id?: string;
+            };
+            freeRiseCup?: {
+                volume: components["schemas"]["quantity"];
+            };
+            options?: components["schemas"]["batch-options"];
+        };
+        /**
+         * Change a person (admin)
+         * @description PUT sends the whole record as the console has it; only name, role and disabled are changed, other known fields are ignored.
+         */
+        "user.update": {
+            name?: string;
+            /** @enum {unknown} */
+            role?: "admin" | "engineer" | "integrator" | "viewer";
+            disabled?: boolean;
+            id?: string;
+            email?: string;
+            /** @enum {unknown} */
+            unitSystem?: "metric" | "imperial";
+            /** @enum {unknown} */
+            notifyRejections?: "each" | "digest" | "off";
+            lastSignInAt?: string | null;
+            createdAt?: string;
+        };
+        /**
+         * How a volume was measured
+         * @description box: inside length × width × height; cylinder: inside diameter and height; water_fill: mass of the water that fills it and the water's temperature (0–40 °C); entered: a volume from CAD. The fields each kind needs are required (422 with a pointer when one is missing).
+         */
+        "volume-measurement": {
+            /** @enum {unknown} */
+            kind: "box" | "cylinder" | "water_fill" | "entered";
+            length?: components["schemas"]["quantity"];
+            width?: components["schemas"]["quantity"];
+            height?: components["schemas"]["quantity"];
+            diameter?: components["schemas"]["quantity"];
+            waterMass?: components["schemas"]["quantity"];
+            waterTemperature?: components["schemas"]["quantity"];
+            volume?: components["schemas"]["quantity"];
+        };
+        /** Replay dead-lettered deliveries */
+        "webhook-delivery.replay": {
+            /** Format: date-time */
+            since: string;
+            /** Format: uuid */
+            endpointId?: string;
+        };
+        /** Add a webhook endpoint */
+        "webhook-endpoint.create": {
+            /** @description http(s) URL of the receiver; must resolve to public addresses */
+            url: string;
+            description?: string;
+            /** @description Empty or omitted: every event type */
+            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
+            enabled?: boolean;
+        };
+        /** Rotate the signing secret */
+        "webhook-endpoint.rotate": {
+            /**
+             * @description How long the old secret keeps signing alongside the new one
+             * @default 86400
+             */
+            overlapSeconds?: number;
+        };
+        /**
+         * Change a webhook endpoint
+         * @description PUT sends the whole record; read-only fields are ignored.
+         */
+        "webhook-endpoint.update": {
+            /** @description http(s) URL of the receiver; must resolve to public addresses */
+            url?: string;
+            description?: string;
+            /** @description Empty or omitted: every event type */
+            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
+            enabled?: boolean;
+        };
+        /**
+         * Post a work order
+         * @description Idempotent on externalRef: the same reference with the same body answers 200 with the existing order; with another body, 409.
+         */
+        "work-order.create": {
+            /**
+             * @description The ERP's own reference for the order, unique in the organization
+             * @example WO-2026-00417
+             */
+            externalRef: string;
+            /** @description The ERP's part number */
+            partNumber?: string | null;
+            /** Format: uuid */
+            moldId?: string | null;
+            /** Format: uuid */
+            materialSystemId?: string | null;
+            /** @description Parts to make */
+            quantity: number;
+            /** Format: date */
+            dueOn?: string | null;
+            notes?: string | null;
+            /**
+             * @default open
+             * @enum {unknown}
+             */
+            state?: "open" | "in_progress" | "done" | "cancelled";
+        };
+        /**
+         * Change a work order
+         * @description Fields not sent are kept. The externalRef cannot change.
+         */
+        "work-order.update": {
+            /** @description Accepted only when it equals the stored one */
+            externalRef?: string;
+            partNumber?: string | null;
+            /** Format: uuid */
+            moldId?: string | null;
+            /** Format: uuid */
+            materialSystemId?: string | null;
+            quantity?: number;
+            /** Format: date */
+            dueOn?: string | null;
+            notes?: string | null;
+            /** @enum {unknown} */
+            state?: "open" | "in_progress" | "done" | "cancelled";
+        };
+    };
+    responses: never;
+    parameters: never;
+    requestBodies: never;
+    headers: never;
+    pathItems: never;
+}
+export type $defs = Record<string, never>;
+export interface operations {
+    Audit_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: createdAt, action, id */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: action, actorId, actorType, targetId, createdAt_gte, createdAt_lte */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description audit-events <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action audit:read (roles: admin) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Users_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: name, email, role, createdAt, lastSignInAt */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: q, role, disabled, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description users <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action people:read (roles: admin) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Users_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action people:read (roles: admin) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Users_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["user.update"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action people:manage (roles: admin) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Invitations_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: createdAt, email, expiresAt */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: email, role, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description invitations <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action people:read (roles: admin) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Invitations_invite: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["invitation.create"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action people:manage (roles: admin) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Invitations_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action people:read (roles: admin) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Invitations_revoke: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action people:manage (roles: admin) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Invitations_accept: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["invitation.accept"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    ApiKeys_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: createdAt, name, lastUsedAt, expiresAt */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: q, kind, environment, deviceId, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description api-keys <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action api-keys:read (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    ApiKeys_create: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["api-key.create"];
+            };
+        };
+        responses: {
+            /** @description The key, with its secret (shown once) */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action api-keys:manage (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    ApiKeys_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action api-keys:read (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    ApiKeys_revoke: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action api-keys:manage (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    ApiKeys_rotate: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["api-key.rotate"];
+            };
+        };
+        responses: {
+            /** @description The successor key, with its secret (shown once) */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action api-keys:manage (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Auth_signIn: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["auth.sign-in"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["auth.session"];
+                };
+            };
+            /** @description Throttled */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Auth_refresh: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["auth.refresh"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["auth.session"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Auth_signOut: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["auth.refresh"];
+            };
+        };
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Auth_me: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["me"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action profile:read (roles: admin, engineer, integrator, viewer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Auth_updateMe: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["me.update"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["me"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action profile:read (roles: admin, engineer, integrator, viewer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Devices_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: name, serial, kind, calibrationDue, createdAt */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: q, kind, stationId, retired, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description devices <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action devices:read (roles: admin, engineer, integrator, viewer; key scope devices:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Devices_create: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["device.create"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action devices:manage (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Devices_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action devices:read (roles: admin, engineer, integrator, viewer; key scope devices:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Devices_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["device.update"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action devices:manage (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    MaterialSystems_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: name, kind, revision, createdAt, updatedAt */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: q, kind, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description material-systems <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    MaterialSystems_create: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["material-system.create"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:write (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    MaterialSystems_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    MaterialSystems_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["material-system.create"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:write (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    MaterialSystems_revisions: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: revision, createdAt */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: none */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description material-system-revisions <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Documents_list: {
+        parameters: {
+            query: {
+                kind: string;
+            };
+            header?: never;
+            path: {
+                /** @description Material system id */
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Documents_upload: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                /** @description Material system id */
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /**
+                     * @description SDS (safety data sheet) or TDS (technical data sheet)
+                     * @enum {unknown}
+                     */
+                    kind: "SDS" | "TDS";
+                    title?: string;
+                    /**
+                     * Format: binary
+                     * @description The PDF; checked by its content (%PDF-), size limited (413 above the limit)
+                     */
+                    file: string;
+                };
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:write (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Documents_content: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description Material system id */
+                id: string;
+                documentId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Lots_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: lotNumber, part, receivedOn, expiresOn, createdAt */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: q, part, materialSystemId, expiresBefore, expiresAfter, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description lots <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Lots_create: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["lot.create"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:write (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Lots_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Lots_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["lot.create"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:write (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Molds_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: name, code, cavityVolumeM3, totalVolumeM3, createdAt */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: q, code, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description molds <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Molds_create: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["mold.create"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:write (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Molds_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Molds_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["mold.create"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:write (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WorkOrders_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: externalRef, dueOn, state, quantity, createdAt, updatedAt */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: q, externalRef, state, moldId, materialSystemId, dueBefore, dueAfter, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description work-orders <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WorkOrders_post: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["work-order.create"];
+            };
+        };
+        responses: {
+            /** @description Already posted with this body: the existing order */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Created */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action work-orders:write (roles: engineer; key scope work-orders:write) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Already posted with a different body */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WorkOrders_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WorkOrders_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["work-order.update"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action work-orders:write (roles: engineer; key scope work-orders:write) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Targets_preview: {
+        parameters: {
+            query?: {
+                /** @description Unit system of the figures (SI is always alongside); the caller's preference when not given */
+                units?: "metric" | "imperial";
+            };
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["targets.preview"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action targets:read (roles: admin, engineer, integrator, viewer; key scope targets:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Batches_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: createdAt, plannedFor, state, totalMassKg */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: state, workOrderId, moldId, materialSystemId, plannedAfter, plannedBefore, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description batches <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Batches_create: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["batch.create"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:write (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Batches_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Batches_targets: {
+        parameters: {
+            query?: {
+                /** @description Unit system of the figures (SI is always alongside); the caller's preference when not given */
+                units?: "metric" | "imperial";
+            };
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action targets:read (roles: admin, engineer, integrator, viewer; key scope targets:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Batches_transitions: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: at */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: none */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description batch-state-transitions <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Batches_release: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action readings:review (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Readings_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: receivedAt, deviceTime, status, judgedAt */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: status, batchId, deviceId, quantity, subject, reasonCode, receivedAfter, receivedBefore, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description readings <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action readings:read (roles: admin, engineer, integrator, viewer; key scope readings:write) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Readings_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["reading.create"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action readings:write (roles: engineer; key scope readings:write) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Readings_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action readings:read (roles: admin, engineer, integrator, viewer; key scope readings:write) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Readings_bulk: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["reading.bulk"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action readings:write (roles: engineer; key scope readings:write) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Readings_review: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["reading.review"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action readings:review (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Imports_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: createdAt, status */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: status, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description imports <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action readings:read (roles: admin, engineer, integrator, viewer; key scope readings:write) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Imports_upload: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /**
+                     * Format: binary
+                     * @description A logger CSV (UTF-8, at most 5 MB) with a header row naming its columns, in any order: client_reading_id, batch_id, quantity, subject (required), device_id, device_time, value, unit, stable. One reading per row, as in POST /v1/readings; device_id may be empty for a device key.
+                     */
+                    file: string;
+                };
+            };
+        };
+        responses: {
+            /** @description This file was uploaded before: the first import */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Queued */
+            202: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action imports:write (roles: engineer, integrator; key scope readings:write) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Imports_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action readings:read (roles: admin, engineer, integrator, viewer; key scope readings:write) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    QcCupTests_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: testedAt, freeRiseDensityKgM3, createdAt */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: materialSystemId, testedAfter, testedBefore, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description qc-cup-tests <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    QcCupTests_create: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["qc-cup-test.create"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:write (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    QcCupTests_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    QcCupTests_fit: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Events_feed: {
+        parameters: {
+            query?: {
+                after?: string;
+                limit?: number;
+                type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["event.feed"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action events:read (roles: admin, engineer, integrator; key scope events:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WebhookEndpoints_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: createdAt, url */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: enabled, q, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description webhook-endpoints <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action webhooks:read (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WebhookEndpoints_create: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["webhook-endpoint.create"];
+            };
+        };
+        responses: {
+            /** @description The endpoint with its signing secret */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action webhooks:manage (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WebhookEndpoints_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action webhooks:read (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WebhookEndpoints_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["webhook-endpoint.update"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action webhooks:manage (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WebhookEndpoints_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action webhooks:manage (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WebhookEndpoints_rotate: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["webhook-endpoint.rotate"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action webhooks:manage (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WebhookEndpoints_test: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description statusCode, durationMs, responseSnippet or error, and verdict */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action webhooks:manage (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WebhookDeliveries_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: createdAt, updatedAt, status, attempts */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: endpointId, status, eventType, eventId, createdAt_gte, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description webhook-deliveries <start>-<end>/<total> */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action webhooks:read (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WebhookDeliveries_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action webhooks:read (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WebhookDeliveries_replay: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action webhooks:manage (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WebhookDeliveries_replayAll: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["webhook-delivery.replay"];
+            };
+        };
+        responses: {
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action webhooks:manage (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Health_alive: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        /** @enum {string} */
+                        status?: "ok";
+                        /** Format: date-time */
+                        startedAt?: string;
+                    };
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Health_ready: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The Health Check is successful */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        /**
+                         * @example ok
+                         * @enum {string}
+                         */
+                        status?: "ok" | "degraded";
+                        /**
+                         * @example {
+                         *       "database": {
+                         *         "status": "up",
+                         *         "responseTime": 12
+                         *       }
+                         *     }
+                         */
+                        info?: {
+                            [key: string]: {
+                                /** @enum {string} */
+                                status: "up" | "degraded" | "down";
+                                /** @description Time the health indicator took to respond, in ms */
+                                responseTime?: number;
+                            } & {
+                                [key: string]: unknown;
+                            };
+                        } | null;
+                        /** @example {} */
+                        error?: {
+                            [key: string]: {
+                                /** @enum {string} */
+                                status: "up" | "degraded" | "down";
+                                /** @description Time the health indicator took to respond, in ms */
+                                responseTime?: number;
+                            } & {
+                                [key: string]: unknown;
+                            };
+                        } | null;
+                        /**
+                         * @example {
+                         *       "database": {
+                         *         "status": "up",
+                         *         "responseTime": 12
+                         *       }
+                         *     }
+                         */
+                        details?: {
+                            [key: string]: {
+                                /** @enum {string} */
+                                status: "up" | "degraded" | "down";
+                                /** @description Time the health indicator took to respond, in ms */
+                                responseTime?: number;
+                            } & {
+                                [key: string]: unknown;
+                            };
+                        };
+                    };
+                };
+            };
+            /**
+             * @description A dependency is down (problem+json, with per-check details)
+             *
+             *     The Health Check is not successful
+             */
+            503: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        /**
+                         * @example error
+                         * @enum {string}
+                         */
+                        status?: "error" | "shutting_down";
+                        /**
+                         * @example {
+                         *       "database": {
+                         *         "status": "up",
+                         *         "responseTime": 12
+                         *       }
+                         *     }
+                         */
+                        info?: {
+                            [key: string]: {
+                                /** @enum {string} */
+                                status: "up" | "degraded" | "down";
+                                /** @description Time the health indicator took to respond, in ms */
+                                responseTime?: number;
+                            } & {
+                                [key: string]: unknown;
+                            };
+                        } | null;
+                        /**
+                         * @example {
+                         *       "redis": {
+                         *         "status": "down",
+                         *         "message": "Could not connect",
+                         *         "responseTime": 3005
+                         *       }
+                         *     }
+                         */
+                        error?: {
+                            [key: string]: {
+                                /** @enum {string} */
+                                status: "up" | "degraded" | "down";
+                                /** @description Time the health indicator took to respond, in ms */
+                                responseTime?: number;
+                            } & {
+                                [key: string]: unknown;
+                            };
+                        } | null;
+                        /**
+                         * @example {
+                         *       "database": {
+                         *         "status": "up",
+                         *         "responseTime": 12
+                         *       },
+                         *       "redis": {
+                         *         "status": "down",
+                         *         "message": "Could not connect",
+                         *         "responseTime": 3005
+                         *       }
+                         *     }
+                         */
+                        details?: {
+                            [key: string]: {
+                                /** @enum {string} */
+                                status: "up" | "degraded" | "down";
+                                /** @description Time the health indicator took to respond, in ms */
+                                responseTime?: number;
+                            } & {
+                                [key: string]: unknown;
+                            };
+                        };
+                    };
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+}
+type WithRequired<T, K extends keyof T> = T & {
+    [P in K]-?: T[P];
+};
