@@ -90,9 +90,12 @@ try {
   }
   if (seeded) {
     step('typecheck (tsc --noEmit)', process.execPath, [path.join(ROOT, 'node_modules/typescript/bin/tsc'), '-p', 'api', '--noEmit']);
+    step('typecheck of the SDK (tsc -p sdk)', process.execPath, [path.join(ROOT, 'node_modules/typescript/bin/tsc'), '-p', 'sdk', '--noEmit']);
     step('jest: unit, reference and e2e suites', process.execPath, [
       '--experimental-vm-modules', path.join(ROOT, 'node_modules/jest/bin/jest.js'), '--maxWorkers=2', ...process.argv.slice(2),
     ], { NODE_OPTIONS: '--experimental-vm-modules --no-warnings' });
+    // kills the API and stops its own PostgreSQL (55641) and Redis (56641) mid-ingest: never these suites' servers
+    if (process.argv.length <= 2) step('fault suite, small counts (test/faults/run.ts)', process.execPath, ['--import', 'tsx', path.join(ROOT, 'test/faults/run.ts')], { FAULTS_SCALE: 'small' });
   }
   if (results.find((r) => r.name === 'console: production build')?.ok) await browserSuite();
 } finally {
