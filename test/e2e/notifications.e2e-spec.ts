@@ -48,7 +48,8 @@ describe('e-mail about rejected readings', () => {
     expect(each.text).toContain('part B (mass)');
     expect(each.text).toContain('from Bench scale 2');
     expect(each.text).toMatch(/measured -16\.6+7 % against a limit of -5 %/);
-    expect(each.text).toContain(`http://127.0.0.1:3000/#/review?reading=${off.body.id}`);
+    expect(each.text).toContain(`http://127.0.0.1:3000/#/readings?filter=${encodeURIComponent(JSON.stringify({ status: 'rejected', batchId: batch.body.id }))}`);
+    expect(each.text).toContain(off.body.id);
     expect(each.text).toMatch(/SDS/);
 
     const digest = await mail.waitFor((m) => m.to.includes(digestEmail), 20_000);

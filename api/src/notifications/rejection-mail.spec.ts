@@ -20,7 +20,8 @@ describe('rejection e-mail', () => {
     expect(m.subject).toBe('Rejected reading on batch B-0001: RATIO_ISOCYANATE_HEAVY');
     expect(m.text).toContain('part B (mass)');
     expect(m.text).toContain('measured -5.1 % against a limit of -5 %');
-    expect(m.text).toContain(reviewLink('http://127.0.0.1:3000', 'r-1'));
+    expect(m.text).toContain(reviewLink('http://127.0.0.1:3000', 'b-1'));
+    expect(reviewLink('http://x/', 'b-1')).toBe('http://x/#/readings?filter=%7B%22status%22%3A%22rejected%22%2C%22batchId%22%3A%22b-1%22%7D');
     expect(m.text).toMatch(/SDS/);
   });
   it('gathers a digest with one block per reading', () => {

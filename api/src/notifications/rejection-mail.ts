@@ -23,8 +23,9 @@ export function figures(r: NoticeFacts['reasons'][number]): string {
   return `measured ${r.measured}${u} against a limit of ${r.limit}${u}`;
 }
 
-export function reviewLink(publicUrl: string, readingId: string): string {
-  return `${publicUrl.replace(/\/$/, '')}/#/review?reading=${encodeURIComponent(readingId)}`;
+/** The console's review queue, filtered to the batch's rejected readings. */
+export function reviewLink(publicUrl: string, batchId: string): string {
+  return `${publicUrl.replace(/\/$/, '')}/#/readings?filter=${encodeURIComponent(JSON.stringify({ status: 'rejected', batchId }))}`;
 }
 
 const CAUTION = 'Before handling a held batch: wear the protective equipment its SDS names (isocyanates sensitise skin and lungs), keep a mixed mass that is curing away from people and combustibles (it can get very hot), and follow your local rules.';
@@ -33,7 +34,8 @@ function block(n: NoticeFacts, publicUrl: string): string {
   const lines = [
     `Batch ${n.batchLabel} — ${SUBJECT_WORDS[n.subject] ?? n.subject} (${n.quantity}) at ${n.takenAt}${n.deviceName ? `, from ${n.deviceName}` : ''}`,
     ...n.reasons.map((r) => `  • ${r.code}: ${r.message}${figures(r) ? ` (${figures(r)})` : ''}`),
-    `  Review: ${reviewLink(publicUrl, n.readingId)}`,
+    `  Review: ${reviewLink(publicUrl, n.batchId)}`,
+    `  Reading: ${n.readingId}`,
   ];
   return lines.join('\n');
 }
