@@ -33,7 +33,7 @@ export const envSchema = {
     WEBHOOK_ALLOWED_HOSTS: { type: 'string', default: '' },
     WEBHOOK_RETRY_SCHEDULE: { type: 'string', pattern: '^\\s*\\d+(\\.\\d+)?(\\s*,\\s*\\d+(\\.\\d+)?)*\\s*$', default: '0,5,300,1800,7200,18000,36000,50400,72000,86400' },
     WEBHOOK_TIMEOUT_MS: { type: 'integer', minimum: 100, maximum: 60000, default: 15000 },
-    WEBHOOK_RELAY_INTERVAL_MS: { type: 'integer', minimum: 20, maximum: 60000, default: 250 },
+    WEBHOOK_RELAY_INTERVAL_MS: { type: 'integer', minimum: 20, maximum: 60000, default: 100 },
     OUTBOX_RELAY: { enum: ['on', 'off'], default: 'on' },
     NOTIFICATIONS: { enum: ['on', 'off'], default: 'on', description: 'Whether this worker sends rejection e-mails' },
     NOTIFY_INTERVAL_MS: { type: 'integer', minimum: 20, maximum: 600000, default: 1000, description: 'How often one-by-one rejection e-mails are sent' },

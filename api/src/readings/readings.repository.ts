@@ -61,7 +61,7 @@ export class ReadingsRepository {
    * costs two round trips, not two per reading. Results follow the input order; a reading given twice
    * in one post is stored once, the second answered as a replay of the first.
    */
-  async insertMany(trx: Knex.Transaction, rows: NewReading[]): Promise<{ row: ReadingRow; created: boolean }[]> {
+  async insertMany(trx: Knex | Knex.Transaction, rows: NewReading[]): Promise<{ row: ReadingRow; created: boolean }[]> {
     const key = (r: { device_id: string; client_reading_id: string }) => `${r.device_id}\u0000${r.client_reading_id}`;
     const fresh = new Map<string, ReadingRow>();
     for (let i = 0; i < rows.length; i += 1000) {

@@ -89,8 +89,12 @@ export class ReadingsService {
     const boundDevice = c.principal.kind === 'api_key' ? c.principal.deviceId : null;
     const deviceIds = [...new Set(items.map((r) => r.deviceId ?? boundDevice).filter((x): x is string => !!x))];
     const batchIds = [...new Set(items.map((r) => r.batchId))];
-    const devices = new Set((await this.db('devices').where('organization_id', orgId).whereIn('id', deviceIds).select('id')).map((d) => d.id as string));
-    const batches = new Set((await this.db('batches').where('organization_id', orgId).whereIn('id', batchIds).select('id')).map((b) => b.id as string));
+    const [deviceRows, batchRows] = await Promise.all([
+      deviceIds.length ? this.db('devices').where('organization_id', orgId).whereIn('id', deviceIds).select('id') : [],
+      this.db('batches').where('organization_id', orgId).whereIn('id', batchIds).select('id'),
+    ]);
+    const devices = new Set(deviceRows.map((d: { id: string }) => d.id));
+    const batches = new Set(batchRows.map((b: { id: string }) => b.id));
     const now = Date.now();
     const out: NewReading[] = [];
     items.forEach((r, i) => {
@@ -154,7 +158,8 @@ export class ReadingsService {
 
   /** Writes readings already checked by `check` (one transaction) and queues the new ones. */
   async store(rows: NewReading[]) {
-    const results = await this.db.transaction((trx) => this.repo.insertMany(trx, rows));
+    // one statement is atomic by itself: a single reading needs no BEGIN/COMMIT round trips
+    const results = rows.length === 1 ? await this.repo.insertMany(this.db, rows) : await this.db.transaction((trx) => this.repo.insertMany(trx, rows));
     await this.enqueueMany(results.filter((r) => r.created).map((r) => r.row.id));
     return results.map(({ row, created }) =>
       created ? { id: row.id, status: row.status, statusUrl: `/v1/readings/${row.id}`, replayed: false } : { ...readingView(row), replayed: true },
