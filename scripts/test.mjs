@@ -47,7 +47,7 @@ async function browserSuite() {
   const api = spawn(process.execPath, ['--import', '@swc-node/register/esm-register', path.join(ROOT, 'api/src/main.ts')], {
     cwd: ROOT,
     stdio: ['ignore', 'ignore', 'inherit'],
-    env: { ...env, SWC_NODE_PROJECT: path.join(ROOT, 'api/tsconfig.json'), PORT: String(port), PUBLIC_URL: `http://127.0.0.1:${port}`, SMTP_URL: `smtp://127.0.0.1:${smtpPort}`, LOG_LEVEL: 'warn', QUEUE_PREFIX: 'browser-suite', CORS_ORIGINS: `http://127.0.0.1:${port}` },
+    env: { ...env, SWC_NODE_PROJECT: path.join(ROOT, 'api/tsconfig.json'), PORT: String(port), PUBLIC_URL: `http://127.0.0.1:${port}`, SMTP_URL: `smtp://127.0.0.1:${smtpPort}`, LOG_LEVEL: 'warn', QUEUE_PREFIX: 'browser-suite', CORS_ORIGINS: `http://127.0.0.1:${port}`, WEBHOOK_ALLOWED_HOSTS: '127.0.0.1,localhost' },
   });
   try {
     let up = false;
