@@ -30,10 +30,17 @@ async function copyText(text: string, fallback: HTMLElement | null): Promise<boo
 export function SecretReveal({
   apiKey,
   extra,
+  usage,
+  secretLabel = 'API key secret',
   onDone,
 }: {
-  apiKey: ApiKeyWithSecret;
+  /** Anything with a name and a once-only secret: an API key, a webhook endpoint. */
+  apiKey: Pick<ApiKeyWithSecret, 'name' | 'secret'>;
   extra?: ReactNode;
+  /** Where the secret goes, when it is not an API key's `X-Api-Key` header. */
+  usage?: ReactNode;
+  /** How screen readers name the secret box. */
+  secretLabel?: string;
   onDone: () => void;
 }) {
   const [copied, setCopied] = useState<'yes' | 'selected' | null>(null);
@@ -44,11 +51,15 @@ export function SecretReveal({
     <Box sx={{ display: 'grid', gap: 2 }} data-testid="secret-reveal">
       <Alert severity="warning" icon={<VisibilityOffOutlined />} sx={{ bgcolor: '#fcf1d6', border: '1px solid #ecd08e', color: '#4a3a12' }}>
         <AlertTitle sx={{ fontWeight: 600 }}>You will not see this secret again</AlertTitle>
-        Copy it now and store it where the device or system reads it; it goes in the{' '}
-        <Box component="code" sx={{ fontFamily: monoFont, fontSize: '0.85em' }}>
-          X-Api-Key
-        </Box>{' '}
-        header of each request. Pourgate keeps only a hash: if the secret is lost, rotate the key to get a new one.
+        {usage ?? (
+          <>
+            Copy it now and store it where the device or system reads it; it goes in the{' '}
+            <Box component="code" sx={{ fontFamily: monoFont, fontSize: '0.85em' }}>
+              X-Api-Key
+            </Box>{' '}
+            header of each request. Pourgate keeps only a hash: if the secret is lost, rotate the key to get a new one.
+          </>
+        )}
       </Alert>
       <Box>
         <Typography variant="caption" color="text.secondary" component="div" sx={{ mb: 0.5 }}>
@@ -59,7 +70,7 @@ export function SecretReveal({
             ref={box}
             data-testid="api-key-secret"
             tabIndex={0}
-            aria-label="API key secret"
+            aria-label={secretLabel}
             sx={{ flex: 1, px: 1.5, py: 1.25, fontFamily: monoFont, fontSize: '0.85rem', wordBreak: 'break-all', userSelect: 'all' }}
           >
             {apiKey.secret}

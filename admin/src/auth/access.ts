@@ -6,6 +6,18 @@ const RESOURCE_ACTIONS: Readonly<Record<string, { read: Action; write?: Action }
   invitations: { read: 'people:read', write: 'people:manage' },
   'api-keys': { read: 'api-keys:read', write: 'api-keys:manage' },
   'audit-events': { read: 'audit:read' },
+  'material-systems': { read: 'shop:read', write: 'shop:write' },
+  lots: { read: 'shop:read', write: 'shop:write' },
+  molds: { read: 'shop:read', write: 'shop:write' },
+  'work-orders': { read: 'shop:read', write: 'work-orders:write' },
+  'qc-cup-tests': { read: 'shop:read', write: 'shop:write' },
+  devices: { read: 'devices:read', write: 'devices:manage' },
+  'webhook-endpoints': { read: 'webhooks:read', write: 'webhooks:manage' },
+  'webhook-deliveries': { read: 'webhooks:read', write: 'webhooks:manage' },
+  profile: { read: 'profile:read', write: 'profile:read' },
+  readings: { read: 'readings:read', write: 'readings:review' },
+  batches: { read: 'shop:read', write: 'shop:write' },
+  imports: { read: 'imports:write', write: 'imports:write' },
 };
 
 const READ_ACTIONS = new Set(['list', 'show', 'export']);

@@ -6,11 +6,15 @@ export interface HttpResult {
   headers: Headers;
   body: string;
   json: any;
+  /** The raw answer, for `asBlob` requests (documents). */
+  blob?: Blob;
 }
 
 export interface RequestOptions extends RequestInit {
   /** Public routes (sign-in, refresh, accepting an invitation): no token, no refresh. */
   anonymous?: boolean;
+  /** Read a successful answer as a Blob (a PDF download) instead of text. */
+  asBlob?: boolean;
 }
 
 export type FetchJson = (url: string, options?: RequestOptions) => Promise<HttpResult>;
@@ -81,7 +85,7 @@ export function createHttpClient(opts: HttpClientOptions): HttpClient {
   }
 
   async function send(url: string, options: RequestOptions, token: string | null) {
-    const { anonymous: _anonymous, headers: given, ...init } = options;
+    const { anonymous: _anonymous, asBlob, headers: given, ...init } = options;
     const headers = new Headers(given ?? undefined);
     if (!headers.has('Accept')) headers.set('Accept', 'application/json');
     if (init.body != null && !(init.body instanceof FormData) && !headers.has('Content-Type')) {
@@ -89,7 +93,8 @@ export function createHttpClient(opts: HttpClientOptions): HttpClient {
     }
     if (token) headers.set('Authorization', `Bearer ${token}`);
     const response = await fetchImpl(url, { ...init, headers });
-    const body = await response.text();
+    const blob = asBlob && response.ok ? await response.blob() : undefined;
+    const body = blob ? '' : await response.text();
     let json: unknown;
     if (body) {
       try {
@@ -98,7 +103,7 @@ export function createHttpClient(opts: HttpClientOptions): HttpClient {
         json = undefined;
       }
     }
-    return { status: response.status, statusText: response.statusText, headers: response.headers, body, json };
+    return { status: response.status, statusText: response.statusText, headers: response.headers, body, json, blob };
   }
 
   const fetchJson: FetchJson = async (url, options = {}) => {

@@ -1,0 +1,3 @@
+import { lazy } from 'react';
+
+export const ProfilePage = lazy(() => import('./ProfilePage'));
