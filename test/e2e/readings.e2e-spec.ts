@@ -292,6 +292,17 @@ describe('review', () => {
     expect(res.body.every((r: { status: string }) => r.status === 'rejected')).toBe(true);
   });
 
+  it('lists only the rejections still waiting for a decision with reviewed: false', async () => {
+    const open = await rejectedBatch();
+    const decided = await rejectedBatch();
+    expect((await t.http.post(`/v1/readings/${decided.readingId}/review`).set(as('engineer')).send({ decision: 'uphold' })).status).toBe(200);
+    const list = async (batchId: string, reviewed: boolean) => (await t.http.get('/v1/readings').query({ filter: JSON.stringify({ status: 'rejected', batchId, reviewed }) }).set(as('viewer'))).body.map((r: { id: string }) => r.id);
+    expect(await list(open.batchId, false)).toEqual([open.readingId]);
+    expect(await list(decided.batchId, false)).toEqual([]);
+    expect(await list(decided.batchId, true)).toEqual([decided.readingId]);
+    expectProblem(await t.http.get('/v1/readings').query({ filter: JSON.stringify({ reviewed: 'no' }) }).set(as('viewer')), 400, '/filter/reviewed');
+  });
+
   it('a waiver needs a note; once every rejection is waived the batch can be released', async () => {
     const { batchId, readingId } = await rejectedBatch();
     expect(await batchState(batchId)).toBe('on_hold');

@@ -8,7 +8,7 @@ import type { ReadingQuantity, ReadingSubject } from './judging.js';
 export const readingsListSpec: ListSpec = {
   resource: 'readings',
   sortable: ['receivedAt', 'deviceTime', 'status', 'judgedAt'],
-  filters: { status: 'eq', batchId: 'eq', deviceId: 'eq', quantity: 'eq', subject: 'eq', reasonCode: 'eq', receivedAfter: 'gte', receivedBefore: 'lte', id: 'in' },
+  filters: { status: 'eq', batchId: 'eq', deviceId: 'eq', quantity: 'eq', subject: 'eq', reasonCode: 'eq', reviewed: 'bool', receivedAfter: 'gte', receivedBefore: 'lte', id: 'in' },
   defaultSort: ['receivedAt', 'DESC'],
 };
 const columns = {
@@ -91,9 +91,12 @@ export class ReadingsRepository {
   }
 
   async list(orgId: string, q: ListQuery) {
-    const { reasonCode, ...rest } = q.filter;
+    const { reasonCode, reviewed, ...rest } = q.filter;
     const base = this.db('readings').where('readings.organization_id', orgId).select('readings.*');
     if (reasonCode !== undefined) base.whereRaw('readings.reasons @> ?::jsonb', [JSON.stringify([{ code: String(reasonCode) }])]);
+    // the open review queue: rejected and not yet waived or upheld
+    if (reviewed === true) base.whereNotNull('readings.review_decision');
+    if (reviewed === false) base.whereNull('readings.review_decision');
     return listPage<ReadingRow>(base, { ...q, filter: rest }, readingsListSpec, columns);
   }
 
