@@ -2,14 +2,26 @@ import { CustomRoutes, Resource } from 'react-admin';
 import { Route } from 'react-router-dom';
 import apiKeys from './api-keys';
 import audit from './audit';
+import devices from './devices';
+import lots from './lots';
+import materialSystems from './materials';
+import molds from './molds';
+import cupTests from './qc';
+import workOrders from './work-orders';
+import batches, { PourSheetPage } from './batches';
+import { CalculatorPage } from './calculator';
 import { SignInPage } from './auth/SignInPage';
 import { Dashboard } from './dashboard';
 import { AcceptInvitationPage } from './invitations/AcceptInvitationPage';
 import invitations from './invitations';
+import { ImportsPage } from './imports';
 import { ConsoleAdmin } from './layout/ConsoleAdmin';
+import { ProfilePage } from './profile';
 import { authProvider, dataProvider, isSignedIn } from './providers';
+import readings from './review';
 import { theme } from './theme';
 import users from './users';
+import { webhookDeliveries, webhookEndpoints } from './webhooks';
 
 export function App() {
   return (
@@ -18,6 +30,24 @@ export function App() {
       <Resource name="invitations" {...invitations} />
       <Resource name="api-keys" {...apiKeys} />
       <Resource name="audit-events" {...audit} />
+      <Resource name="material-systems" {...materialSystems} />
+      <Resource name="lots" {...lots} />
+      <Resource name="molds" {...molds} />
+      <Resource name="work-orders" {...workOrders} />
+      <Resource name="qc-cup-tests" {...cupTests} />
+      <Resource name="devices" {...devices} />
+      <Resource name="webhook-endpoints" {...webhookEndpoints} />
+      <Resource name="webhook-deliveries" {...webhookDeliveries} />
+      <CustomRoutes>
+        <Route path="/profile" element={<ProfilePage />} />
+      </CustomRoutes>
+      <Resource name="readings" {...readings} />
+      <Resource name="batches" {...batches} />
+      <CustomRoutes>
+        <Route path="/batches/:id/pour-sheet" element={<PourSheetPage />} />
+        <Route path="/calculator" element={<CalculatorPage />} />
+        <Route path="/imports" element={<ImportsPage />} />
+      </CustomRoutes>
       <CustomRoutes noLayout>
         <Route path="/accept-invitation" element={<AcceptInvitationPage />} />
       </CustomRoutes>

@@ -1,7 +1,8 @@
 import ArrowForward from '@mui/icons-material/ArrowForward';
 import CheckCircleOutline from '@mui/icons-material/CheckCircleOutline';
-import { Box, Button, Card, CardContent, Chip, List, ListItem, ListItemIcon, ListItemText, Typography } from '@mui/material';
+import { Box, Button, Card, CardContent, Chip, List, ListItem, ListItemIcon, ListItemText, Skeleton, Typography } from '@mui/material';
 import { ACTIONS } from '@pourgate/permissions';
+import { lazy, Suspense } from 'react';
 import { Link } from 'react-router-dom';
 import { Title, useGetIdentity, usePermissions } from 'react-admin';
 import { knownActions } from '../auth/access';
@@ -17,7 +18,23 @@ const SHORTCUTS: Record<string, { text: string; cta: string }> = {
   'audit-events': { text: 'Who signed in, issued a key or changed a role, and when.', cta: 'Read the log' },
   'api-keys': { text: 'Issue scoped keys for machines, see when each was last used, rotate and revoke them.', cta: 'Manage keys' },
   docs: { text: 'The OpenAPI reference: every route, schema and error, with examples.', cta: 'Open the reference' },
+  readings: { text: 'Rejected readings with what was measured against which limit: waive with a note, or uphold.', cta: 'Open the queue' },
+  batches: { text: 'Every mix with its targets, what was weighed, its timeline and a printable pour sheet.', cta: 'See batches' },
+  calculator: { text: 'Masses of A, B and pigment for any system and mold, with warnings and cautions.', cta: 'Compute targets' },
+  imports: { text: 'Send a CSV a logger kept offline and follow it row by row.', cta: 'Import a file' },
+  profile: { text: 'Your name, password and the units you read figures in.', cta: 'Open your profile' },
+  'material-systems': { text: 'Formulations with their ratio, densities, windows and times; every change is a revision.', cta: 'See systems' },
+  lots: { text: 'Component lots and their expiry; expired lots raise a warning on targets.', cta: 'See lots' },
+  molds: { text: 'Cavities, inserts and default pack factors, with a volume helper.', cta: 'See molds' },
+  'work-orders': { text: 'What the ERP asked for: part, mold, system and quantity.', cta: 'See work orders' },
+  'qc-cup-tests': { text: 'Cream, top-of-cup and tack-free times and free-rise density per lot.', cta: 'See cup tests' },
+  devices: { text: 'Bench scales and loggers, their stations, readability and calibration dates.', cta: 'See devices' },
+  'webhook-endpoints': { text: 'Where Pourgate sends signed events, with a test send and secret rotation.', cta: 'See webhooks' },
+  'webhook-deliveries': { text: 'Every delivery attempt and its answer; replay a dead one.', cta: 'See deliveries' },
 };
+
+// the charts (and their library) load only for people who see the shop floor
+const FloorPanel = lazy(() => import('./FloorPanel'));
 
 export default function Dashboard() {
   const { identity } = useGetIdentity();
@@ -31,7 +48,7 @@ export default function Dashboard() {
   const role = me?.role ? ROLE_INFO[me.role] : undefined;
 
   return (
-    <Box sx={{ maxWidth: 1180 }}>
+    <Box sx={{ maxWidth: 1280 }}>
       <Title title="Overview" />
       <Box sx={{ mt: 1, mb: 2.5 }}>
         <Typography variant="h1" component="h1" sx={{ fontSize: '1.6rem' }}>
@@ -51,6 +68,14 @@ export default function Dashboard() {
           ) : null}
         </Box>
       </Box>
+
+      {held.includes('readings:read') && held.includes('shop:read') ? (
+        <Box sx={{ mb: 2.5 }}>
+          <Suspense fallback={<Skeleton variant="rounded" height={420} />}>
+            <FloorPanel />
+          </Suspense>
+        </Box>
+      ) : null}
 
       <Box sx={{ display: 'grid', gap: 2, gridTemplateColumns: { xs: '1fr', md: '1.35fr 1fr' }, alignItems: 'start' }}>
         <Box sx={{ display: 'grid', gap: 2 }}>

@@ -24,7 +24,31 @@ export const MENU: readonly MenuSection[] = [
   {
     id: 'home',
     label: 'Workspace',
-    links: [{ id: 'overview', label: 'Overview', to: '/', requires: 'profile:read' }],
+    links: [
+      { id: 'overview', label: 'Overview', to: '/', requires: 'profile:read' },
+      { id: 'profile', label: 'Your profile', to: '/profile', requires: 'profile:read' },
+    ],
+  },
+  {
+    id: 'floor',
+    label: 'Shop floor',
+    links: [
+      { id: 'readings', label: 'Review queue', to: '/readings', requires: 'readings:review' },
+      { id: 'batches', label: 'Batches', to: '/batches', requires: 'shop:read' },
+      { id: 'calculator', label: 'Targets calculator', to: '/calculator', requires: 'targets:read' },
+      { id: 'imports', label: 'Logger imports', to: '/imports', requires: 'imports:write' },
+    ],
+  },
+  {
+    id: 'shop',
+    label: 'Shop data',
+    links: [
+      { id: 'material-systems', label: 'Material systems', to: '/material-systems', requires: 'shop:read' },
+      { id: 'lots', label: 'Lots', to: '/lots', requires: 'shop:read' },
+      { id: 'molds', label: 'Molds', to: '/molds', requires: 'shop:read' },
+      { id: 'work-orders', label: 'Work orders', to: '/work-orders', requires: 'shop:read' },
+      { id: 'qc-cup-tests', label: 'Cup tests', to: '/qc-cup-tests', requires: 'shop:read' },
+    ],
   },
   {
     id: 'access',
@@ -40,6 +64,9 @@ export const MENU: readonly MenuSection[] = [
     label: 'Integration',
     links: [
       { id: 'api-keys', label: 'API keys', to: '/api-keys', requires: 'api-keys:read' },
+      { id: 'devices', label: 'Devices', to: '/devices', requires: 'devices:read' },
+      { id: 'webhook-endpoints', label: 'Webhooks', to: '/webhook-endpoints', requires: 'webhooks:read' },
+      { id: 'webhook-deliveries', label: 'Delivery log', to: '/webhook-deliveries', requires: 'webhooks:read' },
       { id: 'docs', label: 'API reference', to: '/docs', requires: 'api-keys:read', external: true },
     ],
   },

@@ -1,0 +1,85 @@
+import type { Reason } from './reasons';
+
+/** A reading as `GET /v1/readings` sends it (api/src/readings/readings.service.ts, readingView). */
+export type ReadingStatus = 'pending' | 'accepted' | 'rejected' | 'unused';
+export type ReadingQuantity = 'mass' | 'temperature' | 'humidity' | 'milestone';
+export type ReadingSubject = 'part_a' | 'part_b' | 'pigment' | 'mixed' | 'mold' | 'ambient' | 'mix_start' | 'pour' | 'demold';
+
+export interface ReadingReview {
+  decision: 'waive' | 'uphold';
+  note: string | null;
+  by: string | null;
+  at: string | null;
+}
+
+export interface Reading {
+  id: string;
+  batchId: string;
+  deviceId: string;
+  clientReadingId: string;
+  quantity: ReadingQuantity;
+  subject: ReadingSubject;
+  valueSi: number;
+  unitSi: 'kg' | 'degC' | '%' | 's';
+  given: { value: number; unit: string };
+  stable: boolean;
+  deviceTime: string | null;
+  receivedAt: string;
+  clockSkewSeconds: number | null;
+  clockSkewFlagged: boolean;
+  status: ReadingStatus;
+  reasons: Reason[];
+  judgedAt: string | null;
+  review: ReadingReview | null;
+}
+
+export interface Device {
+  id: string;
+  kind: string;
+  serial: string;
+  name: string;
+  stationCode: string | null;
+  station?: { id: string; code: string; name: string } | null;
+  readabilityKg: number | null;
+  capacityKg: number | null;
+  calibrationDue: string | null;
+  retired: boolean;
+}
+
+export const SUBJECT_LABEL: Readonly<Record<ReadingSubject, string>> = {
+  part_a: 'Part A',
+  part_b: 'Part B',
+  pigment: 'Pigment',
+  mixed: 'Mixed',
+  mold: 'Mold',
+  ambient: 'Shop air',
+  mix_start: 'Mix start',
+  pour: 'Pour',
+  demold: 'Demold',
+};
+
+export const QUANTITY_LABEL: Readonly<Record<ReadingQuantity, string>> = {
+  mass: 'mass',
+  temperature: 'temperature',
+  humidity: 'humidity',
+  milestone: 'time',
+};
+
+export const READING_STATUS: Readonly<Record<ReadingStatus, { label: string; tone: 'good' | 'caution' | 'bad' | 'quiet' | 'info' }>> = {
+  rejected: { label: 'Rejected', tone: 'bad' },
+  accepted: { label: 'Accepted', tone: 'good' },
+  unused: { label: 'Not judged', tone: 'quiet' },
+  pending: { label: 'Being judged', tone: 'info' },
+};
+
+/** "Part B mass", "Mold temperature", "Pour" (a milestone is its own name). */
+export function readingTitle(r: Pick<Reading, 'subject' | 'quantity'>): string {
+  if (r.quantity === 'milestone') return SUBJECT_LABEL[r.subject] ?? r.subject;
+  return `${SUBJECT_LABEL[r.subject] ?? r.subject} ${QUANTITY_LABEL[r.quantity] ?? r.quantity}`;
+}
+
+/** What the device sent, as it sent it: "290.4 g"; a milestone carries only its time. */
+export function readingValue(r: Pick<Reading, 'quantity' | 'given'>): string {
+  if (r.quantity === 'milestone') return 'time mark';
+  return `${r.given.value} ${r.given.unit === 'degC' ? '°C' : r.given.unit === 'degF' ? '°F' : r.given.unit}`;
+}
