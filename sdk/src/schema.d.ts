@@ -4840,7 +4840,7 @@ export interface operations {
                 sort?: string;
                 /** @description JSON [start,end], inclusive, at most 500 rows */
                 range?: string;
-                /** @description JSON object; filters: status, batchId, deviceId, quantity, subject, reasonCode, receivedAfter, receivedBefore, id */
+                /** @description JSON object; filters: status, batchId, deviceId, quantity, subject, reasonCode, reviewed, receivedAfter, receivedBefore, id */
                 filter?: string;
             };
             header?: {
