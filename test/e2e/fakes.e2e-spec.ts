@@ -1,7 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { randomUUID } from 'node:crypto';
 import fs from 'node:fs/promises';
-import type { AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { Pourgate } from '@pourgate/sdk';
@@ -9,14 +8,8 @@ import { weighBatch } from '../../fakes/src/bench-scale.js';
 import { startErp, type Erp } from '../../fakes/src/erp.js';
 import { CSV_COLUMNS, runLogger } from '../../fakes/src/temperature-logger.js';
 import { closeTestDb, makeOrg, type OrgFixture, PASSWORD, testDb } from './support/fixtures.js';
-import { startTestApp, type TestApp } from './support/app.js';
+import { listenOnLoopback as listen, startTestApp, type TestApp } from './support/app.js';
 import { flexSystem } from './support/shop.js';
-
-/** Puts a test app on a loopback port, so the SDK reaches it with fetch like any client. */
-async function listen(t: TestApp): Promise<string> {
-  await t.app.listen(0, '127.0.0.1');
-  return `http://127.0.0.1:${(t.app.getHttpServer().address() as AddressInfo).port}`;
-}
 
 // Each fake's own flow against the real API (the same functions their command lines call).
 // Check values: ±5 % ratio tolerance and a component window of 18–27 °C around 22 °C are common

@@ -4,15 +4,9 @@ import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { Pourgate, PourgateProblem, verifyWebhook, WebhookVerificationError, type PourgateEvent, type Reading } from '@pourgate/sdk';
 import { closeTestDb, makeOrg, type OrgFixture, PASSWORD, testDb } from './support/fixtures.js';
-import { startTestApp, type TestApp } from './support/app.js';
+import { listenOnLoopback as listen, startTestApp, type TestApp } from './support/app.js';
 import { flexSystem } from './support/shop.js';
 import { startFlakyProxy } from '../../fakes/src/flaky-proxy.js';
-
-/** Puts a test app on a loopback port, so the SDK reaches it with fetch like any client. */
-async function listen(t: TestApp): Promise<string> {
-  await t.app.listen(0, '127.0.0.1');
-  return `http://127.0.0.1:${(t.app.getHttpServer().address() as AddressInfo).port}`;
-}
 
 // The SDK against the real API: the scale bridge and webhook receiver of sdk/README.md, retries that
 // never duplicate a reading, problem details as typed errors, and list/feed iteration.

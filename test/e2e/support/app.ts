@@ -1,4 +1,5 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
+import type { AddressInfo } from 'node:net';
 import { Writable } from 'node:stream';
 import request from 'supertest';
 import { createApp } from '../../../api/src/app.factory.js';
@@ -54,4 +55,10 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
       else process.env[k] = v;
     }
   }
+}
+
+/** Puts a test app on a loopback port, so clients (the SDK, the fakes) reach it with fetch. */
+export async function listenOnLoopback(t: TestApp): Promise<string> {
+  await t.app.listen(0, '127.0.0.1');
+  return `http://127.0.0.1:${(t.app.getHttpServer().address() as AddressInfo).port}`;
 }
