@@ -61,6 +61,23 @@ describe('lists speak the ra-data-simple-rest protocol', () => {
   });
 });
 
+describe('totals too large to count', () => {
+  it('reports an exact total up to the cap and * beyond it (RFC 9110 unknown length), the page unchanged', async () => {
+    const { listPage } = await import('../../api/src/common/lists/knex-list.js');
+    const { parseListQuery, setContentRange } = await import('../../api/src/common/lists/list-query.js');
+    const spec = { resource: 'devices', sortable: ['serial'], filters: {}, defaultSort: ['serial', 'ASC'] as [string, 'ASC'] };
+    const q = parseListQuery({ range: '[0,4]' }, spec);
+    const base = () => testDb()('devices').where({ organization_id: org.id }).select('serial', 'id');
+    expect((await listPage(base(), q, spec, {}, 12)).total).toBe(12);
+    const over = await listPage<{ serial: string }>(base(), q, spec, {}, 11);
+    expect(over.total).toBeNull();
+    expect(over.rows.map((r) => r.serial)).toEqual(['T-00', 'T-01', 'T-02', 'T-03', 'T-04']);
+    const headers: Record<string, string> = {};
+    setContentRange({ header: (k: string, v: string) => (headers[k] = v) } as never, 'devices', q, over.rows.length, over.total);
+    expect(headers['content-range']).toBe('devices 0-4/*');
+  });
+});
+
 describe('Bull queues run on the real Redis', () => {
   it('a heartbeat job goes through Redis to the processor and back', async () => {
     const queue = t.app.get<Queue>(getQueueToken(QUEUES.heartbeat));

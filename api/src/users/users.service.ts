@@ -97,7 +97,7 @@ export class UsersService {
     return this.tokens.me(u.id);
   }
 
-  async list(c: RequestContext, q: ListQuery): Promise<{ rows: UserView[]; total: number }> {
+  async list(c: RequestContext, q: ListQuery): Promise<{ rows: UserView[]; total: number | null }> {
     const { rows, total } = await listPage<UserRow>(this.db('users').where({ organization_id: c.principal.organizationId }), q, usersListSpec, userColumns);
     return { rows: rows.map(toUserView), total };
   }

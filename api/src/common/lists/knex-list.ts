@@ -34,12 +34,24 @@ export function applyFilters(qb: Knex.QueryBuilder, q: ListQuery, spec: ListSpec
   return qb;
 }
 
-/** Runs a filtered list: one page (with a stable tie-break on id) and the total count. */
-export async function listPage<T>(base: Knex.QueryBuilder, q: ListQuery, spec: ListSpec, columns: Record<string, string> = {}): Promise<{ rows: T[]; total: number }> {
+/**
+ * Beyond this many matching rows a list's total is reported as unknown (`Content-Range: …/*`, as
+ * RFC 9110 allows): an exact count would read every matching row, which grows with the table while
+ * the page itself does not.
+ */
+export const COUNT_CAP = 10_000;
+
+/**
+ * Runs a filtered list: one page (with a stable tie-break on id) and the total count, or null when
+ * more than COUNT_CAP rows match.
+ */
+export async function listPage<T>(base: Knex.QueryBuilder, q: ListQuery, spec: ListSpec, columns: Record<string, string> = {}, cap = COUNT_CAP): Promise<{ rows: T[]; total: number | null }> {
   applyFilters(base, q, spec, columns);
-  const countQ = base.clone().clearSelect().clearOrder().count<{ count: string }[]>({ count: '*' });
+  const capped = base.clone().clearSelect().clearOrder().select(base.client.raw('1')).limit(cap + 1).as('capped');
+  const countQ = base.client.queryBuilder().count<{ count: string }[]>({ count: '*' }).from(capped);
   const sortCol = columns[q.sort.field] ?? q.sort.field;
   const rowsQ = base.clone().orderBy(sortCol, q.sort.order).orderBy(columns.id ?? 'id', q.sort.order).offset(q.offset).limit(q.limit);
   const [rows, count] = await Promise.all([rowsQ, countQ]);
-  return { rows: rows as T[], total: Number(count[0]?.count ?? 0) };
+  const n = Number(count[0]?.count ?? 0);
+  return { rows: rows as T[], total: n > cap ? null : n };
 }

@@ -105,10 +105,13 @@ function checkFilterValue(kind: FilterKind, v: unknown): string | null {
   }
 }
 
-/** Sets `Content-Range: <resource> <start>-<end>/<total>` as ra-data-simple-rest expects. */
-export function setContentRange(reply: FastifyReply, resource: string, q: ListQuery, count: number, total: number): void {
+/**
+ * Sets `Content-Range: <resource> <start>-<end>/<total>` as ra-data-simple-rest expects; `*` for a
+ * total too large to count (see COUNT_CAP).
+ */
+export function setContentRange(reply: FastifyReply, resource: string, q: ListQuery, count: number, total: number | null): void {
   const end = count === 0 ? q.offset : q.offset + count - 1;
-  reply.header('content-range', `${resource} ${q.offset}-${end}/${total}`);
+  reply.header('content-range', `${resource} ${q.offset}-${end}/${total ?? '*'}`);
 }
 
 /** Documents the three list parameters and the Content-Range header on a list route. */
