@@ -8,6 +8,7 @@ import http from 'node:http';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { FuzzRequest, FuzzResponse } from './fuzz-core.js';
+import { flexSystem } from '../e2e/support/systems.js';
 
 export const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
 export const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
@@ -112,23 +113,7 @@ export async function json(base: string, method: string, url: string, headers: R
 
 /** A weight-ratio flexible system (100:50, ±5 %), invented numbers for tests. */
 export function demoSystem() {
-  return {
-    name: `Fault Flex ${randomUUID().slice(0, 6)}`,
-    kind: 'flexible',
-    ratioBasis: 'weight',
-    ratio: { a: 100, b: 50 },
-    specificGravityA: 1.05,
-    specificGravityB: 1.22,
-    isocyanatePart: 'B',
-    freeRiseDensity: { value: 40, unit: 'kg/m3' },
-    freeRiseReferenceTemperature: { value: 22, unit: 'degC' },
-    componentTemperatureWindow: { min: { value: 18, unit: 'degC' }, max: { value: 27, unit: 'degC' } },
-    potLife: { value: 90, unit: 's' },
-    demoldTime: { value: 12, unit: 'min' },
-    fullCureTime: { value: 24, unit: 'h' },
-    maxPigmentPercent: 5,
-    maxPackFactor: 4,
-  };
+  return flexSystem({ name: `Fault Flex ${randomUUID().slice(0, 6)}`, ratio: { a: 100, b: 50 } });
 }
 
 export interface Shop {

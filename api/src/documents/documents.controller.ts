@@ -5,6 +5,7 @@ import type { FastifyRequest } from 'fastify';
 import { Caller, type RequestContext } from '../auth/principal.js';
 import { Requires } from '../auth/requires.decorator.js';
 import { IdParam } from '../common/decorators/uuid-param.js';
+import { isMultipart } from '../common/http/multipart.js';
 import { UploadIdempotencyInterceptor } from '../common/idempotency/idempotency.interceptor.js';
 import { ProblemException } from '../common/problems.js';
 import { DOCUMENT_KINDS, DocumentsService } from './documents.service.js';
@@ -42,8 +43,7 @@ export class DocumentsController {
   })
   @ApiOperation({ summary: 'Upload an SDS or TDS (PDF, multipart/form-data)' })
   upload(@Caller() c: RequestContext, @IdParam() id: string, @UploadedFile() file: UploadedMultipartFile | undefined, @Body() fields: Record<string, unknown> | undefined, @Req() req: FastifyRequest) {
-    const multipart = /^multipart\/form-data\b/i.test(String(req.headers['content-type'] ?? ''));
-    return this.documents.upload(c, id, multipart ? file : null, fields ?? {});
+    return this.documents.upload(c, id, isMultipart(req) ? file : null, fields ?? {});
   }
 
   @Get(':documentId/content')

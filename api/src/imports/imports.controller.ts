@@ -5,6 +5,7 @@ import type { FastifyReply, FastifyRequest } from 'fastify';
 import { Caller, type RequestContext } from '../auth/principal.js';
 import { Requires } from '../auth/requires.decorator.js';
 import { IdParam } from '../common/decorators/uuid-param.js';
+import { isMultipart } from '../common/http/multipart.js';
 import { OwnIdempotency } from '../common/idempotency/idempotency.interceptor.js';
 import { ListRoute, parseListQuery, setContentRange } from '../common/lists/list-query.js';
 import { CSV_OPTIONAL, CSV_REQUIRED, MAX_IMPORT_BYTES } from './imports.constants.js';
@@ -37,8 +38,7 @@ export class ImportsController {
   @ApiResponse({ status: 202, description: 'Queued' })
   @ApiResponse({ status: 200, description: 'This file was uploaded before: the first import' })
   async upload(@Caller() c: RequestContext, @UploadedFile() file: UploadedMultipartFile | undefined, @Req() req: FastifyRequest, @Res({ passthrough: true }) reply: FastifyReply) {
-    const multipart = /^multipart\/form-data\b/i.test(String(req.headers['content-type'] ?? ''));
-    const { created, view } = await this.imports.upload(c, multipart ? file : null);
+    const { created, view } = await this.imports.upload(c, isMultipart(req) ? file : null);
     reply.status(created ? 202 : 200);
     return { ...view, replayed: !created };
   }

@@ -181,9 +181,9 @@ export class ImportsService {
       imported += stored.filter((s) => !s.replayed).length;
       duplicates += stored.filter((s) => s.replayed).length;
       for (const [i, errs] of rowErrors) bad.push({ line: chunk[i]!.line, errors: errs });
-      bad.sort((a, b) => a.line - b.line);
       await this.db('reading_imports').where({ id }).update({ processed: Math.min(parsed.bad.length + start + chunk.length, imp.total), imported, duplicates, bad_rows: JSON.stringify(bad) });
     }
+    bad.sort((a, b) => a.line - b.line);
     await this.db('reading_imports').where({ id }).update({ status: 'done', processed: imp.total, imported, duplicates, bad_rows: JSON.stringify(bad), finished_at: this.db.fn.now() });
   }
 

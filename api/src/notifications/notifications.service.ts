@@ -39,9 +39,7 @@ export class NotificationsService {
   /** Sends due one-by-one notices; a failed send is retried with backoff, then given up. */
   async sendEach(limit = 20): Promise<number> {
     return this.db.transaction(async (trx) => {
-      const due: NoticeRow[] = await trx('rejection_notices as n').join('users as u', 'u.id', 'n.user_id')
-        .where({ 'n.status': 'pending', 'n.mode': 'each' }).where('n.next_attempt_at', '<=', trx.fn.now())
-        .orderBy('n.created_at').limit(limit).forUpdate('n').skipLocked().select('n.id', 'n.user_id', 'n.reading_id', 'n.attempts', 'u.email');
+      const due = await this.claimDue(trx, 'each', limit);
       for (const n of due) {
         const [facts] = await this.facts(trx, [n.reading_id]);
         await this.deliver(trx, [n], () => (facts ? rejectionMail(facts, this.publicUrl) : null), n.email);
@@ -53,9 +51,7 @@ export class NotificationsService {
   /** One message per person gathering every pending digest notice. */
   async sendDigests(): Promise<number> {
     return this.db.transaction(async (trx) => {
-      const due: NoticeRow[] = await trx('rejection_notices as n').join('users as u', 'u.id', 'n.user_id')
-        .where({ 'n.status': 'pending', 'n.mode': 'digest' }).where('n.next_attempt_at', '<=', trx.fn.now())
-        .orderBy('n.created_at').limit(2000).forUpdate('n').skipLocked().select('n.id', 'n.user_id', 'n.reading_id', 'n.attempts', 'u.email');
+      const due = await this.claimDue(trx, 'digest', 2000);
       const byUser = new Map<string, NoticeRow[]>();
       for (const n of due) byUser.set(n.user_id, [...(byUser.get(n.user_id) ?? []), n]);
       for (const notices of byUser.values()) {
@@ -64,6 +60,13 @@ export class NotificationsService {
       }
       return byUser.size;
     });
+  }
+
+  /** Pending notices of one mode that are due, locked for this sender (others skip them). */
+  private claimDue(trx: Knex.Transaction, mode: 'each' | 'digest', limit: number): Promise<NoticeRow[]> {
+    return trx('rejection_notices as n').join('users as u', 'u.id', 'n.user_id')
+      .where({ 'n.status': 'pending', 'n.mode': mode }).where('n.next_attempt_at', '<=', trx.fn.now())
+      .orderBy('n.created_at').limit(limit).forUpdate('n').skipLocked().select('n.id', 'n.user_id', 'n.reading_id', 'n.attempts', 'u.email');
   }
 
   private async deliver(trx: Knex.Transaction, notices: NoticeRow[], compose: () => { subject: string; text: string } | null, to: string): Promise<void> {

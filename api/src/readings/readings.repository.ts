@@ -48,17 +48,9 @@ export type NewReading = Omit<ReadingRow, 'id' | 'received_at' | 'status' | 'rea
 export class ReadingsRepository {
   constructor(@Inject(KNEX) readonly db: Knex) {}
 
-  /** Inserts unless (device, client reading id) exists; returns the row either way and whether it is new. */
-  async insertOnce(trx: Knex.Transaction, r: NewReading): Promise<{ row: ReadingRow; created: boolean }> {
-    const inserted = await trx('readings').insert(r).onConflict(['device_id', 'client_reading_id']).ignore().returning('*');
-    if (inserted.length) return { row: inserted[0], created: true };
-    const row = await trx('readings').where({ device_id: r.device_id, client_reading_id: r.client_reading_id }).first();
-    return { row, created: false };
-  }
-
   /**
-   * The same for many readings in one statement (and one more for those that existed): a bulk post
-   * costs two round trips, not two per reading. Results follow the input order; a reading given twice
+   * Inserts the readings whose (device, client reading id) is new, in one statement (and one more for
+   * those that existed): a bulk post costs two round trips, not two per reading. Results follow the input order; a reading given twice
    * in one post is stored once, the second answered as a replay of the first.
    */
   async insertMany(trx: Knex | Knex.Transaction, rows: NewReading[]): Promise<{ row: ReadingRow; created: boolean }[]> {

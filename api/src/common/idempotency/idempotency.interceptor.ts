@@ -8,6 +8,7 @@ import { lastValueFrom, type Observable, of } from 'rxjs';
 import type { Principal } from '../../auth/principal.js';
 import { KNEX } from '../../database/database.module.js';
 import { IS_PUBLIC } from '../decorators/public.decorator.js';
+import { isMultipart } from '../http/multipart.js';
 import { malformed, ProblemException, validationProblem } from '../problems.js';
 
 /** How long a key and its response are kept. */
@@ -17,8 +18,9 @@ export const IN_FLIGHT_TAKEOVER_S = 60;
 export const REPLAYED_HEADER = 'idempotent-replayed';
 
 const SKIP = 'pourgate:idempotency-skip';
+/** An expired key, or one held by a request that died long ago: free to take again. */
+const STALE = `(expires_at < now() OR (state = 'in_flight' AND created_at < now() - make_interval(secs => ${IN_FLIGHT_TAKEOVER_S})))`;
 const SKIP_REQUEST = Symbol('not handled here');
-const MULTIPART = /^multipart\/form-data\b/i;
 /**
  * Marks a POST that is idempotent by its own means (a reading's (device, clientReadingId), an
  * imported file's hash): the Idempotency-Key header is ignored there.
@@ -74,7 +76,7 @@ export class IdempotencyInterceptor implements NestInterceptor {
    * interceptor instead.
    */
   protected requestBody(req: FastifyRequest): unknown {
-    return MULTIPART.test(String(req.headers['content-type'] ?? '')) ? SKIP_REQUEST : req.body;
+    return isMultipart(req) ? SKIP_REQUEST : req.body;
   }
 
   async intercept(ctx: ExecutionContext, next: CallHandler): Promise<Observable<unknown>> {
@@ -119,20 +121,17 @@ export class IdempotencyInterceptor implements NestInterceptor {
 
   /** Takes the key for this request (null), or returns the row of the request that holds it. */
   private async claim(scope: string, key: string, hash: string, tries = 3): Promise<KeyRow | null> {
-    // an expired key, or one held by a request that died long ago, is free again
-    await this.db('idempotency_keys')
-      .where({ scope, key })
-      .andWhere((q) => q.where('expires_at', '<', this.db.fn.now()).orWhere((q2) => q2.where('state', 'in_flight').andWhere('created_at', '<', this.db.raw(`now() - make_interval(secs => ${IN_FLIGHT_TAKEOVER_S})`))))
-      .del();
     const inserted = await this.db('idempotency_keys')
       .insert({ scope, key, request_hash: hash, state: 'in_flight', expires_at: this.db.raw(`now() + make_interval(hours => ${IDEMPOTENCY_TTL_HOURS})`) })
       .onConflict(['scope', 'key'])
       .ignore()
       .returning('key');
     if (inserted.length) return null;
-    const row = await this.db('idempotency_keys').where({ scope, key }).first<KeyRow | undefined>('request_hash', 'state', 'response_status', 'response_headers', 'response_body');
-    // freed between the two statements (its holder failed): try to take it again
-    if (!row && tries > 0) return this.claim(scope, key, hash, tries - 1);
+    const row = await this.db('idempotency_keys').where({ scope, key }).first<(KeyRow & { stale: boolean }) | undefined>('request_hash', 'state', 'response_status', 'response_headers', 'response_body', this.db.raw(`${STALE} AS stale`));
+    if (tries > 0 && (!row || row.stale)) {
+      if (row) await this.db('idempotency_keys').where({ scope, key }).whereRaw(STALE).del();
+      return this.claim(scope, key, hash, tries - 1);
+    }
     return row ?? { request_hash: hash, state: 'in_flight', response_status: null, response_headers: null, response_body: null };
   }
 }
@@ -145,7 +144,7 @@ export class IdempotencyInterceptor implements NestInterceptor {
 export class UploadIdempotencyInterceptor extends IdempotencyInterceptor {
   protected override requestBody(req: FastifyRequest & { file?: { buffer?: Buffer; originalname?: string } }): unknown {
     // anything else was handled by the global interceptor already
-    if (!MULTIPART.test(String(req.headers['content-type'] ?? ''))) return SKIP_REQUEST;
+    if (!isMultipart(req)) return SKIP_REQUEST;
     const file = req.file?.buffer ? { name: req.file.originalname ?? null, sha256: createHash('sha256').update(req.file.buffer).digest('hex') } : null;
     return { fields: req.body ?? null, file };
   }
