@@ -7,7 +7,12 @@ const tsJest = [
 const common = {
   rootDir: '.',
   extensionsToTreatAsEsm: ['.ts'],
-  moduleNameMapper: { '^(\\.{1,2}/.*)\\.js$': '$1' },
+  moduleNameMapper: {
+    // the workspace packages from their sources (their dist/ is for Node.js at run time)
+    '^@pourgate/batching$': '<rootDir>/packages/batching/src/index.ts',
+    '^@pourgate/permissions$': '<rootDir>/packages/permissions/src/index.ts',
+    '^(\\.{1,2}/.*)\\.js$': '$1',
+  },
   transform: { '^.+\\.ts$': tsJest },
   testEnvironment: 'node',
 };
@@ -19,7 +24,7 @@ export default {
   // wait on them forever once every test has finished
   forceExit: true,
   projects: [
-    { ...common, displayName: 'unit', roots: ['<rootDir>/api/src', '<rootDir>/fakes/src', '<rootDir>/sdk/src'], testMatch: ['**/*.spec.ts'] },
+    { ...common, displayName: 'unit', roots: ['<rootDir>/packages', '<rootDir>/api/src', '<rootDir>/fakes/src', '<rootDir>/sdk/src'], testMatch: ['**/*.spec.ts'] },
     { ...common, displayName: 'reference', roots: ['<rootDir>/test/reference'], testMatch: ['**/*.reference-spec.ts'] },
     { ...common, displayName: 'e2e', roots: ['<rootDir>/test/e2e'], testMatch: ['**/*.e2e-spec.ts'] },
   ],

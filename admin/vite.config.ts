@@ -2,15 +2,20 @@ import react from '@vitejs/plugin-react';
 import { fileURLToPath } from 'node:url';
 import { defineConfig, type ViteUserConfig as UserConfig } from 'vitest/config';
 
-// The role × action matrix is the API's; the console reads the same file for labels and menus.
-const permissions = fileURLToPath(new URL('../api/src/auth/permissions.ts', import.meta.url));
+// The workspace packages are bundled from their TypeScript sources (their dist/ is for Node.js):
+// the role × action matrix the API enforces, and the computation the API runs.
+const permissions = fileURLToPath(new URL('../packages/permissions/src/index.ts', import.meta.url));
+const batching = fileURLToPath(new URL('../packages/batching/src/', import.meta.url));
 const api = process.env.POURGATE_API ?? 'http://127.0.0.1:3000';
 
 const config = {
   base: './',
   plugins: [react()],
   resolve: {
-    alias: { '@pourgate/permissions': permissions },
+    alias: [
+      { find: /^@pourgate\/permissions$/, replacement: permissions },
+      { find: /^@pourgate\/batching\/(.*)$/, replacement: `${batching}$1.ts` },
+    ],
   },
   build: {
     outDir: 'dist',

@@ -5,10 +5,11 @@
 import { spawn, spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
-import { ROOT, checkNode, ensureNpmDeps, fail, isStale, log, runTs, startPostgres, startRedis } from './lib/services.mjs';
+import { ROOT, checkNode, ensureNpmDeps, ensureWorkspacePackages, fail, isStale, log, runTs, startPostgres, startRedis } from './lib/services.mjs';
 
 checkNode();
 ensureNpmDeps();
+ensureWorkspacePackages();
 
 const stops = [];
 const env = { ...process.env, NODE_ENV: process.env.NODE_ENV ?? 'development' };

@@ -3,10 +3,11 @@
 // suite of the project, one summary at the end. Extra arguments go to Jest (`npm test -- -t ratio`).
 import { spawnSync } from 'node:child_process';
 import path from 'node:path';
-import { ROOT, checkNode, ensureNpmDeps, log, startPostgres, startRedis, runTs } from './lib/services.mjs';
+import { ROOT, checkNode, ensureNpmDeps, ensureWorkspacePackages, log, startPostgres, startRedis, runTs } from './lib/services.mjs';
 
 checkNode();
 ensureNpmDeps();
+ensureWorkspacePackages();
 const { ensureDebianPackages } = await import('./lib/services.mjs');
 ensureDebianPackages({ chromium: '/usr/bin/chromium' });
 

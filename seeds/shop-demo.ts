@@ -1,8 +1,8 @@
 import type { Knex } from 'knex';
-import { computeBatchTargets, type BatchTargetsInput } from '../api/src/batching/targets.js';
-import { readSystemInput, parametersOf, type MaterialSystemInput } from '../api/src/materials/system-parameters.js';
-import { readMoldGeometry, type MoldGeometryInput } from '../api/src/molds/mold-geometry.js';
-import { isoDay } from '../api/src/shop/dates.js';
+import { computeBatchTargets, type BatchTargetsInput } from '@pourgate/batching';
+import { readSystemInput, parametersOf, type MaterialSystemInput } from '@pourgate/batching';
+import { readMoldGeometry, type MoldGeometryInput } from '@pourgate/batching';
+import { isoDay } from '@pourgate/batching';
 
 /**
  * The demo shop's materials and work: invented systems, molds, lots, cup tests, work orders and

@@ -63,6 +63,20 @@ export function ensureNpmDeps() {
   fs.writeFileSync(stamp, lockHash());
 }
 
+/**
+ * The workspace packages that others import by name at run time (`@pourgate/batching`): built to
+ * dist/ when their sources are newer. Type checks, Jest and Vite read their sources directly.
+ */
+export function ensureWorkspacePackages() {
+  for (const pkg of ['packages/batching', 'packages/permissions']) {
+    const dir = path.join(ROOT, pkg);
+    if (!isStale(path.join(dir, 'dist/index.js'), [path.join(dir, 'src'), path.join(dir, 'tsconfig.json'), path.join(dir, 'tsconfig.build.json')])) continue;
+    log(`building ${pkg} ...`);
+    fs.rmSync(path.join(dir, 'dist'), { recursive: true, force: true });
+    must(process.execPath, [path.join(ROOT, 'node_modules/typescript/bin/tsc'), '-p', path.join(dir, 'tsconfig.build.json')], { quiet: true });
+  }
+}
+
 let aptUpdated = false;
 /** Installs Debian packages whose marker binary is missing. `pkgs` maps package -> binary path. */
 export function ensureDebianPackages(pkgs) {

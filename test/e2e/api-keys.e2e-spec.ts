@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { closeTestDb, makeOrg, OrgFixture, testDb, tokensFor } from './support/fixtures.js';
 import { startTestApp, TestApp } from './support/app.js';
-import type { Role } from '../../api/src/auth/permissions.js';
+import type { Role } from '@pourgate/permissions';
 
 let t: TestApp;
 let org: OrgFixture;

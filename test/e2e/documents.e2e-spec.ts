@@ -3,7 +3,7 @@ import { createHash } from 'node:crypto';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import type { Role } from '../../api/src/auth/permissions.js';
+import type { Role } from '@pourgate/permissions';
 import { closeTestDb, makeOrg, type OrgFixture, tokensFor } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/app.js';
 import { makePdf } from './support/pdf.js';

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { randomUUID } from 'node:crypto';
-import type { Role } from '../../api/src/auth/permissions.js';
+import type { Role } from '@pourgate/permissions';
 import { schemaRegistry } from '../../api/src/common/schemas/schema-registry.js';
 import { EVENT_TYPE_NAMES } from '../../api/src/events/event-types.js';
 import { closeTestDb, makeOrg, type OrgFixture, testDb, tokensFor } from './support/fixtures.js';

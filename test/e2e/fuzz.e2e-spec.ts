@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import fc from 'fast-check';
 import { randomUUID } from 'node:crypto';
-import { ACTIONS, type Action, type Role } from '../../api/src/auth/permissions.js';
+import { ACTIONS, type Action, type Role } from '@pourgate/permissions';
 import { toProblem } from '../../api/src/common/filters/problem-details.filter.js';
 import { bodyValidator, type CaseContext, caseFor, type FuzzRequest, type FuzzResponse, fuzzable, rowCounts, rowDiff, runFuzz, violations, type WriteRoute, writeRoutes } from '../faults/fuzz-core.js';
 import type { FastifyRequest } from 'fastify';

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { randomUUID } from 'node:crypto';
 import argon2 from 'argon2';
 import { startSmtpCatcher, type SmtpCatcher } from '../../fakes/src/smtp-catcher.js';
-import type { Role } from '../../api/src/auth/permissions.js';
+import type { Role } from '@pourgate/permissions';
 import { closeTestDb, makeOrg, type OrgFixture, testDb, tokensFor } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/app.js';
 import { flexSystem } from './support/shop.js';

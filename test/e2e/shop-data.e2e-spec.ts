@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { randomBytes } from 'node:crypto';
-import type { Role } from '../../api/src/auth/permissions.js';
+import type { Role } from '@pourgate/permissions';
 import { sha256 } from '../../api/src/auth/tokens.service.js';
 import { closeTestDb, makeOrg, type OrgFixture, testDb, tokensFor } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/app.js';

@@ -7,7 +7,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { Webhook } from 'standardwebhooks';
 import { startErpReceiver } from '../../fakes/src/erp-receiver.js';
-import { ACTIONS, type Action } from '../../api/src/auth/permissions.js';
+import { ACTIONS, type Action } from '@pourgate/permissions';
 import { bodyValidator, type CaseContext, rowCounts, rowDiff, runFuzz, writeRoutes } from './fuzz-core.js';
 import { type ApiProcess, json, makeShop, rawSend, readingBody, resetDatabase, ROOT, type Shop, sleep, startApi } from './harness.js';
 // plain Node module shared with `npm start` / `npm test`

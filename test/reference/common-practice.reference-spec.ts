@@ -8,7 +8,7 @@ import {
   computeBatchTargets,
   toSI,
   type MaterialSystemParameters,
-} from '../../api/src/batching/index.js';
+} from '@pourgate/batching';
 
 const system: MaterialSystemParameters = {
   ratioBasis: 'weight',

@@ -11,7 +11,7 @@ import {
   isocyanateIndex,
   isocyanatePartsForIndex,
   ncoEquivalentWeight,
-} from '../../api/src/batching/index.js';
+} from '@pourgate/batching';
 
 /** IUPAC standard atomic weights, conventional values (IUPAC CIAAW). */
 const C = 12.011;

@@ -3,7 +3,7 @@
  * 1 lb = 0.45359237 kg, 1 in = 0.0254 m).
  */
 import { describe, expect, it } from '@jest/globals';
-import { computeBatchTargets, fromSI, moldVolume, toSI } from '../../api/src/batching/index.js';
+import { computeBatchTargets, fromSI, moldVolume, toSI } from '@pourgate/batching';
 
 describe('a 12 × 12 × 2 in cavity at 3 lb/ft³', () => {
   const side = toSI('length', 12, 'in');

@@ -2,7 +2,7 @@
  * Mix ratio checks. Sources beside each check.
  */
 import { describe, expect, it } from '@jest/globals';
-import { judgeRatio, weightRatioFromVolumeRatio, withinRatioTolerance } from '../../api/src/batching/index.js';
+import { judgeRatio, weightRatioFromVolumeRatio, withinRatioTolerance } from '@pourgate/batching';
 
 describe('weight ratio from volume ratio (definition of specific gravity: density relative to water)', () => {
   it('1:1 by volume at SG 1.23 and 1.05 is 117.143 : 100 by weight', () => {

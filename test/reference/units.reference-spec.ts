@@ -2,7 +2,7 @@
  * Unit conversions pinned to published definitions. Each check names its source beside it.
  */
 import { describe, expect, it } from '@jest/globals';
-import { convert, fromSI, temperatureDifferenceToSI, toSI } from '../../api/src/batching/index.js';
+import { convert, fromSI, temperatureDifferenceToSI, toSI } from '@pourgate/batching';
 
 describe('exact definitions (NIST SP 811 Appendix B; NIST Handbook 44 Appendix C)', () => {
   it('1 lb = 0.45359237 kg exactly (international avoirdupois pound, 1959)', () => {

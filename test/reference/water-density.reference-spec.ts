@@ -4,7 +4,7 @@
  * ("Properties of water in the range 0–100 °C"; the five-digit g/cm³ values are from memory).
  */
 import { describe, expect, it } from '@jest/globals';
-import { WATER_DENSITY_TABLE, waterDensity, waterFillVolume } from '../../api/src/batching/index.js';
+import { WATER_DENSITY_TABLE, waterDensity, waterFillVolume } from '@pourgate/batching';
 
 describe('water density', () => {
   it('4 °C ≈ 999.97 kg/m³ (CRC: 0.99997 g/cm³), the maximum', () => {

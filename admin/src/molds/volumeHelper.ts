@@ -4,7 +4,7 @@
  * cavities), fed with the form's shop units converted to SI. The API still computes and stores the
  * volume on save; this only lets the engineer see it while measuring.
  */
-import { moldVolume, waterDensity, WATER_TABLE_MAX_TEMPERATURE, WATER_TABLE_MIN_TEMPERATURE, type MoldVolume, type VolumeMeasurement } from '../../../api/src/batching/mold-volume.ts';
+import { moldVolume, waterDensity, WATER_TABLE_MAX_TEMPERATURE, WATER_TABLE_MIN_TEMPERATURE, type MoldVolume, type VolumeMeasurement } from '@pourgate/batching/mold-volume';
 import { toSI, type Dimension } from '../shop/units';
 
 export type MeasurementKind = VolumeMeasurement['kind'];

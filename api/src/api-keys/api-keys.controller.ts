@@ -1,7 +1,7 @@
 import { Controller, Get, HttpCode, Post, Query, Res } from '@nestjs/common';
 import { ApiCreatedResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { FastifyReply } from 'fastify';
-import type { ApiKeyScope } from '../auth/permissions.js';
+import type { ApiKeyScope } from '@pourgate/permissions';
 import { Caller, type RequestContext } from '../auth/principal.js';
 import { Requires } from '../auth/requires.decorator.js';
 import { IdParam } from '../common/decorators/uuid-param.js';

@@ -2,7 +2,7 @@ import { Inject, Injectable, Logger } from '@nestjs/common';
 import type { Knex } from 'knex';
 import { randomBytes } from 'node:crypto';
 import { AuditService } from '../audit/audit.service.js';
-import type { ApiKeyScope } from '../auth/permissions.js';
+import type { ApiKeyScope } from '@pourgate/permissions';
 import { actorOf, Principal, RequestContext } from '../auth/principal.js';
 import { sha256 } from '../auth/tokens.service.js';
 import { listPage } from '../common/lists/knex-list.js';

@@ -5,7 +5,7 @@ import type { FastifyRequest } from 'fastify';
 import { IS_PUBLIC } from '../common/decorators/public.decorator.js';
 import { ProblemException } from '../common/problems.js';
 import { API_KEY_HEADER } from '../openapi/openapi.js';
-import { Action, ACTIONS, ActionRule, roleAllows } from './permissions.js';
+import { Action, ACTIONS, ActionRule, roleAllows } from '@pourgate/permissions';
 import { REQUIRED_ACTION } from './requires.decorator.js';
 import type { Principal } from './principal.js';
 import { ApiKeysService } from '../api-keys/api-keys.service.js';

@@ -1,5 +1,5 @@
 import { createParamDecorator, ExecutionContext } from '@nestjs/common';
-import type { ApiKeyScope, Role } from './permissions.js';
+import type { ApiKeyScope, Role } from '@pourgate/permissions';
 
 /** Who is calling: a signed-in person or a machine holding an API key. Always one organization. */
 export type Principal =

@@ -1,6 +1,6 @@
 import { applyDecorators, SetMetadata } from '@nestjs/common';
 import { ApiExtension, ApiForbiddenResponse, ApiSecurity, ApiUnauthorizedResponse } from '@nestjs/swagger';
-import { Action, ACTIONS, ActionRule } from './permissions.js';
+import { Action, ACTIONS, ActionRule } from '@pourgate/permissions';
 
 export const REQUIRED_ACTION = 'pourgate:action';
 

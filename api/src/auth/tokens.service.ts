@@ -11,7 +11,7 @@ import type { Env } from '../config/env.js';
 import { KNEX } from '../database/database.module.js';
 import { REDIS } from '../queues/queues.module.js';
 import { UserRow, UsersRepository } from '../users/users.repository.js';
-import { actionsOf } from './permissions.js';
+import { actionsOf } from '@pourgate/permissions';
 import type { AccessClaims } from './strategies.js';
 
 export const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');

@@ -2,7 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
 import { AuditService } from '../audit/audit.service.js';
 import { actorOf, RequestContext } from '../auth/principal.js';
-import { toSI, UnitError } from '../batching/units.js';
+import { toSI, UnitError } from '@pourgate/batching';
 import { listPage } from '../common/lists/knex-list.js';
 import type { ListQuery, ListSpec } from '../common/lists/list-query.js';
 import { FieldError, ProblemException, validationProblem } from '../common/problems.js';

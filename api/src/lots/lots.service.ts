@@ -6,7 +6,7 @@ import { listPage } from '../common/lists/knex-list.js';
 import type { ListQuery, ListSpec } from '../common/lists/list-query.js';
 import { type FieldError, validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
-import { isoDay, todayUtc } from '../shop/dates.js';
+import { isoDay, todayUtc } from '@pourgate/batching';
 import { conflict, isUniqueViolation, notFound } from '../shop/errors.js';
 
 export const lotsListSpec: ListSpec = {

@@ -7,7 +7,7 @@ import { IdParam } from '../common/decorators/uuid-param.js';
 import { ListRoute, parseListQuery, setContentRange } from '../common/lists/list-query.js';
 import { SchemaBody } from '../common/schemas/schema.pipe.js';
 import { MaterialSystemsService, materialSystemsListSpec, revisionsListSpec } from './material-systems.service.js';
-import { type MaterialSystemInput } from './system-parameters.js';
+import { type MaterialSystemInput } from '@pourgate/batching';
 
 @ApiTags('material-systems')
 @Controller('material-systems')

@@ -7,7 +7,7 @@ import type { ListQuery, ListSpec } from '../common/lists/list-query.js';
 import { validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
 import { conflict, isUniqueViolation, notFound } from '../shop/errors.js';
-import { parametersView, readSystemInput, REVISION_COLUMNS, sameParameters, type MaterialSystemInput, type RevisionColumns } from './system-parameters.js';
+import { parametersView, readSystemInput, REVISION_COLUMNS, sameParameters, type MaterialSystemInput, type RevisionColumns } from '@pourgate/batching';
 
 export const materialSystemsListSpec: ListSpec = {
   resource: 'material-systems',

@@ -6,7 +6,7 @@ import { Requires } from '../auth/requires.decorator.js';
 import { IdParam } from '../common/decorators/uuid-param.js';
 import { ListRoute, parseListQuery, setContentRange } from '../common/lists/list-query.js';
 import { SchemaBody } from '../common/schemas/schema.pipe.js';
-import { type MoldGeometryInput } from './mold-geometry.js';
+import { type MoldGeometryInput } from '@pourgate/batching';
 import { MoldsService, moldsListSpec } from './molds.service.js';
 
 @ApiTags('molds')

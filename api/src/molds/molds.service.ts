@@ -7,7 +7,7 @@ import type { ListQuery, ListSpec } from '../common/lists/list-query.js';
 import { validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
 import { conflict, isUniqueViolation, notFound } from '../shop/errors.js';
-import { readMoldGeometry, type MeasurementInput, type MoldGeometryInput } from './mold-geometry.js';
+import { readMoldGeometry, type MeasurementInput, type MoldGeometryInput } from '@pourgate/batching';
 
 export const moldsListSpec: ListSpec = {
   resource: 'molds',

@@ -1,6 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
-import { fitFreeRiseDensity } from '../batching/density.js';
+import { fitFreeRiseDensity } from '@pourgate/batching';
 import { AuditService } from '../audit/audit.service.js';
 import { actorOf, type RequestContext } from '../auth/principal.js';
 import { listPage } from '../common/lists/knex-list.js';
@@ -9,7 +9,7 @@ import { type FieldError, validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
 import { LotsService } from '../lots/lots.service.js';
 import { notFound } from '../shop/errors.js';
-import { QuantityReader, type Quantity } from '../shop/quantities.js';
+import { QuantityReader, type Quantity } from '@pourgate/batching';
 import { CUP_TESTS_FITTED } from '../targets/targets.service.js';
 
 export const cupTestsListSpec: ListSpec = {

@@ -3,7 +3,7 @@ import type { Knex } from 'knex';
 import { listPage } from '../common/lists/knex-list.js';
 import type { ListQuery, ListSpec } from '../common/lists/list-query.js';
 import { KNEX } from '../database/database.module.js';
-import type { ReadingQuantity, ReadingSubject } from './judging.js';
+import type { ReadingQuantity, ReadingSubject } from '@pourgate/batching';
 
 export const readingsListSpec: ListSpec = {
   resource: 'readings',

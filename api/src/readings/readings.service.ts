@@ -5,12 +5,12 @@ import type { Knex } from 'knex';
 import { AuditService } from '../audit/audit.service.js';
 import { actorOf, type RequestContext } from '../auth/principal.js';
 import { SYSTEM_ACTOR, moveBatch } from '../batches/batch-transitions.js';
-import { toSI, UnitError } from '../batching/units.js';
+import { toSI, UnitError } from '@pourgate/batching';
 import type { ListQuery } from '../common/lists/list-query.js';
 import { type FieldError, ProblemException, validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
 import { EventsService } from '../events/events.service.js';
-import { judgeReading, MASS_SUBJECTS, MILESTONE_SUBJECTS, type MassTargets, type ReadingQuantity, type ReadingSubject, type SystemFacts } from './judging.js';
+import { judgeReading, MASS_SUBJECTS, MILESTONE_SUBJECTS, type MassTargets, type ReadingQuantity, type ReadingSubject, type SystemFacts } from '@pourgate/batching';
 import { JUDGE_QUEUE, type JudgeJob, MAX_CLOCK_SKEW_S } from './readings.constants.js';
 import { type NewReading, type ReadingRow, ReadingsRepository } from './readings.repository.js';
 

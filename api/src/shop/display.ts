@@ -1,4 +1,4 @@
-import { displayUnits, fromSI, type Dimension, type UnitSystem } from '../batching/units.js';
+import { displayUnits, fromSI, type Dimension, type UnitSystem } from '@pourgate/batching';
 
 /** The SI symbols the computation writes, and the dimension each belongs to. */
 const SI_DIMENSIONS: Readonly<Record<string, Dimension>> = {

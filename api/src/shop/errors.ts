@@ -1,4 +1,4 @@
-import { BatchingInputError } from '../batching/errors.js';
+import { BatchingInputError, translate } from '@pourgate/batching';
 import { ProblemException, validationProblem, type FieldError } from '../common/problems.js';
 
 /**
@@ -12,19 +12,6 @@ export function withBatchingErrors<T>(fn: () => T, mapPointer: (pointer: string,
     if (e instanceof BatchingInputError) throw validationProblem(translate(e, mapPointer));
     throw e;
   }
-}
-
-export function translate(e: BatchingInputError, mapPointer: (pointer: string, code: string) => string): FieldError[] {
-  const seen = new Set<string>();
-  const out: FieldError[] = [];
-  for (const issue of e.issues) {
-    const pointer = mapPointer(issue.pointer, issue.code) || '/';
-    const key = `${pointer}|${issue.detail}`;
-    if (seen.has(key)) continue;
-    seen.add(key);
-    out.push({ pointer, detail: issue.detail, code: issue.code });
-  }
-  return out;
 }
 
 /** PostgreSQL unique violation (SQLSTATE 23505), optionally of one named constraint. */

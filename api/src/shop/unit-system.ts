@@ -1,5 +1,5 @@
 import type { Knex } from 'knex';
-import type { UnitSystem } from '../batching/units.js';
+import type { UnitSystem } from '@pourgate/batching';
 import type { RequestContext } from '../auth/principal.js';
 import { malformed } from '../common/problems.js';
 

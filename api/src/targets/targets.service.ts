@@ -1,22 +1,22 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
-import type { CupTestPoint } from '../batching/density.js';
-import { computeBatchTargets, type BatchOptions, type BatchTargets, type BatchTargetsInput, type MaterialSystemParameters, type MoldParameters } from '../batching/targets.js';
-import type { UnitSystem } from '../batching/units.js';
-import type { LotExpiry } from '../batching/warnings.js';
+import type { CupTestPoint } from '@pourgate/batching';
+import { computeBatchTargets, type BatchOptions, type BatchTargets, type BatchTargetsInput, type MaterialSystemParameters, type MoldParameters } from '@pourgate/batching';
+import type { UnitSystem } from '@pourgate/batching';
+import type { LotExpiry } from '@pourgate/batching';
 import type { RequestContext } from '../auth/principal.js';
 import { type FieldError, validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
 import { DocumentsService } from '../documents/documents.service.js';
 import { LotsService, type LotPart } from '../lots/lots.service.js';
 import { MaterialSystemsService } from '../materials/material-systems.service.js';
-import { parametersOf, readSystemInput, systemPointer, type MaterialSystemInput } from '../materials/system-parameters.js';
-import { readMoldGeometry, type MoldGeometryInput } from '../molds/mold-geometry.js';
+import { parametersOf, readSystemInput, systemPointer, type MaterialSystemInput } from '@pourgate/batching';
+import { readMoldGeometry, type MoldGeometryInput } from '@pourgate/batching';
 import { MoldsService } from '../molds/molds.service.js';
-import { isoDay, todayUtc } from '../shop/dates.js';
+import { isoDay, todayUtc } from '@pourgate/batching';
 import { inDisplayUnits } from '../shop/display.js';
 import { withBatchingErrors } from '../shop/errors.js';
-import { QuantityReader, type Quantity } from '../shop/quantities.js';
+import { QuantityReader, type Quantity } from '@pourgate/batching';
 
 export interface OptionsInput {
   targetDensity?: Quantity;

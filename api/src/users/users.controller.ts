@@ -1,7 +1,7 @@
 import { Controller, Get, HttpCode, Post, Put, Query, Res } from '@nestjs/common';
 import { ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { FastifyReply } from 'fastify';
-import type { Role } from '../auth/permissions.js';
+import type { Role } from '@pourgate/permissions';
 import { Caller, Origin, type RequestContext } from '../auth/principal.js';
 import { Requires } from '../auth/requires.decorator.js';
 import { Public } from '../common/decorators/public.decorator.js';

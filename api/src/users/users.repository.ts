@@ -1,6 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
-import type { Role } from '../auth/permissions.js';
+import type { Role } from '@pourgate/permissions';
 import { KNEX } from '../database/database.module.js';
 
 export interface UserRow {

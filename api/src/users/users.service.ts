@@ -4,7 +4,7 @@ import argon2 from 'argon2';
 import type { Knex } from 'knex';
 import { randomBytes } from 'node:crypto';
 import { AuditService } from '../audit/audit.service.js';
-import type { Role } from '../auth/permissions.js';
+import type { Role } from '@pourgate/permissions';
 import { actorOf, RequestContext } from '../auth/principal.js';
 import { MeView, sha256, TokensService } from '../auth/tokens.service.js';
 import { listPage } from '../common/lists/knex-list.js';

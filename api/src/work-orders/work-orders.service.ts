@@ -8,7 +8,7 @@ import { listPage } from '../common/lists/knex-list.js';
 import type { ListQuery, ListSpec } from '../common/lists/list-query.js';
 import { type FieldError, ProblemException, validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
-import { isoDay } from '../shop/dates.js';
+import { isoDay } from '@pourgate/batching';
 import { notFound } from '../shop/errors.js';
 
 export const workOrdersListSpec: ListSpec = {

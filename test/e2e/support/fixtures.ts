@@ -3,7 +3,7 @@ import knexPkg from 'knex';
 import type { Knex } from 'knex';
 import { randomUUID } from 'node:crypto';
 import type request from 'supertest';
-import type { Role } from '../../../api/src/auth/permissions.js';
+import type { Role } from '@pourgate/permissions';
 
 const { knex } = knexPkg;
 

@@ -2,7 +2,7 @@
  * Judging one reading: pure, no I/O. The processor gathers the facts (the reading, its device, the
  * batch's stored targets, the batch's other latest stable masses and milestones) and this decides.
  */
-import { judgeRatio, type MixRatio, type Part, weightRatioFromVolumeRatio, withinRatioTolerance } from '../batching/ratio.js';
+import { judgeRatio, type MixRatio, type Part, weightRatioFromVolumeRatio, withinRatioTolerance } from './ratio.js';
 
 export type ReadingQuantity = 'mass' | 'temperature' | 'humidity' | 'milestone';
 export type ReadingSubject = 'part_a' | 'part_b' | 'pigment' | 'mixed' | 'mold' | 'ambient' | 'mix_start' | 'pour' | 'demold';

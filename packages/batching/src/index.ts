@@ -1,5 +1,5 @@
 /**
- * The computation of Pourgate: pure functions, no Nest, no database, no I/O. Everything in SI
+ * The computation of Pourgate and the judging decision: pure functions, no Nest, no database, no I/O.
  * (kg, m³, kg/m³, °C, s); see each module for its conventions.
  */
 export * from './cautions.js';
@@ -14,3 +14,9 @@ export * from './units.js';
 export * from './version.js';
 export * from './warnings.js';
 export { isoDateToDayNumber } from './validation.js';
+export * from './judging.js';
+export * from './inputs/field-errors.js';
+export { ABSOLUTE_ZERO_C, QuantityReader, opt, type QuantityRule } from './inputs/quantities.js';
+export * from './inputs/dates.js';
+export * from './inputs/system-parameters.js';
+export * from './inputs/mold-geometry.js';

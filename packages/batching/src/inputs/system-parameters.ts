@@ -3,11 +3,11 @@
  * with their unit), and as the computation needs it (MaterialSystemParameters). The computation's
  * own input checks decide what makes physical sense, so a system that can be stored can be computed.
  */
-import { computeBatchTargets, validateBatchTargetsInput, DEFAULT_RATIO_TOLERANCE_PERCENT, type MaterialSystemParameters } from '../batching/targets.js';
-import { BatchingInputError } from '../batching/errors.js';
-import type { FieldError } from '../common/problems.js';
-import { QuantityReader, opt, type Quantity } from '../shop/quantities.js';
-import { translate } from '../shop/errors.js';
+import { computeBatchTargets, validateBatchTargetsInput, DEFAULT_RATIO_TOLERANCE_PERCENT, type MaterialSystemParameters } from '../targets.js';
+import { BatchingInputError } from '../errors.js';
+import type { FieldError } from './field-errors.js';
+import { QuantityReader, opt, type Quantity } from './quantities.js';
+import { translate } from './field-errors.js';
 
 export interface MaterialSystemInput {
   name?: string;

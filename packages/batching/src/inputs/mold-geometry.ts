@@ -2,13 +2,13 @@
  * A mold's cavity as the API takes it (measurements in shop units) and the volumes the computation
  * works out from it (m³): box, cylinder, water fill or entered volume, less inserts, times cavities.
  */
-import { BatchingInputError } from '../batching/errors.js';
-import { moldVolume, type MoldVolume, type VolumeMeasurement } from '../batching/mold-volume.js';
-import { MAX_PACK_FACTOR } from '../batching/targets.js';
-import type { Dimension } from '../batching/units.js';
-import type { FieldError } from '../common/problems.js';
-import { translate } from '../shop/errors.js';
-import { QuantityReader, type Quantity } from '../shop/quantities.js';
+import { BatchingInputError } from '../errors.js';
+import { moldVolume, type MoldVolume, type VolumeMeasurement } from '../mold-volume.js';
+import { MAX_PACK_FACTOR } from '../targets.js';
+import type { Dimension } from '../units.js';
+import type { FieldError } from './field-errors.js';
+import { translate } from './field-errors.js';
+import { QuantityReader, type Quantity } from './quantities.js';
 
 export type MeasurementKind = VolumeMeasurement['kind'];
 

@@ -1,12 +1,12 @@
 import { describe, expect, it } from '@jest/globals';
 import fs from 'node:fs';
 import path from 'node:path';
-import { PROJECT_ROOT } from '../config/paths.js';
-import { ACTIONS, actionsOf, API_KEY_SCOPES, matrixMarkdown, roleAllows, ROLES } from './permissions.js';
+import { fileURLToPath } from 'node:url';
+import { ACTIONS, actionsOf, API_KEY_SCOPES, matrixMarkdown, roleAllows, ROLES } from './index.js';
 
 describe('the role × action matrix', () => {
   it('is the table README.md shows (regenerate with npm run docs:roles)', () => {
-    const readme = fs.readFileSync(path.join(PROJECT_ROOT, 'README.md'), 'utf8');
+    const readme = fs.readFileSync(fileURLToPath(new URL('../../../README.md', import.meta.url)), 'utf8');
     const between = /<!-- roles:start -->\n([\s\S]*?)\n<!-- roles:end -->/.exec(readme);
     expect(between?.[1]).toBe(matrixMarkdown());
   });

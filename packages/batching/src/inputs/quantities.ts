@@ -1,11 +1,9 @@
-import { toSI, UnitError, type Dimension } from '../batching/units.js';
-import type { FieldError } from '../common/problems.js';
+import { toSI, UnitError, type Dimension } from '../units.js';
+import type { Quantity } from '../targets.js';
+import type { FieldError } from './field-errors.js';
 
 /** A quantity as the API takes it: `{ value, unit }` in any accepted unit of its dimension. */
-export interface Quantity {
-  value: number;
-  unit: string;
-}
+export type { Quantity };
 
 export interface QuantityRule {
   /** Greater than zero (in SI; every dimension but temperature has its zero at SI zero). */
