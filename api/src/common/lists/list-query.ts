@@ -114,13 +114,21 @@ export function setContentRange(reply: FastifyReply, resource: string, q: ListQu
   reply.header('content-range', `${resource} ${q.offset}-${end}/${total ?? '*'}`);
 }
 
-/** Documents the three list parameters and the Content-Range header on a list route. */
-export function ListRoute(spec: ListSpec) {
+/**
+ * Documents the three list parameters, the Content-Range header and the page's body on a list route:
+ * a JSON array of `itemSchema` (a schema of `schemas/`, e.g. `reading.view`).
+ */
+export function ListRoute(spec: ListSpec, itemSchema?: string) {
   return applyDecorators(
     ApiQuery({ name: 'sort', required: false, description: `JSON ["field","ASC"|"DESC"]; fields: ${spec.sortable.join(', ')}`, schema: { type: 'string' } }),
     ApiQuery({ name: 'range', required: false, description: `JSON [start,end], inclusive, at most ${spec.maxPageSize ?? MAX_PAGE_SIZE} rows`, schema: { type: 'string' } }),
     ApiQuery({ name: 'filter', required: false, description: `JSON object; filters: ${Object.keys(spec.filters).join(', ') || 'none'}`, schema: { type: 'string' } }),
     ApiHeader({ name: 'Range', required: false, description: 'ignored; the range query parameter wins' }),
-    ApiResponse({ status: 200, description: 'One page', headers: { 'Content-Range': { description: `${spec.resource} <start>-<end>/<total>`, schema: { type: 'string' } } } }),
+    ApiResponse({
+      status: 200,
+      description: 'One page',
+      headers: { 'Content-Range': { description: `${spec.resource} <start>-<end>/<total>; the total is * beyond the count cap`, schema: { type: 'string' } } },
+      ...(itemSchema ? { content: { 'application/json': { schema: { type: 'array', items: { $ref: `#/components/schemas/${itemSchema}` } } } } } : {}),
+    } as Parameters<typeof ApiResponse>[0]),
   );
 }
