@@ -15,6 +15,7 @@ import { ImportsModule } from './imports/imports.module.js';
 import { LotsModule } from './lots/lots.module.js';
 import { MaterialsModule } from './materials/materials.module.js';
 import { MoldsModule } from './molds/molds.module.js';
+import { OverviewModule } from './overview/overview.module.js';
 import { QcCupTestsModule } from './qc-cup-tests/qc-cup-tests.module.js';
 import { ReadingsModule } from './readings/readings.module.js';
 import { TargetsModule } from './targets/targets.module.js';
@@ -59,6 +60,7 @@ export class AppModule {
         QcCupTestsModule,
         EventsModule,
         WebhooksModule.forRoot(),
+        OverviewModule,
         HealthModule,
       ],
       controllers: [ProblemsController],

@@ -2505,7 +2505,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description audit-events <start>-<end>/<total> */
+                    /** @description audit-events <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
@@ -2562,7 +2562,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description users <start>-<end>/<total> */
+                    /** @description users <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
@@ -2703,7 +2703,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description invitations <start>-<end>/<total> */
+                    /** @description invitations <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
@@ -2918,7 +2918,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description api-keys <start>-<end>/<total> */
+                    /** @description api-keys <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
@@ -3363,7 +3363,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description devices <start>-<end>/<total> */
+                    /** @description devices <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
@@ -3549,7 +3549,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description material-systems <start>-<end>/<total> */
+                    /** @description material-systems <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
@@ -3737,7 +3737,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description material-system-revisions <start>-<end>/<total> */
+                    /** @description material-system-revisions <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
@@ -3939,7 +3939,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description lots <start>-<end>/<total> */
+                    /** @description lots <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
@@ -4125,7 +4125,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description molds <start>-<end>/<total> */
+                    /** @description molds <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
@@ -4311,7 +4311,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description work-orders <start>-<end>/<total> */
+                    /** @description work-orders <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
@@ -4568,7 +4568,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description batches <start>-<end>/<total> */
+                    /** @description batches <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
@@ -4755,7 +4755,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description batch-state-transitions <start>-<end>/<total> */
+                    /** @description batch-state-transitions <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
@@ -4855,7 +4855,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description readings <start>-<end>/<total> */
+                    /** @description readings <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
@@ -5083,7 +5083,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description imports <start>-<end>/<total> */
+                    /** @description imports <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
@@ -5242,7 +5242,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description qc-cup-tests <start>-<end>/<total> */
+                    /** @description qc-cup-tests <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
@@ -5474,7 +5474,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description webhook-endpoints <start>-<end>/<total> */
+                    /** @description webhook-endpoints <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
@@ -5804,7 +5804,7 @@ export interface operations {
             /** @description One page */
             200: {
                 headers: {
-                    /** @description webhook-deliveries <start>-<end>/<total> */
+                    /** @description webhook-deliveries <start>-<end>/<total>; the total is * beyond the count cap */
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };

@@ -17,6 +17,28 @@ export interface ActionRule {
 export const API_KEY_SCOPES = ['readings:write', 'targets:read', 'work-orders:write', 'events:read', 'devices:read', 'shop:read'] as const;
 export type ApiKeyScope = (typeof API_KEY_SCOPES)[number];
 
+/** What a device key (a scale, a logger) may ever hold: post readings, read targets and devices. */
+export const DEVICE_KEY_SCOPES = ['readings:write', 'targets:read', 'devices:read'] as const satisfies readonly ApiKeyScope[];
+
+/**
+ * The scopes each role may put on a key it issues. A key never holds more than its issuer may
+ * grant: admins set up the organization's integrations (an ERP key posts work orders), integrators
+ * set up devices and so grant the device scopes only; the other roles issue no keys.
+ */
+export const KEY_SCOPE_GRANTS = {
+  admin: API_KEY_SCOPES,
+  integrator: DEVICE_KEY_SCOPES,
+  engineer: [],
+  viewer: [],
+} as const satisfies Record<Role, readonly ApiKeyScope[]>;
+
+/** The scopes of a requested key that its issuer may not grant, or that its kind may not hold. */
+export function refusedScopes(issuer: Role, kind: 'device' | 'integration', scopes: readonly string[]): string[] {
+  const grantable = KEY_SCOPE_GRANTS[issuer] as readonly string[];
+  const forKind = (kind === 'device' ? DEVICE_KEY_SCOPES : API_KEY_SCOPES) as readonly string[];
+  return [...new Set(scopes)].filter((s) => !grantable.includes(s) || !forKind.includes(s));
+}
+
 const everyone = ROLES;
 
 export const ACTIONS = {
@@ -34,10 +56,11 @@ export const ACTIONS = {
   'shop:write': { roles: ['engineer'], description: 'Change material systems, lots, molds, batches, QC cup tests' },
   'work-orders:write': { roles: ['engineer'], scope: 'work-orders:write', description: 'Post and change work orders (the ERP does this with a key)' },
   'targets:read': { roles: everyone, scope: 'targets:read', description: 'Compute and read batch targets' },
-  'readings:read': { roles: everyone, scope: 'readings:write', description: 'List readings and verdicts (a device key reads back what it posted)' },
+  'readings:read': { roles: everyone, scope: 'readings:write', description: 'List readings and verdicts (a device key: only its own device’s readings; an integration key: the organization’s)' },
   'readings:write': { roles: ['engineer'], scope: 'readings:write', description: 'Post readings (scales and loggers do this with a key)' },
   'readings:review': { roles: ['engineer'], description: 'Waive or uphold rejected readings' },
   'imports:write': { roles: ['engineer', 'integrator'], scope: 'readings:write', description: 'Upload logger CSV files' },
+  'overview:read': { roles: everyone, description: 'See the shop-floor overview: pours, open rejections, rejection rate, ratio error per batch' },
   'events:read': { roles: ['admin', 'engineer', 'integrator'], scope: 'events:read', description: 'Poll the event feed' },
 } as const satisfies Record<string, ActionRule>;
 
@@ -63,5 +86,15 @@ export function matrixMarkdown(): string {
   const rows = (Object.entries(ACTIONS) as [Action, ActionRule][]).map(
     ([a, r]) => `| \`${a}\` | ${ROLES.map((role) => (r.roles.includes(role) ? '✔' : '')).join(' | ')} | ${r.scope ? `\`${r.scope}\`` : '—'} | ${r.description} |`,
   );
-  return [head, sep, ...rows].join('\n');
+  const keys = [
+    '',
+    `| API key scope | device keys | issued by | opens |`,
+    `| --- | :-: | --- | --- |`,
+    ...API_KEY_SCOPES.map((scope) => {
+      const issuers = ROLES.filter((role) => (KEY_SCOPE_GRANTS[role] as readonly string[]).includes(scope));
+      const opens = (Object.entries(ACTIONS) as [Action, ActionRule][]).filter(([, r]) => r.scope === scope).map(([a]) => `\`${a}\``);
+      return `| \`${scope}\` | ${(DEVICE_KEY_SCOPES as readonly string[]).includes(scope) ? '✔' : ''} | ${issuers.join(', ')} | ${opens.join(', ')} |`;
+    }),
+  ];
+  return [head, sep, ...rows, ...keys].join('\n');
 }
