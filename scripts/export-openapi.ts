@@ -24,6 +24,9 @@ export async function buildDocument(): Promise<Record<string, unknown>> {
   process.env.DATABASE_URL ||= 'postgres://preview@127.0.0.1:1/preview';
   process.env.REDIS_URL ||= 'redis://127.0.0.1:1';
   try {
+    // the API imports the workspace packages by name, from their dist/ at run time
+    const { ensureWorkspacePackages } = await import('./lib/services.mjs');
+    ensureWorkspacePackages();
     const { AppModule } = await import('../api/src/app.module.js');
     const { buildOpenApiDocument } = await import('../api/src/openapi/openapi.js');
     const app = await NestFactory.create<NestFastifyApplication>(AppModule.forRoot(), new FastifyAdapter(), { preview: true, abortOnError: false, logger: false });

@@ -32,6 +32,9 @@ export interface ApiProcess {
 
 /** The API as the deployment runs it (HTTP and workers in one process), its log in `logFile`. */
 export async function startApi(opts: { port: number; databaseUrl: string; redisUrl: string; logFile: string; env?: Record<string, string>; nodeArgs?: string[] }): Promise<ApiProcess> {
+  // the API imports the workspace packages by name, from their dist/ at run time
+  const { ensureWorkspacePackages } = await import('../../scripts/lib/services.mjs');
+  ensureWorkspacePackages();
   const out = fs.openSync(opts.logFile, 'a');
   const child = spawn(process.execPath, [...(opts.nodeArgs ?? []), '--import', '@swc-node/register/esm-register', path.join(ROOT, 'api/src/main.ts')], {
     cwd: ROOT,
