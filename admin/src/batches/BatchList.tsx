@@ -9,7 +9,7 @@ import { PageHeader } from '../common/PageHeader';
 import { StatusChip } from '../common/StatusChip';
 import { formatDate } from '../format/dates';
 import { useUnitSystem } from '../review/hooks';
-import { formatSi } from '../review/units';
+import { formatSi } from '../format/quantities';
 import { monoFont } from '../theme';
 import { BATCH_STATE, batchTitle, shortRef, type Batch, type BatchState } from './types';
 

@@ -12,7 +12,7 @@ import { releaseBatch } from '../review/commands';
 import { useHolds, useUnitSystem } from '../review/hooks';
 import { describeReason } from '../review/reasons';
 import { readingTitle, readingValue, type Reading } from '../review/types';
-import { formatNumber } from '../review/units';
+import { formatNumber } from '../format/quantities';
 import { monoFont, palette } from '../theme';
 import { BatchStateChip } from './BatchList';
 import { CautionList, ComponentTable, ProcessFigures, TargetSummary, WarningList, massDecimals } from './TargetFigures';

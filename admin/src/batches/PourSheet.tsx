@@ -7,7 +7,7 @@ import type { PourgateIdentity } from '../authProvider';
 import { Guarded } from '../common/Guarded';
 import { LogoMark } from '../layout/LogoMark';
 import { formatDate, formatDateTime } from '../format/dates';
-import { formatDisplay, formatNumber, formatQuantity } from '../review/units';
+import { formatDisplay, formatNumber, formatQuantity } from '../format/quantities';
 import { monoFont } from '../theme';
 import { useBatchTargets } from './BatchShow';
 import { CautionList, massDecimals, ratioText, SdsLine } from './TargetFigures';

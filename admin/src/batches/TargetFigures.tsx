@@ -2,7 +2,7 @@ import WarningAmberRounded from '@mui/icons-material/WarningAmberRounded';
 import { Alert, Box, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import type { ReactNode } from 'react';
 import { monoFont } from '../theme';
-import { decimalsForStep, formatDisplay, formatNumber, formatQuantity, type DisplayQuantity } from '../review/units';
+import { decimalsForStep, formatDisplay, formatNumber, formatQuantity, type DisplayQuantity } from '../format/quantities';
 import type { Caution, TargetsView, TargetWarning } from './types';
 
 /** Decimals for masses: one scale division when the scale is known. */

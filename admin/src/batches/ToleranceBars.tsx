@@ -1,6 +1,6 @@
 import { Box, Typography } from '@mui/material';
 import { palette } from '../theme';
-import { formatNumber, formatQuantity } from '../review/units';
+import { formatNumber, formatQuantity } from '../format/quantities';
 import { barDomain, positionOn } from './weighed';
 
 export interface BarRow {

@@ -1,4 +1,4 @@
-import type { DisplayQuantity } from '../review/units';
+import type { DisplayQuantity } from '../format/quantities';
 
 /** A batch as `GET /v1/batches` sends it (api/src/batches/batches.service.ts, batchView). */
 export type BatchState = 'planned' | 'weighing' | 'mixed' | 'curing' | 'on_hold' | 'released' | 'scrapped';

@@ -29,7 +29,7 @@ import type { TargetsView } from '../batches/types';
 import { postCommand } from '../review/commands';
 import { useUnitSystem } from '../review/hooks';
 import type { Device } from '../review/types';
-import { formatNumber } from '../review/units';
+import { formatNumber } from '../format/quantities';
 import { buildPreview, fieldOfPointer, initialForm, type CalculatorForm } from './previewRequest';
 
 interface SystemRow {

@@ -10,7 +10,7 @@ import { shortRef } from '../batches/types';
 import { useNow } from '../common/useNow';
 import { formatDate } from '../format/dates';
 import type { Reading } from '../review/types';
-import { formatNumber } from '../review/units';
+import { formatNumber } from '../format/quantities';
 import { palette } from '../theme';
 import { outside, poursToday, ratioErrorsBySystem, rejectionByDay } from './floorStats';
 

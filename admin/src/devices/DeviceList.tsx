@@ -9,7 +9,7 @@ import { PageHeader } from '../common/PageHeader';
 import { StatusChip } from '../common/StatusChip';
 import { useNow } from '../common/useNow';
 import { formatDate } from '../format/dates';
-import { formatQuantity } from '../shop/units';
+import { formatSiAs } from '../format/quantities';
 import { monoFont } from '../theme';
 import { calibrationView, KIND_CHOICES, kindLabel, localToday, type Device } from './deviceRules';
 
@@ -61,7 +61,7 @@ function RangeCell() {
   const dUnit = d.readabilityKg < 1 ? 'g' : 'kg';
   return (
     <Typography variant="body2" sx={{ whiteSpace: 'nowrap' }}>
-      d = {formatQuantity(d.readabilityKg, 'mass', dUnit)} · max {formatQuantity(d.capacityKg, 'mass', 'kg')}
+      d = {formatSiAs(d.readabilityKg, dUnit)} · max {formatSiAs(d.capacityKg, 'kg')}
     </Typography>
   );
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { addDaysIso, dayEndIso, dayStartIso, expiryLabel, formatDate, formatDateTime, formatDuration, formatRelative, isoToDay, lastUsedLabel } from './dates';
+import { addDaysIso, dayEndIso, dayStartIso, expiryLabel, formatDate, formatDateTime, formatRelative, isoToDay, lastUsedLabel } from './dates';
 
 const NOW = Date.parse('2025-06-02T12:00:00Z');
 const ago = (ms: number) => new Date(NOW - ms).toISOString();
@@ -54,16 +54,6 @@ describe('formatDateTime / formatDate', () => {
     expect(formatDateTime('2025-03-12T14:03:00Z', { locale: 'en-GB', timeZone: 'Asia/Tokyo' })).toBe('12 Mar 2025, 23:03');
     expect(formatDate('2025-03-12T23:30:00Z', { locale: 'en-GB', timeZone: 'UTC' })).toBe('12 Mar 2025');
     expect(formatDateTime(null)).toBe('—');
-  });
-});
-
-describe('formatDuration', () => {
-  it('names whole units', () => {
-    expect(formatDuration(3600)).toBe('1 hour');
-    expect(formatDuration(7 * 86400)).toBe('7 days');
-    expect(formatDuration(90)).toBe('90 seconds');
-    expect(formatDuration(120)).toBe('2 minutes');
-    expect(formatDuration(0)).toBe('no overlap');
   });
 });
 

@@ -68,24 +68,6 @@ export function expiryLabel(value: string | null | undefined, now: number = Date
   return t > now ? `Expires ${formatRelative(t, now)}` : `Expired ${formatRelative(t, now)}`;
 }
 
-/** "1 hour", "7 days", "90 seconds": for grace periods and lifetimes. */
-export function formatDuration(seconds: number): string {
-  if (!Number.isFinite(seconds) || seconds <= 0) return 'no overlap';
-  const units: [number, string][] = [
-    [86_400, 'day'],
-    [3_600, 'hour'],
-    [60, 'minute'],
-    [1, 'second'],
-  ];
-  for (const [size, name] of units) {
-    if (seconds >= size && seconds % size === 0) {
-      const n = seconds / size;
-      return `${n} ${name}${n === 1 ? '' : 's'}`;
-    }
-  }
-  return `${Math.round(seconds)} seconds`;
-}
-
 /** An ISO instant `days` after `now`, for the "expires after" choices. */
 export function addDaysIso(days: number, now: number = Date.now()): string {
   return new Date(now + days * DAY).toISOString();

@@ -5,7 +5,7 @@ import { Alert, Box, Button, Card, CardContent, LinearProgress, Table, TableBody
 import { useEffect, useId, useRef, useState, type DragEvent } from 'react';
 import { StatusChip } from '../common/StatusChip';
 import { monoFont } from '../theme';
-import { formatNumber } from '../review/units';
+import { formatNumber } from '../format/quantities';
 import { isFinished, pollImport, progressOf, type ImportJob } from './upload';
 
 export interface ImportPanelProps {

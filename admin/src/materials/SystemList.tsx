@@ -9,7 +9,7 @@ import { PageHeader } from '../common/PageHeader';
 import { RelativeTime } from '../common/RelativeTime';
 import { StatusChip } from '../common/StatusChip';
 import { SdsCaution } from '../shop/SdsCaution';
-import { formatQuantity, formatSeconds } from '../shop/units';
+import { formatSiAs, formatSeconds } from '../format/quantities';
 import { useDisplayUnits } from '../shop/useDisplayUnits';
 import { KIND_CHOICES, kindLabel, ratioLabel, type MaterialSystem } from './systemRules';
 
@@ -49,9 +49,9 @@ function DensityCell() {
   if (!s) return null;
   return (
     <Box sx={{ whiteSpace: 'nowrap' }}>
-      <Typography variant="body2">{formatQuantity(s.freeRiseDensityKgM3, 'density', units.density)}</Typography>
+      <Typography variant="body2">{formatSiAs(s.freeRiseDensityKgM3, units.density)}</Typography>
       <Typography variant="caption" color="text.secondary">
-        at {formatQuantity(s.freeRiseReferenceTemperatureC, 'temperature', system === 'imperial' ? 'degF' : 'degC', 3)}
+        at {formatSiAs(s.freeRiseReferenceTemperatureC, system === 'imperial' ? 'degF' : 'degC', { significant: 3 })}
       </Typography>
     </Box>
   );

@@ -12,14 +12,14 @@ import type { MaterialSystemDocument, MaterialSystemRevision } from '../dataProv
 import { formatDate, formatDateTime } from '../format/dates';
 import { DetailGrid, Section } from '../shop/DetailGrid';
 import { SdsCaution } from '../shop/SdsCaution';
-import { formatNumber, formatQuantity, formatSeconds } from '../shop/units';
+import { formatNumber, formatSiAs, formatSeconds } from '../format/quantities';
 import { useDisplayUnits } from '../shop/useDisplayUnits';
 import { kindLabel, ratioLabel, type MaterialSystem } from './systemRules';
 
 function useTemperature() {
   const { system } = useDisplayUnits();
   const unit = system === 'imperial' ? 'degF' : 'degC';
-  return (c: number | null | undefined) => formatQuantity(c ?? null, 'temperature', unit, 3);
+  return (c: number | null | undefined) => formatSiAs(c ?? null, unit, { significant: 3 });
 }
 
 function windowText(t: (c: number | null | undefined) => string, min: number | null | undefined, max: number | null | undefined) {
@@ -147,7 +147,7 @@ function Revisions({ system }: { system: MaterialSystem }) {
             <TableCell sx={{ whiteSpace: 'nowrap' }}>{formatDateTime(r.createdAt)}</TableCell>
             <TableCell>{r.createdBy ?? '—'}</TableCell>
             <TableCell sx={{ whiteSpace: 'nowrap' }}>{ratioLabel(r as unknown as MaterialSystem)}</TableCell>
-            <TableCell sx={{ whiteSpace: 'nowrap' }}>{formatQuantity(r.freeRiseDensityKgM3 as number, 'density', units.density)}</TableCell>
+            <TableCell sx={{ whiteSpace: 'nowrap' }}>{formatSiAs(r.freeRiseDensityKgM3 as number, units.density)}</TableCell>
             <TableCell>{r.changeNote ?? <Typography variant="body2" color="text.secondary" component="span">—</Typography>}</TableCell>
           </TableRow>
         ))}
@@ -162,7 +162,7 @@ function SystemDetail() {
   const { units } = useDisplayUnits();
   const { canAccess } = useCanAccess({ resource: 'material-systems', action: 'edit' });
   if (!s) return null;
-  const n = (v: number | null | undefined, suffix = '') => (v === null || v === undefined ? '—' : `${formatNumber(v, 4)}${suffix}`);
+  const n = (v: number | null | undefined, suffix = '') => (v === null || v === undefined ? '—' : `${formatNumber(v, { significant: 4 })}${suffix}`);
   return (
     <Box>
       <PageHeader
@@ -184,23 +184,23 @@ function SystemDetail() {
         <DetailGrid
           items={[
             { label: 'Mix ratio A : B', value: `${ratioLabel(s)} ± ${s.ratioTolerancePercent} %` },
-            { label: 'By weight', value: `${formatNumber(s.derived.weightRatio.a, 4)} : ${formatNumber(s.derived.weightRatio.b, 4)}` },
-            { label: 'By volume', value: `${formatNumber(s.derived.volumeRatio.a, 4)} : ${formatNumber(s.derived.volumeRatio.b, 4)}` },
+            { label: 'By weight', value: `${formatNumber(s.derived.weightRatio.a, { significant: 4 })} : ${formatNumber(s.derived.weightRatio.b, { significant: 4 })}` },
+            { label: 'By volume', value: `${formatNumber(s.derived.volumeRatio.a, { significant: 4 })} : ${formatNumber(s.derived.volumeRatio.b, { significant: 4 })}` },
             { label: 'Specific gravity A / B', value: `${n(s.specificGravityA)} / ${n(s.specificGravityB)}` },
             { label: 'Isocyanate side', value: `Part ${s.isocyanatePart}` },
-            { label: 'Isocyanate index', value: s.derived.isocyanateIndex === null ? 'Needs %NCO and OH number' : formatNumber(s.derived.isocyanateIndex, 4) },
+            { label: 'Isocyanate index', value: s.derived.isocyanateIndex === null ? 'Needs %NCO and OH number' : formatNumber(s.derived.isocyanateIndex, { significant: 4 }) },
           ]}
         />
       </Section>
       <Section title="Density and working times">
         <DetailGrid
           items={[
-            { label: 'Free-rise density', value: `${formatQuantity(s.freeRiseDensityKgM3, 'density', units.density)} at ${t(s.freeRiseReferenceTemperatureC)}` },
-            { label: 'Density change per °C', value: s.freeRiseDensitySlopeKgM3PerC === null ? 'From cup tests' : `${formatNumber(s.freeRiseDensitySlopeKgM3PerC, 3)} kg/m³ per °C` },
+            { label: 'Free-rise density', value: `${formatSiAs(s.freeRiseDensityKgM3, units.density)} at ${t(s.freeRiseReferenceTemperatureC)}` },
+            { label: 'Density change per °C', value: s.freeRiseDensitySlopeKgM3PerC === null ? 'From cup tests' : `${formatNumber(s.freeRiseDensitySlopeKgM3PerC, { significant: 3 })} kg/m³ per °C` },
             { label: 'Pot life', value: formatSeconds(s.potLifeS) },
             { label: 'Demold', value: formatSeconds(s.demoldTimeS) },
             { label: 'Full cure', value: formatSeconds(s.fullCureTimeS) },
-            { label: 'Largest single pour', value: s.exothermMassLimitKg === null ? '2 kg (default)' : formatQuantity(s.exothermMassLimitKg, 'mass', units.mass) },
+            { label: 'Largest single pour', value: s.exothermMassLimitKg === null ? '2 kg (default)' : formatSiAs(s.exothermMassLimitKg, units.mass) },
           ]}
         />
       </Section>

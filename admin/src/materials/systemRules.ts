@@ -1,5 +1,5 @@
 import { writeBody } from '../dataProvider/writeBodies';
-import { secondsForInput } from '../shop/units';
+import { secondsForInput } from '../format/quantities';
 
 export type SystemKind = 'flexible' | 'integral-skin' | 'other';
 

@@ -6,7 +6,7 @@ import { DataTable, List, SearchInput, TopToolbar, useCanAccess, useRecordContex
 import { EmptyState } from '../common/EmptyState';
 import { Guarded } from '../common/Guarded';
 import { PageHeader } from '../common/PageHeader';
-import { formatNumber, formatQuantity } from '../shop/units';
+import { formatNumber, formatSiAs } from '../format/quantities';
 import { useDisplayUnits } from '../shop/useDisplayUnits';
 import { monoFont } from '../theme';
 import { measurementText, type Mold } from './moldRules';
@@ -46,7 +46,7 @@ function MeasuredCell() {
       <Typography variant="body2">{measurementText(m.cavity)}</Typography>
       {m.inserts?.length ? (
         <Typography variant="caption" color="text.secondary">
-          less {m.inserts.length} {m.inserts.length === 1 ? 'insert' : 'inserts'} ({formatQuantity(m.insertVolumeM3, 'volume', 'L')})
+          less {m.inserts.length} {m.inserts.length === 1 ? 'insert' : 'inserts'} ({formatSiAs(m.insertVolumeM3, 'L')})
         </Typography>
       ) : null}
     </Box>
@@ -57,7 +57,7 @@ function VolumeCell({ field }: { field: 'cavityVolumeM3' | 'totalVolumeM3' }) {
   const m = useRecordContext<Mold>();
   const { system } = useDisplayUnits();
   if (!m) return null;
-  return <span style={{ whiteSpace: 'nowrap' }}>{formatQuantity(m[field], 'volume', system === 'imperial' ? 'in3' : 'L')}</span>;
+  return <span style={{ whiteSpace: 'nowrap' }}>{formatSiAs(m[field], system === 'imperial' ? 'in3' : 'L')}</span>;
 }
 
 function NoMolds() {
@@ -81,7 +81,7 @@ export default function MoldListPage() {
           <DataTable.Col source="cavityVolumeM3" label="Foam volume, one cavity" render={() => <VolumeCell field="cavityVolumeM3" />} />
           <DataTable.Col label="Cavities" disableSort render={(m: Mold) => m.cavities} />
           <DataTable.Col source="totalVolumeM3" label="All cavities" render={() => <VolumeCell field="totalVolumeM3" />} />
-          <DataTable.Col label="Pack factor" disableSort render={(m: Mold) => (m.defaultPackFactor === null ? <Typography variant="body2" color="text.secondary">—</Typography> : formatNumber(m.defaultPackFactor, 3))} />
+          <DataTable.Col label="Pack factor" disableSort render={(m: Mold) => (m.defaultPackFactor === null ? <Typography variant="body2" color="text.secondary">—</Typography> : formatNumber(m.defaultPackFactor, { significant: 3 }))} />
         </DataTable>
       </List>
     </Guarded>

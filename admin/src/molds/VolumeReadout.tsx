@@ -1,7 +1,7 @@
 import StraightenOutlined from '@mui/icons-material/StraightenOutlined';
 import { Box, Typography } from '@mui/material';
 import { useWatch } from 'react-hook-form';
-import { formatQuantity } from '../shop/units';
+import { formatSiAs } from '../format/quantities';
 import { useDisplayUnits } from '../shop/useDisplayUnits';
 import { previewMoldVolume, type FormMeasurement } from './volumeHelper';
 
@@ -13,10 +13,10 @@ export function VolumeReadout() {
   const r = previewMoldVolume({ cavity, inserts, cavities });
   const v = (m3: number) => (
     <>
-      <strong>{formatQuantity(m3, 'volume', units[0]!)}</strong>
+      <strong>{formatSiAs(m3, units[0]!)}</strong>
       <Box component="span" sx={{ color: 'text.secondary' }}>
         {' '}
-        ({formatQuantity(m3, 'volume', units[1]!)})
+        ({formatSiAs(m3, units[1]!)})
       </Box>
     </>
   );
@@ -52,7 +52,7 @@ export function VolumeReadout() {
           </Box>
           {r.waterDensity !== undefined ? (
             <Typography variant="caption" color="text.secondary" sx={{ gridColumn: '1 / -1' }}>
-              Water at that temperature weighs {formatQuantity(r.waterDensity, 'density', 'kg/m3', 7)} (table after Kell, 1975).
+              Water at that temperature weighs {formatSiAs(r.waterDensity, 'kg/m3', { significant: 7 })} (table after Kell, 1975).
             </Typography>
           ) : null}
         </Box>

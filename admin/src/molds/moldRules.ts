@@ -1,4 +1,4 @@
-import { formatNumber } from '../shop/units';
+import { formatNumber } from '../format/quantities';
 import { MEASUREMENT_FIELDS, MEASUREMENT_KINDS, type MeasurementKind } from './volumeHelper';
 
 export interface MeasurementRecord {
@@ -31,7 +31,7 @@ export function measurementText(m: MeasurementRecord | undefined): string {
   const kind = MEASUREMENT_KINDS.find((k) => k.id === m.kind)?.name ?? m.kind;
   const q = (f: string) => {
     const v = m[f] as { value: number; unit: string } | undefined;
-    return v ? { n: formatNumber(v.value, 5), u: UNIT_TEXT[v.unit] ?? v.unit } : null;
+    return v ? { n: formatNumber(v.value, { significant: 5 }), u: UNIT_TEXT[v.unit] ?? v.unit } : null;
   };
   const fields = MEASUREMENT_FIELDS[m.kind]?.map((f) => q(f.field)) ?? [];
   if (fields.some((f) => !f)) return kind;

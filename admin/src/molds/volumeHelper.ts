@@ -5,7 +5,7 @@
  * volume on save; this only lets the engineer see it while measuring.
  */
 import { moldVolume, waterDensity, WATER_TABLE_MAX_TEMPERATURE, WATER_TABLE_MIN_TEMPERATURE, type MoldVolume, type VolumeMeasurement } from '@pourgate/batching/mold-volume';
-import { toSI, type Dimension } from '../shop/units';
+import { toSI, type Dimension } from '../format/quantities';
 
 export type MeasurementKind = VolumeMeasurement['kind'];
 

@@ -25,7 +25,7 @@ import { PageHeader } from '../common/PageHeader';
 import { formatDateTime } from '../format/dates';
 import { QuantityInput } from '../shop/QuantityInput';
 import { SdsCaution } from '../shop/SdsCaution';
-import { formatQuantity, formatSeconds } from '../shop/units';
+import { formatSiAs, formatSeconds } from '../format/quantities';
 import { useDisplayUnits } from '../shop/useDisplayUnits';
 import { useSaved } from '../shop/useSaved';
 
@@ -65,7 +65,7 @@ function TemperatureCell() {
   const unit = system === 'imperial' ? 'degF' : 'degC';
   return (
     <span style={{ whiteSpace: 'nowrap' }}>
-      A {formatQuantity(c.componentTemperatureAC, 'temperature', unit, 3)} · B {formatQuantity(c.componentTemperatureBC, 'temperature', unit, 3)}
+      A {formatSiAs(c.componentTemperatureAC, unit, { significant: 3 })} · B {formatSiAs(c.componentTemperatureBC, unit, { significant: 3 })}
     </span>
   );
 }
@@ -84,7 +84,7 @@ function DensityCell() {
   const c = useRecordContext<CupTest>();
   const { units } = useDisplayUnits();
   if (!c) return null;
-  return <strong style={{ fontWeight: 500, whiteSpace: 'nowrap' }}>{formatQuantity(c.freeRiseDensityKgM3, 'density', units.density)}</strong>;
+  return <strong style={{ fontWeight: 500, whiteSpace: 'nowrap' }}>{formatSiAs(c.freeRiseDensityKgM3, units.density)}</strong>;
 }
 
 const filters = [

@@ -31,7 +31,7 @@ import { useHolds, useUnitSystem } from './hooks';
 import { describeReason, REASON_FILTER_CODES, reasonTitle } from './reasons';
 import { ReviewDialog, type Decision } from './ReviewDialog';
 import { READING_STATUS, readingTitle, readingValue, type Device, type Reading } from './types';
-import { formatSi } from './units';
+import { formatSi } from '../format/quantities';
 
 /** The keys of the queue; the same list is printed on the page. */
 export const QUEUE_KEYS: readonly { keys: string[]; does: string }[] = [

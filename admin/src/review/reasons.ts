@@ -4,7 +4,7 @@
  * measured value and the limit as a person reads them, and one line to scan in a list.
  */
 import type { UnitSystem } from '../auth/me';
-import { formatNumber, formatSeconds, formatSi } from './units';
+import { formatNumber, formatSeconds, formatSi } from '../format/quantities';
 
 export interface Reason {
   code: string;

@@ -1,7 +1,7 @@
 import { Box, FormHelperText } from '@mui/material';
 import { NumberInput, SelectInput, required as requiredRule, useSourceContext } from 'react-admin';
 import { useFormState } from 'react-hook-form';
-import { unitChoices, type Dimension } from './units';
+import { unitChoices, type Dimension } from '../format/quantities';
 import { useDisplayUnits } from './useDisplayUnits';
 
 function errorAt(errors: Record<string, unknown>, path: string): string | undefined {

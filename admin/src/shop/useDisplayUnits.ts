@@ -1,6 +1,6 @@
 import { useGetIdentity } from 'react-admin';
 import type { PourgateIdentity } from '../authProvider';
-import { DISPLAY_UNITS, type UnitSystem } from './units';
+import { DISPLAY_UNITS, type UnitSystem } from '../format/quantities';
 
 /** The person's unit system (their profile setting) and the unit each dimension is shown in. */
 export function useDisplayUnits() {

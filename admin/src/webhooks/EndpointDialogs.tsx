@@ -8,7 +8,8 @@ import { SecretReveal } from '../api-keys/SecretReveal';
 import { formErrorsOrNotify } from '../common/errors';
 import type { PourgateDataProvider } from '../dataProvider';
 import type { EndpointTestResult, WebhookEndpoint, WebhookEndpointWithSecret } from '../dataProvider/shopTypes';
-import { formatDateTime, formatDuration } from '../format/dates';
+import { formatDateTime } from '../format/dates';
+import { formatDuration } from '../format/quantities';
 import { monoFont } from '../theme';
 import { eventChoices, eventInfo, OVERLAP_CHOICES, testVerdict } from './webhookRules';
 
