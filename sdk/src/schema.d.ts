@@ -145,7 +145,7 @@ export interface paths {
         put?: never;
         /**
          * Issue an API key
-         * @description The response carries `secret` — the only time it is shown. Send it in the X-Api-Key header.
+         * @description The response carries `secret` — the only time it is shown. Send it in the X-Api-Key header. The scopes must be ones the issuer may grant (integrators: the device scopes), and a device key holds only the device scopes; otherwise 403 naming the refused scopes.
          */
         post: operations["ApiKeys_create"];
         delete?: never;
@@ -180,7 +180,10 @@ export interface paths {
         };
         get?: never;
         put?: never;
-        /** Revoke a key at once */
+        /**
+         * Revoke a key at once
+         * @description Ends every secret of the key together: its predecessor still in a rotation grace period and any successor too. A revoked key cannot be rotated (409).
+         */
         post: operations["ApiKeys_revoke"];
         delete?: never;
         options?: never;
@@ -216,7 +219,7 @@ export interface paths {
         put?: never;
         /**
          * Sign in with e-mail and password
-         * @description Failed attempts are throttled per account and per address (429 with Retry-After). The message never says whether the e-mail exists.
+         * @description Every attempt is counted before the password is checked, per account (also for unknown addresses) and per client address (429 with Retry-After). The message never says whether the e-mail exists.
          */
         post: operations["Auth_signIn"];
         delete?: never;
@@ -990,6 +993,26 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/v1/overview": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The shop floor at a glance: pours today, open rejections, rejection rate per day, ratio error per batch
+         * @description Counted in PostgreSQL over every reading of the organization, exact at any volume. Days are calendar days in timeZone.
+         */
+        get: operations["Overview_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/v1/health": {
         parameters: {
             query?: never;
@@ -1656,6 +1679,41 @@ export interface webhooks {
 }
 export interface components {
     schemas: {
+        /** An API key (the fields every key view has) */
+        "api-key.base": {
+            /** Format: uuid */
+            id: string;
+            name: string;
+            /** @enum {unknown} */
+            kind: "device" | "integration";
+            /** @enum {unknown} */
+            environment: "live" | "test";
+            scopes: ("readings:write" | "targets:read" | "work-orders:write" | "events:read" | "devices:read" | "shop:read")[];
+            /** Format: uuid */
+            deviceId: string | null;
+            /** @description The first characters of the secret, to recognise it */
+            prefix: string;
+            /** @enum {unknown} */
+            state: "active" | "grace" | "expired" | "revoked";
+            /** Format: date-time */
+            createdAt: string;
+            createdBy: {
+                /** Format: uuid */
+                id: string;
+                name: string | null;
+            } | null;
+            /** Format: uuid */
+            rotatedFrom: string | null;
+            /** Format: date-time */
+            lastUsedAt: string | null;
+            lastUsedIp: string | null;
+            /** Format: date-time */
+            expiresAt: string | null;
+            /** Format: date-time */
+            graceUntil: string | null;
+            /** Format: date-time */
+            revokedAt: string | null;
+        };
         /** Issue an API key */
         "api-key.create": {
             /** @example Scale at station 2 */
@@ -1679,6 +1737,11 @@ export interface components {
             /** Format: date-time */
             expiresAt?: string | null;
         };
+        /** A new API key with its secret: the only time the secret is shown */
+        "api-key.created": {
+            /** @description Send it in the X-Api-Key header; store it now, it is not shown again */
+            secret: string;
+        } & components["schemas"]["api-key.base"];
         /** Rotate an API key */
         "api-key.rotate": {
             /**
@@ -1686,6 +1749,28 @@ export interface components {
              * @default 86400
              */
             graceSeconds?: number;
+        };
+        /** An API key (never its secret) */
+        "api-key.view": components["schemas"]["api-key.base"];
+        /** One entry of the audit log */
+        "audit-entry.view": {
+            id: string;
+            /** Format: date-time */
+            createdAt: string;
+            /** @enum {unknown} */
+            actorType: "user" | "api_key" | "system" | "anonymous";
+            actorId: string | null;
+            actorLabel: string | null;
+            /**
+             * @example user.signed_in
+             * @example reading.waived
+             */
+            action: string;
+            targetType: string | null;
+            targetId: string | null;
+            details: Record<string, never>;
+            ip: string | null;
+            userAgent: string | null;
         };
         /** Refresh or end a session */
         "auth.refresh": {
@@ -1761,6 +1846,58 @@ export interface components {
             /** @description Scale divisions the ratio band on the smaller part must span (5 when not given) */
             minimumToleranceDivisions?: number;
         };
+        /** The targets stored with a batch */
+        "batch-targets.view": {
+            /** Format: uuid */
+            batchId: string;
+            /** @enum {unknown} */
+            state: "planned" | "weighing" | "mixed" | "curing" | "on_hold" | "released" | "scrapped";
+            /** Format: date-time */
+            computedAt: string;
+        } & components["schemas"]["targets.figures"];
+        /** One move of a batch from one state to another */
+        "batch-transition.view": {
+            id: number;
+            /** Format: uuid */
+            batchId: string;
+            /** @enum {unknown} */
+            from: "planned" | "weighing" | "mixed" | "curing" | "on_hold" | "released" | "scrapped" | null;
+            /** @enum {unknown} */
+            to: "planned" | "weighing" | "mixed" | "curing" | "on_hold" | "released" | "scrapped";
+            /** Format: date-time */
+            at: string;
+            /**
+             * @example user
+             * @example api_key
+             * @example system
+             */
+            actorType: string;
+            actor: string | null;
+            reason: string | null;
+        };
+        /** Something to check before pouring */
+        "batch-warning": {
+            /**
+             * @example PACK_FACTOR_ABOVE_LIMIT
+             * @example LOT_EXPIRED
+             */
+            code: string;
+            /** @enum {unknown} */
+            severity: "warning" | "danger";
+            message: string;
+            /** @description SI (see unit) */
+            measured?: number;
+            /** @description SI (see unit) */
+            limit?: number;
+            /** @description SI unit of measured and limit: kg, degC, 1, %, d */
+            unit?: string;
+            /** @description measured and limit in the caller’s units (for SI quantities) */
+            display?: {
+                measured: number | null;
+                limit: number | null;
+                unit: string;
+            };
+        };
         /**
          * Plan a batch (one mix) and compute its targets
          * @description From a work order (its mold and material system are used unless given) or ad hoc. Give a moldId, or freeRiseCup for a cup test.
@@ -1780,6 +1917,73 @@ export interface components {
             stationCode?: string | null;
             options?: components["schemas"]["batch-options"];
             notes?: string | null;
+        };
+        /** A batch (one mix) with a summary of its targets in kg */
+        "batch.view": {
+            /** Format: uuid */
+            id: string;
+            /** @enum {unknown} */
+            state: "planned" | "weighing" | "mixed" | "curing" | "on_hold" | "released" | "scrapped";
+            /** Format: uuid */
+            workOrderId: string | null;
+            workOrderExternalRef: string | null;
+            /** Format: uuid */
+            materialSystemId: string;
+            materialSystemName: string;
+            materialSystemRevision: number;
+            /** Format: uuid */
+            materialSystemRevisionId: string;
+            /** @enum {unknown} */
+            subject: "mold" | "free_rise_cup";
+            /** Format: uuid */
+            moldId: string | null;
+            moldName: string | null;
+            /** Format: uuid */
+            scaleDeviceId: string | null;
+            stationCode: string | null;
+            lots: {
+                /** @enum {unknown} */
+                part: "A" | "B" | "pigment";
+                /** Format: uuid */
+                id: string;
+                lotNumber: string;
+                /** Format: date */
+                expiresOn: string;
+            }[];
+            /** Format: date */
+            plannedFor: string;
+            notes: string | null;
+            /** @description The options as given when the batch was planned */
+            options: components["schemas"]["batch-options"];
+            computationVersion: string;
+            summary: {
+                targetDensityKgM3: number;
+                packFactor: number;
+                foamMassKg: number;
+                mixedMassKg: number;
+                massAKg: number;
+                massBKg: number;
+                pigmentMassKg: number;
+                totalMassKg: number;
+                /** @description Warning codes; the targets carry the full warnings */
+                warnings: string[];
+            };
+            targetsHref: string;
+            cautions: components["schemas"]["caution"][];
+            createdBy: string | null;
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            updatedAt: string;
+        };
+        /** A caution shown with every target: read the SDS first */
+        caution: {
+            /**
+             * @example ISOCYANATE_SENSITISER
+             * @example EXOTHERM
+             */
+            code: string;
+            text: string;
         };
         /** Register a device */
         "device.create": {
@@ -1810,6 +2014,62 @@ export interface components {
             /** Format: date */
             calibrationDue?: string | null;
             retired?: boolean;
+        };
+        /** A device: scale, thermometer, hygrometer, logger or gateway */
+        "device.view": {
+            /** Format: uuid */
+            id: string;
+            /** @enum {unknown} */
+            kind: "scale" | "thermometer" | "hygrometer" | "logger" | "gateway";
+            serial: string;
+            name: string;
+            station: {
+                /** Format: uuid */
+                id: string;
+                code: string | null;
+                name: string | null;
+            } | null;
+            stationCode: string | null;
+            /** @description Scales: the division d, kg */
+            readabilityKg: number | null;
+            capacityKg: number | null;
+            /** Format: date */
+            calibrationDue: string | null;
+            calibrationOverdue: boolean;
+            retired: boolean;
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            updatedAt: string;
+        };
+        /** A quantity in the caller’s unit system, with the SI value alongside */
+        "displayed-quantity": {
+            value: number;
+            unit: string;
+            /** @description Absent for dimensionless figures */
+            si?: {
+                value: number;
+                unit: string;
+            };
+        };
+        /** An SDS or TDS on file for a material system */
+        "document.view": {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            materialSystemId: string;
+            /** @enum {unknown} */
+            kind: "SDS" | "TDS";
+            title: string | null;
+            fileName: string;
+            contentType: string;
+            sizeBytes: number;
+            sha256: string;
+            /** @description Download (application/pdf) */
+            href: string;
+            uploadedBy: string | null;
+            /** Format: date-time */
+            createdAt: string;
         };
         /**
          * The data of a batch.created event
@@ -2010,12 +2270,83 @@ export interface components {
             quantity: number;
             state: string;
         };
+        /** The least-squares line of a system’s cup tests: free-rise density against component temperature */
+        "free-rise-fit.view": {
+            /** Format: uuid */
+            materialSystemId: string;
+            cupTests: number;
+            temperatureBasis: string;
+            /** @description Null below three cups or when all were at one temperature */
+            fit: {
+                slopeKgM3PerC: number;
+                interceptKgM3: number;
+                rSquared: number | null;
+                residualStandardDeviationKgM3: number;
+                count: number;
+            } | null;
+        };
+        /** Liveness: the process answers */
+        "health.view": {
+            /** @constant */
+            status: "ok";
+            /** Format: date-time */
+            startedAt: string;
+        };
+        /** A logger CSV import (the fields every import view has) */
+        "import.base": {
+            /** Format: uuid */
+            id: string;
+            fileName: string | null;
+            sha256: string;
+            sizeBytes: number;
+            /** @enum {unknown} */
+            status: "queued" | "running" | "done" | "failed";
+            /** @description Rows in the file */
+            total: number;
+            processed: number;
+            percent: number;
+            /** @description Readings stored */
+            accepted: number;
+            /** @description Rows whose reading was stored before */
+            duplicates: number;
+            rejectedRows: number;
+            /** @description The first bad rows, with their line numbers */
+            badRows: {
+                line: number;
+                errors: {
+                    field: string;
+                    detail: string;
+                }[];
+            }[];
+            /** @description Why the whole file failed */
+            error: string | null;
+            uploadedBy: string | null;
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            startedAt: string | null;
+            /** Format: date-time */
+            finishedAt: string | null;
+            statusUrl: string;
+        };
+        /** An uploaded import: new (202) or the first import of the same file (200, replayed) */
+        "import.upload": {
+            replayed: boolean;
+        } & components["schemas"]["import.base"];
+        /** A logger CSV import: status, progress and bad rows */
+        "import.view": components["schemas"]["import.base"];
         /** Accept an invitation and set a password */
         "invitation.accept": {
             token: string;
             name: string;
             /** @description At least 10 characters */
             password: string;
+        };
+        /** The account an accepted invitation created: sign in with it */
+        "invitation.accepted": {
+            email: string;
+            /** @enum {unknown} */
+            role: "admin" | "engineer" | "integrator" | "viewer";
         };
         /** Invite a person */
         "invitation.create": {
@@ -2025,6 +2356,29 @@ export interface components {
             role: "admin" | "engineer" | "integrator" | "viewer";
             /** @description Optional; the person can change it when accepting */
             name?: string;
+        };
+        /** An invitation sent by e-mail */
+        "invitation.view": {
+            /** Format: uuid */
+            id: string;
+            email: string;
+            /** @enum {unknown} */
+            role: "admin" | "engineer" | "integrator" | "viewer";
+            invitedBy: {
+                /** Format: uuid */
+                id: string;
+                name: string | null;
+            } | null;
+            /** Format: date-time */
+            expiresAt: string;
+            /** Format: date-time */
+            acceptedAt: string | null;
+            /** Format: date-time */
+            revokedAt: string | null;
+            /** Format: date-time */
+            createdAt: string;
+            /** @enum {unknown} */
+            state: "pending" | "accepted" | "revoked" | "expired";
         };
         /** Record (POST) or change (PUT) a component lot */
         "lot.create": {
@@ -2047,6 +2401,86 @@ export interface components {
             /** Format: date */
             openedOn?: string | null;
             notes?: string | null;
+        };
+        /** A lot of part A, part B or pigment */
+        "lot.view": {
+            /** Format: uuid */
+            id: string;
+            /** @enum {unknown} */
+            part: "A" | "B" | "pigment";
+            /** Format: uuid */
+            materialSystemId: string | null;
+            materialSystemName: string | null;
+            lotNumber: string;
+            /** Format: date */
+            receivedOn: string;
+            /** Format: date */
+            expiresOn: string;
+            /** Format: date */
+            openedOn: string | null;
+            /** @description Expired before today (UTC) */
+            expired: boolean;
+            notes: string | null;
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            updatedAt: string;
+        };
+        /** One revision of a material system (SI) */
+        "material-system-revision.view": {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            materialSystemId: string;
+            revision: number;
+            /** @enum {unknown} */
+            ratioBasis: "weight" | "volume";
+            ratio: {
+                a: number;
+                b: number;
+            };
+            specificGravityA: number;
+            specificGravityB: number;
+            /** @enum {unknown} */
+            isocyanatePart: "A" | "B";
+            freeRiseDensityKgM3: number;
+            freeRiseReferenceTemperatureC: number;
+            freeRiseDensitySlopeKgM3PerC: number | null;
+            ratioTolerancePercent: number;
+            componentTemperatureMinC: number | null;
+            componentTemperatureMaxC: number | null;
+            moldTemperatureMinC: number | null;
+            moldTemperatureMaxC: number | null;
+            ambientTemperatureMinC: number | null;
+            ambientTemperatureMaxC: number | null;
+            maxRelativeHumidityPercent: number | null;
+            massTolerancePercent: number | null;
+            potLifeS: number | null;
+            demoldTimeS: number | null;
+            fullCureTimeS: number | null;
+            maxPigmentPercent: number | null;
+            maxPackFactor: number | null;
+            exothermMassLimitKg: number | null;
+            ncoPercent: number | null;
+            hydroxylNumberMgKohG: number | null;
+            waterPbw: number | null;
+            cautionsText: string | null;
+            /** @description Worked out from the parameters by the computation */
+            derived: {
+                weightRatio: {
+                    a: number;
+                    b: number;
+                };
+                volumeRatio: {
+                    a: number;
+                    b: number;
+                };
+                isocyanateIndex: number | null;
+            };
+            changeNote: string | null;
+            createdBy: string | null;
+            /** Format: date-time */
+            createdAt: string;
         };
         /**
          * Define (POST) or revise (PUT) a material system
@@ -2137,6 +2571,72 @@ export interface components {
             /** @description Why this revision was made (PUT) */
             changeNote?: string | null;
         };
+        /** A material system at its current revision (SI) */
+        "material-system.view": {
+            /** Format: uuid */
+            id: string;
+            name: string;
+            /** @enum {unknown} */
+            kind: "flexible" | "integral-skin" | "other";
+            revision: number;
+            /** Format: uuid */
+            revisionId: string;
+            /** Format: date-time */
+            revisedAt: string;
+            /** @enum {unknown} */
+            ratioBasis: "weight" | "volume";
+            ratio: {
+                a: number;
+                b: number;
+            };
+            specificGravityA: number;
+            specificGravityB: number;
+            /** @enum {unknown} */
+            isocyanatePart: "A" | "B";
+            freeRiseDensityKgM3: number;
+            freeRiseReferenceTemperatureC: number;
+            freeRiseDensitySlopeKgM3PerC: number | null;
+            ratioTolerancePercent: number;
+            componentTemperatureMinC: number | null;
+            componentTemperatureMaxC: number | null;
+            moldTemperatureMinC: number | null;
+            moldTemperatureMaxC: number | null;
+            ambientTemperatureMinC: number | null;
+            ambientTemperatureMaxC: number | null;
+            maxRelativeHumidityPercent: number | null;
+            massTolerancePercent: number | null;
+            potLifeS: number | null;
+            demoldTimeS: number | null;
+            fullCureTimeS: number | null;
+            maxPigmentPercent: number | null;
+            maxPackFactor: number | null;
+            exothermMassLimitKg: number | null;
+            ncoPercent: number | null;
+            hydroxylNumberMgKohG: number | null;
+            waterPbw: number | null;
+            cautionsText: string | null;
+            /** @description Worked out from the parameters by the computation */
+            derived: {
+                weightRatio: {
+                    a: number;
+                    b: number;
+                };
+                volumeRatio: {
+                    a: number;
+                    b: number;
+                };
+                isocyanateIndex: number | null;
+            };
+            /** @description How many documents of each kind are on file */
+            documents: {
+                sds: number;
+                tds: number;
+            };
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            updatedAt: string;
+        };
         /** The signed-in person */
         me: {
             /** Format: uuid */
@@ -2199,6 +2699,105 @@ export interface components {
             defaultPackFactor?: number | null;
             notes?: string | null;
         };
+        /** A mold with its computed volumes (m3) */
+        "mold.view": {
+            /** Format: uuid */
+            id: string;
+            name: string;
+            code: string | null;
+            cavity: components["schemas"]["volume-measurement"];
+            inserts: components["schemas"]["volume-measurement"][];
+            cavities: number;
+            grossCavityVolumeM3: number;
+            insertVolumeM3: number;
+            cavityVolumeM3: number;
+            totalVolumeM3: number;
+            defaultPackFactor: number | null;
+            notes: string | null;
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            updatedAt: string;
+        };
+        /** Overview query */
+        "overview.query": {
+            /**
+             * @description IANA time zone whose calendar days count as days (the shop's, e.g. Europe/Lisbon); UTC when absent
+             * @default UTC
+             */
+            timeZone?: string;
+            /**
+             * @description How many days, today included, the rejection rate covers
+             * @default 14
+             */
+            days?: number;
+            /**
+             * Format: uuid
+             * @description The material system whose ratio error per batch is charted; the most recently weighed one when absent
+             */
+            materialSystemId?: string;
+        };
+        /**
+         * Shop-floor overview
+         * @description Figures counted by the API in PostgreSQL over every reading and batch of the organization (not a sample).
+         */
+        "overview.view": {
+            /** Format: date-time */
+            generatedAt: string;
+            timeZone: string;
+            /**
+             * Format: date
+             * @description Today's date in timeZone
+             */
+            today: string;
+            days: number;
+            /** @description Batches with at least one settled mass reading received today */
+            poursToday: number;
+            /** @description Batches planned for today */
+            plannedToday: number;
+            readingsToday: number;
+            /** @description Rejected readings not yet waived or upheld, whenever received */
+            openRejections: number;
+            /** @description Readings judged (accepted or rejected) over the days */
+            judged: number;
+            rejected: number;
+            /** @description rejected ÷ judged over the days; null when nothing was judged */
+            rejectionRatePercent: number | null;
+            /** @description One entry per day, oldest first, today last */
+            rejectionRateByDay: {
+                /** Format: date */
+                day: string;
+                judged: number;
+                rejected: number;
+                ratePercent: number | null;
+            }[];
+            ratioError: {
+                /**
+                 * Format: uuid
+                 * @description The system charted; null when no batch has both parts weighed
+                 */
+                materialSystemId: string | null;
+                /** @description Systems with mass readings over the days, to choose from */
+                systems: {
+                    /** Format: uuid */
+                    id: string;
+                    name: string;
+                }[];
+                /** @description The latest batches (at most 200) with both parts weighed, oldest first: e = (m_A / m_B) ÷ (t_A / t_B) − 1 */
+                points: {
+                    /** Format: uuid */
+                    batchId: string;
+                    /** Format: date */
+                    plannedFor: string;
+                    errorPercent: number;
+                    tolerancePercent: number;
+                    /** Format: date-time */
+                    lastReadingAt: string;
+                }[];
+                /** @description Points outside their ± tolerance */
+                outside: number;
+            };
+        };
         /** Problem details (RFC 9457) */
         problem: {
             /** @description A URI reference naming the kind of problem; about:blank for a plain HTTP status. */
@@ -2248,6 +2847,31 @@ export interface components {
             testedAt: string;
             notes?: string | null;
         };
+        /** A cup test in ASTM D7487 terms (SI) */
+        "qc-cup-test.view": {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            materialSystemId: string;
+            materialSystemName: string;
+            materialSystemRevision: number | null;
+            /** Format: uuid */
+            lotAId: string | null;
+            /** Format: uuid */
+            lotBId: string | null;
+            componentTemperatureAC: number;
+            componentTemperatureBC: number;
+            creamTimeS: number | null;
+            topOfCupTimeS: number | null;
+            tackFreeTimeS: number | null;
+            freeRiseDensityKgM3: number;
+            /** Format: date-time */
+            testedAt: string;
+            notes: string | null;
+            createdBy: string | null;
+            /** Format: date-time */
+            createdAt: string;
+        };
         /**
          * A measured quantity: a value and its unit
          * @description The API accepts common shop units and stores SI. Mass: g, kg, lb, oz. Volume: mL, L, cm3, m3, in3, ft3, gal (US). Density: kg/m3, g/cm3, lb/ft3 (pcf). Temperature: degC, degF. Length: mm, cm, m, in, ft. Time: s, min, h. GET /v1/units lists them all.
@@ -2260,6 +2884,91 @@ export interface components {
              * @example degC
              */
             unit: string;
+        };
+        /** Readiness: PostgreSQL and Redis are reachable */
+        "readiness.view": {
+            /** @constant */
+            status: "ok";
+            info?: {
+                [key: string]: {
+                    /** @enum {unknown} */
+                    status: "up" | "down";
+                    message?: string;
+                };
+            };
+            error?: {
+                [key: string]: {
+                    /** @enum {unknown} */
+                    status: "up" | "down";
+                    message?: string;
+                };
+            };
+            details: {
+                [key: string]: {
+                    /** @enum {unknown} */
+                    status: "up" | "down";
+                    message?: string;
+                };
+            };
+        };
+        /** A reading with its verdict (the fields every reading view has) */
+        "reading.base": {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            batchId: string;
+            /** Format: uuid */
+            deviceId: string;
+            clientReadingId: string;
+            /** @enum {unknown} */
+            quantity: "mass" | "temperature" | "humidity" | "milestone";
+            /** @enum {unknown} */
+            subject: "part_a" | "part_b" | "pigment" | "mixed" | "mold" | "ambient" | "mix_start" | "pour" | "demold";
+            /** @description The value in SI (unitSi); for a milestone, 0 */
+            valueSi: number;
+            /** @enum {unknown} */
+            unitSi: "kg" | "degC" | "%" | "s";
+            /** @description The value and unit as posted */
+            given: {
+                value: number;
+                unit: string;
+            };
+            stable: boolean;
+            /**
+             * Format: date-time
+             * @description The device clock
+             */
+            deviceTime: string | null;
+            /** Format: date-time */
+            receivedAt: string;
+            clockSkewSeconds: number | null;
+            /** @description The device clock was more than 300 s off the received time */
+            clockSkewFlagged: boolean;
+            /**
+             * @description pending until judged; unused: kept but not judged (an unstable mass)
+             * @enum {unknown}
+             */
+            status: "pending" | "accepted" | "rejected" | "unused";
+            reasons: components["schemas"]["reading.reason"][];
+            /** Format: date-time */
+            judgedAt: string | null;
+            /** @description An engineer’s decision on a rejected reading */
+            review: {
+                /** @enum {unknown} */
+                decision: "waive" | "uphold";
+                note: string | null;
+                /** @description Who decided */
+                by: string | null;
+                /** Format: date-time */
+                at: string | null;
+            } | null;
+            /** @description Where to read the verdict */
+            statusUrl: string;
+        };
+        /** The readings of a bulk post, in the order posted */
+        "reading.bulk-result": {
+            /** @description New readings are queued; a (device, clientReadingId) seen before answers with the first reading */
+            items: (components["schemas"]["reading.queued"] | components["schemas"]["reading.replayed"])[];
         };
         /** Up to 1000 readings at once */
         "reading.bulk": {
@@ -2311,6 +3020,17 @@ export interface components {
              */
             deviceTime?: string;
         };
+        /** A new reading, stored and queued for judging */
+        "reading.queued": {
+            /** Format: uuid */
+            id: string;
+            /** @constant */
+            status: "pending";
+            /** @description GET it for the verdict */
+            statusUrl: string;
+            /** @constant */
+            replayed: false;
+        };
         /**
          * A reason in a reading's verdict
          * @description Why a reading was rejected (or set aside): what was measured against which limit, in which unit
@@ -2329,6 +3049,11 @@ export interface components {
              */
             unit: string | null;
         };
+        /** A reading posted again: the first one, as stored */
+        "reading.replayed": {
+            /** @constant */
+            replayed: true;
+        } & components["schemas"]["reading.base"];
         /**
          * Waive or uphold a rejected reading
          * @description A waiver needs a note. Upholding puts the batch on hold, or scraps it with scrap: true.
@@ -2339,6 +3064,182 @@ export interface components {
             note?: string;
             /** @default false */
             scrap?: boolean;
+        };
+        /** A reading with its verdict and reasons */
+        "reading.view": components["schemas"]["reading.base"];
+        /** Computed batch targets as the API shows them (the fields of every targets view) */
+        "targets.figures": {
+            /** @enum {unknown} */
+            unitSystem: "metric" | "imperial";
+            computationVersion: string;
+            /** @enum {unknown} */
+            subject: "mold" | "free_rise_cup";
+            cavityVolume: components["schemas"]["displayed-quantity"];
+            cavities: number;
+            totalVolume: components["schemas"]["displayed-quantity"];
+            targetDensity: components["schemas"]["displayed-quantity"];
+            packFactor: components["schemas"]["displayed-quantity"];
+            /** @enum {unknown} */
+            densityBasis: "target_density" | "pack_factor" | "mold_default_pack_factor" | "free_rise_cup";
+            expectedFreeRiseDensity: {
+                density: components["schemas"]["displayed-quantity"];
+                temperature: components["schemas"]["displayed-quantity"];
+                atComponentTemperature: boolean;
+                /** @enum {unknown} */
+                method: "cup_test_fit" | "system_slope" | "reference_only";
+                fit: {
+                    slope: number;
+                    intercept: number;
+                    rSquared: number | null;
+                    residualStandardDeviation: number;
+                    count: number;
+                } | null;
+            };
+            expectedPackFactor: components["schemas"]["displayed-quantity"];
+            foamMass: components["schemas"]["displayed-quantity"];
+            mixedMass: components["schemas"]["displayed-quantity"];
+            allowances: {
+                overfillPercent: number;
+                retentionPercent: number;
+                convention: {
+                    /** @enum {unknown} */
+                    overfill: "multiplicative" | "delivered";
+                    /** @enum {unknown} */
+                    retention: "multiplicative" | "delivered";
+                };
+            };
+            /** @enum {unknown} */
+            ratioBasis: "weight" | "volume";
+            weightRatio: {
+                a: number;
+                b: number;
+            };
+            volumeRatio: {
+                a: number;
+                b: number;
+            };
+            ratioTolerancePercent: number;
+            components: {
+                A: {
+                    /** @enum {unknown} */
+                    part: "A" | "B";
+                    /** @enum {unknown} */
+                    side: "isocyanate" | "polyol";
+                    mass: components["schemas"]["displayed-quantity"];
+                    massUnrounded: components["schemas"]["displayed-quantity"];
+                    volume: components["schemas"]["displayed-quantity"] | null;
+                    /** @description Mass range that keeps the ratio in tolerance with the other part at its target */
+                    toleranceBand: {
+                        low: components["schemas"]["displayed-quantity"];
+                        high: components["schemas"]["displayed-quantity"];
+                    };
+                };
+                B: {
+                    /** @enum {unknown} */
+                    part: "A" | "B";
+                    /** @enum {unknown} */
+                    side: "isocyanate" | "polyol";
+                    mass: components["schemas"]["displayed-quantity"];
+                    massUnrounded: components["schemas"]["displayed-quantity"];
+                    volume: components["schemas"]["displayed-quantity"] | null;
+                    /** @description Mass range that keeps the ratio in tolerance with the other part at its target */
+                    toleranceBand: {
+                        low: components["schemas"]["displayed-quantity"];
+                        high: components["schemas"]["displayed-quantity"];
+                    };
+                };
+                pigment: {
+                    mass: components["schemas"]["displayed-quantity"];
+                    massUnrounded: components["schemas"]["displayed-quantity"];
+                    percentOfAB: number;
+                };
+            };
+            totalMass: components["schemas"]["displayed-quantity"];
+            scaleReadability: components["schemas"]["displayed-quantity"] | null;
+            isocyanateIndex: {
+                value: number;
+                atToleranceLimits: {
+                    low: number;
+                    high: number;
+                };
+            } | null;
+            timing: {
+                potLife: components["schemas"]["displayed-quantity"] | null;
+                demoldTime: components["schemas"]["displayed-quantity"] | null;
+                fullCureTime: components["schemas"]["displayed-quantity"] | null;
+            };
+            componentTemperatureWindow: {
+                min: components["schemas"]["displayed-quantity"];
+                max: components["schemas"]["displayed-quantity"];
+            } | null;
+            warnings: components["schemas"]["batch-warning"][];
+            cautions: components["schemas"]["caution"][];
+            /** @description Where each input came from */
+            sources: {
+                system: {
+                    /** Format: uuid */
+                    id: string;
+                    name: string;
+                    revision: number;
+                    /** Format: uuid */
+                    revisionId: string;
+                } | {
+                    /** @constant */
+                    inline: true;
+                };
+                mold: {
+                    /** Format: uuid */
+                    id: string;
+                    name: string;
+                    code: string | null;
+                } | {
+                    /** @constant */
+                    inline: true;
+                    grossCavityVolumeM3: number;
+                    insertVolumeM3: number;
+                } | null;
+                scale: {
+                    /** Format: uuid */
+                    deviceId: string;
+                    name: string;
+                    serial: string;
+                } | {
+                    /** @constant */
+                    inline: true;
+                } | null;
+                lots: {
+                    /** @enum {unknown} */
+                    part: "A" | "B" | "pigment";
+                    /** Format: uuid */
+                    id: string;
+                    lotNumber: string;
+                    /** Format: date */
+                    expiresOn: string;
+                }[];
+                /** @description Cup tests fitted for the expected free-rise density */
+                cupTests: number;
+                /** Format: date */
+                plannedFor: string;
+            };
+            /** @description The computation’s SI input, exactly as computed */
+            inputs: {
+                /** @description The system parameters in SI */
+                system: Record<string, never>;
+                /** @description The mold in SI (m3) */
+                mold?: Record<string, never>;
+                /** @description The cup in SI (m3) */
+                freeRiseCup?: Record<string, never>;
+                /** @description The options in SI */
+                options: Record<string, never>;
+                cupTests: {
+                    temperature: number;
+                    density: number;
+                }[];
+            };
+            documents: {
+                safetyDataSheets: components["schemas"]["document.view"][];
+                sdsOnFile: boolean;
+            };
         };
         /**
          * Compute batch targets without storing anything
@@ -2359,6 +3260,8 @@ export interface components {
             };
             options?: components["schemas"]["batch-options"];
         };
+        /** Computed batch targets: every figure in the caller’s units with SI alongside, warnings and cautions */
+        "targets.view": components["schemas"]["targets.figures"];
         /**
          * Change a person (admin)
          * @description PUT sends the whole record as the console has it; only name, role and disabled are changed, other known fields are ignored.
@@ -2377,6 +3280,24 @@ export interface components {
             lastSignInAt?: string | null;
             createdAt?: string;
         };
+        /** A person of the organization */
+        "user.view": {
+            /** Format: uuid */
+            id: string;
+            email: string;
+            name: string;
+            /** @enum {unknown} */
+            role: "admin" | "engineer" | "integrator" | "viewer";
+            disabled: boolean;
+            /** @enum {unknown} */
+            unitSystem: "metric" | "imperial";
+            /** @enum {unknown} */
+            notifyRejections: "each" | "digest" | "off";
+            /** Format: date-time */
+            lastSignInAt: string | null;
+            /** Format: date-time */
+            createdAt: string;
+        };
         /**
          * How a volume was measured
          * @description box: inside length × width × height; cylinder: inside diameter and height; water_fill: mass of the water that fills it and the water's temperature (0–40 °C); entered: a volume from CAD. The fields each kind needs are required (422 with a pointer when one is missing).
@@ -2392,12 +3313,74 @@ export interface components {
             waterTemperature?: components["schemas"]["quantity"];
             volume?: components["schemas"]["quantity"];
         };
+        /** A webhook delivery (the fields every delivery view has) */
+        "webhook-delivery.base": {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            endpointId: string;
+            /** Format: uuid */
+            eventId: string;
+            eventType: string;
+            /** @enum {unknown} */
+            status: "pending" | "delivering" | "succeeded" | "retrying" | "dead" | "cancelled";
+            attempts: number;
+            /** Format: date-time */
+            nextAttemptAt: string | null;
+            lastStatusCode: number | null;
+            lastError: string | null;
+            lastDurationMs: number | null;
+            /** Format: date-time */
+            deliveredAt: string | null;
+            replays: number;
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            updatedAt: string;
+        };
+        /** A webhook delivery with every attempt */
+        "webhook-delivery.detail": {
+            attemptLog: {
+                attempt: number;
+                /** Format: date-time */
+                startedAt: string;
+                durationMs: number | null;
+                statusCode: number | null;
+                error: string | null;
+                responseSnippet: string | null;
+            }[];
+        } & components["schemas"]["webhook-delivery.base"];
         /** Replay dead-lettered deliveries */
         "webhook-delivery.replay": {
             /** Format: date-time */
             since: string;
             /** Format: uuid */
             endpointId?: string;
+        };
+        /** How many dead-lettered deliveries were queued again */
+        "webhook-delivery.replayed": {
+            replayed: number;
+        };
+        /** A webhook delivery: status, attempts, last answer, next attempt */
+        "webhook-delivery.view": components["schemas"]["webhook-delivery.base"];
+        /** A webhook endpoint (the fields every endpoint view has) */
+        "webhook-endpoint.base": {
+            /** Format: uuid */
+            id: string;
+            url: string;
+            description: string;
+            /** @description Empty: every type */
+            eventTypes: string[];
+            enabled: boolean;
+            disabledReason: string | null;
+            /** @description Two secrets sign during a rotation overlap */
+            secretRotating: boolean;
+            /** Format: date-time */
+            previousSecretUntil: string | null;
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            updatedAt: string;
         };
         /** Add a webhook endpoint */
         "webhook-endpoint.create": {
@@ -2408,6 +3391,11 @@ export interface components {
             eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
             enabled?: boolean;
         };
+        /** A webhook endpoint with its signing secret: the only time it is shown */
+        "webhook-endpoint.created": {
+            /** @description Standard Webhooks secret */
+            secret: string;
+        } & components["schemas"]["webhook-endpoint.base"];
         /** Rotate the signing secret */
         "webhook-endpoint.rotate": {
             /**
@@ -2427,6 +3415,21 @@ export interface components {
             /** @description Empty or omitted: every event type */
             eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
             enabled?: boolean;
+        };
+        /** A webhook endpoint (never its secret) */
+        "webhook-endpoint.view": components["schemas"]["webhook-endpoint.base"];
+        /** What the receiver answered to a webhook.test event */
+        "webhook-test.result": {
+            statusCode: number | null;
+            durationMs: number;
+            retryAfter?: string;
+            error?: string;
+            ssrf?: boolean;
+            responseSnippet?: string;
+            /** Format: uuid */
+            eventId: string;
+            /** @enum {unknown} */
+            verdict: "delivered" | "failed";
         };
         /**
          * Post a work order
@@ -2474,6 +3477,30 @@ export interface components {
             /** @enum {unknown} */
             state?: "open" | "in_progress" | "done" | "cancelled";
         };
+        /** A work order */
+        "work-order.view": {
+            /** Format: uuid */
+            id: string;
+            externalRef: string;
+            partNumber: string | null;
+            /** Format: uuid */
+            moldId: string | null;
+            moldName: string | null;
+            /** Format: uuid */
+            materialSystemId: string | null;
+            materialSystemName: string | null;
+            quantity: number;
+            /** Format: date */
+            dueOn: string | null;
+            notes: string | null;
+            /** @enum {unknown} */
+            state: "open" | "in_progress" | "done" | "cancelled";
+            createdBy: string | null;
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            updatedAt: string;
+        };
     };
     responses: never;
     parameters: never;
@@ -2509,7 +3536,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["audit-entry.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -2532,6 +3561,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -2566,7 +3597,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["user.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -2589,6 +3622,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -2608,6 +3643,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["user.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -2629,6 +3673,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -2652,6 +3698,15 @@ export interface operations {
             };
         };
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["user.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -2673,6 +3728,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -2707,7 +3764,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["invitation.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -2730,6 +3789,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -2754,6 +3815,17 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Created */
+            201: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["invitation.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -2775,6 +3847,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -2794,6 +3868,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["invitation.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -2815,6 +3898,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -2837,6 +3922,17 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["invitation.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -2858,6 +3954,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -2879,15 +3977,20 @@ export interface operations {
             };
         };
         responses: {
+            /** @description OK */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["invitation.accepted"];
+                };
             };
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -2922,7 +4025,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["api-key.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -2945,6 +4050,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -2972,9 +4079,13 @@ export interface operations {
             /** @description The key, with its secret (shown once) */
             201: {
                 headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["api-key.created"];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -2997,6 +4108,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3016,6 +4129,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["api-key.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -3037,6 +4159,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3059,6 +4183,17 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["api-key.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -3080,6 +4215,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3109,9 +4246,13 @@ export interface operations {
             /** @description The successor key, with its secret (shown once) */
             201: {
                 headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["api-key.created"];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -3134,6 +4275,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3155,6 +4298,7 @@ export interface operations {
             };
         };
         responses: {
+            /** @description OK */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -3175,6 +4319,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3196,6 +4342,7 @@ export interface operations {
             };
         };
         responses: {
+            /** @description OK */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -3207,6 +4354,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3228,6 +4377,7 @@ export interface operations {
             };
         };
         responses: {
+            /** @description No content */
             204: {
                 headers: {
                     [name: string]: unknown;
@@ -3237,6 +4387,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3254,6 +4406,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -3283,6 +4436,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3304,6 +4459,7 @@ export interface operations {
             };
         };
         responses: {
+            /** @description OK */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -3333,6 +4489,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3367,7 +4525,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["device.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -3390,6 +4550,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3414,6 +4576,17 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Created */
+            201: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["device.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -3435,6 +4608,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3454,6 +4629,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["device.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -3475,6 +4659,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3498,6 +4684,15 @@ export interface operations {
             };
         };
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["device.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -3519,6 +4714,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3553,7 +4750,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["material-system.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -3576,6 +4775,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3600,6 +4801,17 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Created */
+            201: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["material-system.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -3621,6 +4833,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3640,6 +4854,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["material-system.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -3661,6 +4884,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3684,6 +4909,15 @@ export interface operations {
             };
         };
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["material-system.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -3705,6 +4939,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3741,7 +4977,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["material-system-revision.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -3764,6 +5002,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3786,6 +5026,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["document.view"][];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -3807,6 +5056,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3846,6 +5097,17 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Created */
+            201: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["document.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -3867,6 +5129,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3888,6 +5152,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description The PDF */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/pdf": string;
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -3909,6 +5182,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3943,7 +5218,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["lot.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -3966,6 +5243,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -3990,6 +5269,17 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Created */
+            201: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["lot.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -4011,6 +5301,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4030,6 +5322,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["lot.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -4051,6 +5352,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4074,6 +5377,15 @@ export interface operations {
             };
         };
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["lot.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -4095,6 +5407,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4129,7 +5443,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["mold.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -4152,6 +5468,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4176,6 +5494,17 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Created */
+            201: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["mold.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -4197,6 +5526,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4216,6 +5547,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["mold.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -4237,6 +5577,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4260,6 +5602,15 @@ export interface operations {
             };
         };
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["mold.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -4281,6 +5632,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4315,7 +5668,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["work-order.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -4338,6 +5693,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4365,16 +5722,26 @@ export interface operations {
             /** @description Already posted with this body: the existing order */
             200: {
                 headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["work-order.view"];
+                };
             };
             /** @description Created */
             201: {
                 headers: {
+                    /** @description The address of the created resource */
+                    Location?: string;
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["work-order.view"];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -4406,6 +5773,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4425,6 +5794,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["work-order.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -4446,6 +5824,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4469,6 +5849,15 @@ export interface operations {
             };
         };
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["work-order.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -4490,6 +5879,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4517,6 +5908,17 @@ export interface operations {
             };
         };
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["targets.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -4538,6 +5940,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4572,7 +5976,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["batch.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -4595,6 +6001,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4619,6 +6027,17 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Created */
+            201: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["batch.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -4640,6 +6059,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4659,6 +6080,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["batch.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -4680,6 +6110,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4702,6 +6134,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["batch-targets.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -4723,6 +6164,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4759,7 +6202,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["batch-transition.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -4782,6 +6227,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4804,6 +6251,17 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["batch.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -4825,6 +6283,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4859,7 +6319,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["reading.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -4882,6 +6344,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4903,6 +6367,24 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Posted before (same device and clientReadingId): the first reading */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["reading.replayed"];
+                };
+            };
+            /** @description Stored and queued for judging */
+            202: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["reading.queued"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -4924,6 +6406,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4943,6 +6427,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["reading.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -4964,6 +6457,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4985,6 +6480,24 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Every reading was posted before */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["reading.bulk-result"];
+                };
+            };
+            /** @description Stored; the new readings are queued for judging */
+            202: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["reading.bulk-result"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -5006,6 +6519,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5032,6 +6547,17 @@ export interface operations {
             };
         };
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["reading.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -5053,6 +6579,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5087,7 +6615,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["import.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -5110,6 +6640,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5142,14 +6674,18 @@ export interface operations {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["import.upload"];
+                };
             };
             /** @description Queued */
             202: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["import.upload"];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -5172,6 +6708,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5191,6 +6729,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["import.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -5212,6 +6759,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5246,7 +6795,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["qc-cup-test.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -5269,6 +6820,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5293,6 +6846,17 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Created */
+            201: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["qc-cup-test.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -5314,6 +6878,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5333,6 +6899,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["qc-cup-test.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -5354,6 +6929,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5373,6 +6950,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["free-rise-fit.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -5394,6 +6980,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5415,6 +7003,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -5444,6 +7033,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5478,7 +7069,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["webhook-endpoint.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -5501,6 +7094,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5528,9 +7123,13 @@ export interface operations {
             /** @description The endpoint with its signing secret */
             201: {
                 headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["webhook-endpoint.created"];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -5553,6 +7152,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5572,6 +7173,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["webhook-endpoint.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -5593,6 +7203,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5616,6 +7228,15 @@ export interface operations {
             };
         };
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["webhook-endpoint.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -5637,6 +7258,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5656,6 +7279,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description What was removed */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["webhook-endpoint.view"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -5677,6 +7309,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5703,6 +7337,17 @@ export interface operations {
             };
         };
         responses: {
+            /** @description The endpoint with its new signing secret */
+            201: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["webhook-endpoint.created"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -5724,6 +7369,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5746,12 +7393,16 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description statusCode, durationMs, responseSnippet or error, and verdict */
+            /** @description OK */
             200: {
                 headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["webhook-test.result"];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -5774,6 +7425,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5808,7 +7461,9 @@ export interface operations {
                     "Content-Range"?: string;
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": components["schemas"]["webhook-delivery.view"][];
+                };
             };
             /** @description No valid credentials */
             401: {
@@ -5831,6 +7486,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5850,6 +7507,15 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["webhook-delivery.detail"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -5871,6 +7537,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5893,6 +7561,17 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["webhook-delivery.detail"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -5914,6 +7593,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5938,6 +7619,17 @@ export interface operations {
             };
         };
         responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["webhook-delivery.replayed"];
+                };
+            };
             /** @description No valid credentials */
             401: {
                 headers: {
@@ -5959,6 +7651,61 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Overview_get: {
+        parameters: {
+            query?: {
+                timeZone?: string;
+                days?: number;
+                materialSystemId?: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["overview.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action overview:read (roles: admin, engineer, integrator, viewer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5976,22 +7723,20 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description OK */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        /** @enum {string} */
-                        status?: "ok";
-                        /** Format: date-time */
-                        startedAt?: string;
-                    };
+                    "application/json": components["schemas"]["health.view"];
                 };
             };
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6009,7 +7754,11 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
-            /** @description The Health Check is successful */
+            /**
+             * @description OK
+             *
+             *     The Health Check is successful
+             */
             200: {
                 headers: {
                     [name: string]: unknown;
@@ -6153,6 +7902,8 @@ export interface operations {
             /** @description An error, as RFC 9457 problem details */
             default: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {

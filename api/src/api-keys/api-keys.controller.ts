@@ -1,5 +1,5 @@
 import { Controller, Get, HttpCode, Post, Query, Res } from '@nestjs/common';
-import { ApiCreatedResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { FastifyReply } from 'fastify';
 import type { ApiKeyScope } from '@pourgate/permissions';
 import { Caller, type RequestContext } from '../auth/principal.js';
@@ -8,6 +8,7 @@ import { IdParam } from '../common/decorators/uuid-param.js';
 import { ListRoute, parseListQuery, setContentRange } from '../common/lists/list-query.js';
 import { SchemaBody } from '../common/schemas/schema.pipe.js';
 import { ApiKeysService, apiKeysListSpec } from './api-keys.service.js';
+import { Responds } from '../common/schemas/responds.decorator.js';
 
 @ApiTags('api-keys')
 @Controller('api-keys')
@@ -16,7 +17,7 @@ export class ApiKeysController {
 
   @Get()
   @Requires('api-keys:read')
-  @ListRoute(apiKeysListSpec)
+  @ListRoute(apiKeysListSpec, 'api-key.view')
   @ApiOperation({ summary: 'API keys: prefix, name, scopes, creator, last use, expiry, state (never the secret)' })
   async list(@Caller() c: RequestContext, @Query() query: Record<string, unknown>, @Res({ passthrough: true }) reply: FastifyReply) {
     const q = parseListQuery(query, apiKeysListSpec);
@@ -28,6 +29,7 @@ export class ApiKeysController {
   @Get(':id')
   @Requires('api-keys:read')
   @ApiOperation({ summary: 'One API key (never the secret)' })
+  @Responds(200, 'api-key.view')
   get(@Caller() c: RequestContext, @IdParam() id: string) {
     return this.keys.get(c, id);
   }
@@ -35,7 +37,7 @@ export class ApiKeysController {
   @Post()
   @Requires('api-keys:manage')
   @ApiOperation({ summary: 'Issue an API key', description: 'The response carries `secret` — the only time it is shown. Send it in the X-Api-Key header.' })
-  @ApiCreatedResponse({ description: 'The key, with its secret (shown once)' })
+  @Responds(201, 'api-key.created', { description: 'The key, with its secret (shown once)' })
   create(@Caller() c: RequestContext, @SchemaBody('api-key.create') body: { name: string; kind: 'device' | 'integration'; environment: 'live' | 'test'; scopes: ApiKeyScope[]; deviceId?: string | null; expiresAt?: string | null }) {
     return this.keys.create(c, body);
   }
@@ -44,6 +46,7 @@ export class ApiKeysController {
   @HttpCode(200)
   @Requires('api-keys:manage')
   @ApiOperation({ summary: 'Revoke a key at once' })
+  @Responds(200, 'api-key.view')
   revoke(@Caller() c: RequestContext, @IdParam() id: string) {
     return this.keys.revoke(c, id);
   }
@@ -51,7 +54,7 @@ export class ApiKeysController {
   @Post(':id/rotate')
   @Requires('api-keys:manage')
   @ApiOperation({ summary: 'Rotate a key: a new secret now, the old one valid for the grace period' })
-  @ApiCreatedResponse({ description: 'The successor key, with its secret (shown once)' })
+  @Responds(201, 'api-key.created', { description: 'The successor key, with its secret (shown once)' })
   rotate(@Caller() c: RequestContext, @IdParam() id: string, @SchemaBody('api-key.rotate') body: { graceSeconds: number }) {
     return this.keys.rotate(c, id, body.graceSeconds);
   }

@@ -7,6 +7,7 @@ import { Requires } from '../auth/requires.decorator.js';
 import { listPage } from '../common/lists/knex-list.js';
 import { ListRoute, ListSpec, parseListQuery, setContentRange } from '../common/lists/list-query.js';
 import { KNEX } from '../database/database.module.js';
+import { Responds } from '../common/schemas/responds.decorator.js';
 
 const spec: ListSpec = {
   resource: 'audit-events',
@@ -37,7 +38,7 @@ export class AuditController {
 
   @Get()
   @Requires('audit:read')
-  @ListRoute(spec)
+  @ListRoute(spec, 'audit-entry.view')
   @ApiOperation({ summary: 'The audit log: sign-ins, invitations, role changes, keys, review decisions' })
   async list(@Caller() c: RequestContext, @Query() query: Record<string, unknown>, @Res({ passthrough: true }) reply: FastifyReply) {
     const q = parseListQuery(query, spec);

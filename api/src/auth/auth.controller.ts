@@ -1,14 +1,13 @@
 import { Controller, Get, HttpCode, Patch, Post } from '@nestjs/common';
 import { RouteConfig } from '@nestjs/platform-fastify';
-import { ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiTags, ApiTooManyRequestsResponse } from '@nestjs/swagger';
+import { ApiOperation, ApiTags, ApiTooManyRequestsResponse } from '@nestjs/swagger';
 import { Public } from '../common/decorators/public.decorator.js';
 import { SchemaBody } from '../common/schemas/schema.pipe.js';
 import { Caller, Origin, type RequestContext } from './principal.js';
 import { Requires } from './requires.decorator.js';
 import { TokensService } from './tokens.service.js';
 import { UsersService } from '../users/users.service.js';
-
-const session = { schema: { $ref: '#/components/schemas/auth.session' } };
+import { Responds } from '../common/schemas/responds.decorator.js';
 
 @ApiTags('auth')
 @Controller()
@@ -20,8 +19,8 @@ export class AuthController {
   @HttpCode(200)
   @RouteConfig({ rateLimit: {} })
   @ApiOperation({ summary: 'Sign in with e-mail and password', description: 'Failed attempts are throttled per account and per address (429 with Retry-After). The message never says whether the e-mail exists.' })
-  @ApiOkResponse(session)
   @ApiTooManyRequestsResponse({ description: 'Throttled' })
+  @Responds(200, 'auth.session')
   signIn(@SchemaBody('auth.sign-in') body: { email: string; password: string }, @Origin() origin: { ip: string; userAgent?: string }) {
     return this.tokens.signIn(body.email, body.password, origin);
   }
@@ -31,7 +30,7 @@ export class AuthController {
   @HttpCode(200)
   @RouteConfig({ rateLimit: {} })
   @ApiOperation({ summary: 'Trade a refresh token for a new session', description: 'Refresh tokens rotate: each works once. Presenting a used one ends every session of its family.' })
-  @ApiOkResponse(session)
+  @Responds(200, 'auth.session')
   refresh(@SchemaBody('auth.refresh') body: { refreshToken: string }, @Origin() origin: { ip: string; userAgent?: string }) {
     return this.tokens.refresh(body.refreshToken, origin);
   }
@@ -40,7 +39,7 @@ export class AuthController {
   @Public()
   @HttpCode(204)
   @ApiOperation({ summary: 'End the session of a refresh token (and its rotations)' })
-  @ApiNoContentResponse()
+  @Responds(204, null)
   async signOut(@SchemaBody('auth.refresh') body: { refreshToken: string }) {
     await this.tokens.signOut(body.refreshToken);
   }
@@ -48,7 +47,7 @@ export class AuthController {
   @Get('me')
   @Requires('profile:read')
   @ApiOperation({ summary: 'The signed-in person, their organization and allowed actions' })
-  @ApiOkResponse({ schema: { $ref: '#/components/schemas/me' } })
+  @Responds(200, 'me')
   me(@Caller() c: RequestContext) {
     return this.users.me(c);
   }
@@ -56,7 +55,7 @@ export class AuthController {
   @Patch('me')
   @Requires('profile:read')
   @ApiOperation({ summary: 'Change one’s own name, unit system, notification setting or password' })
-  @ApiOkResponse({ schema: { $ref: '#/components/schemas/me' } })
+  @Responds(200, 'me')
   updateMe(@Caller() c: RequestContext, @SchemaBody('me.update') body: { name?: string; unitSystem?: 'metric' | 'imperial'; notifyRejections?: 'each' | 'digest' | 'off'; currentPassword?: string; newPassword?: string }) {
     return this.users.updateMe(c, body);
   }

@@ -1,4 +1,4 @@
-import { Controller, Get, HttpCode, Inject, Post, Query, Res } from '@nestjs/common';
+import { Controller, Get, Inject, Post, Query, Res } from '@nestjs/common';
 import { ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { FastifyReply } from 'fastify';
 import type { Knex } from 'knex';
@@ -11,6 +11,7 @@ import { KNEX } from '../database/database.module.js';
 import { unitSystemFor } from '../shop/unit-system.js';
 import { UNITS_QUERY } from '../targets/targets.controller.js';
 import { type BatchInput, BatchesService, batchesListSpec, transitionsListSpec } from './batches.service.js';
+import { Responds } from '../common/schemas/responds.decorator.js';
 
 @ApiTags('batches')
 @Controller('batches')
@@ -19,7 +20,7 @@ export class BatchesController {
 
   @Get()
   @Requires('shop:read')
-  @ListRoute(batchesListSpec)
+  @ListRoute(batchesListSpec, 'batch.view')
   @ApiOperation({ summary: 'Batches (one mix each), newest first' })
   async list(@Caller() c: RequestContext, @Query() query: Record<string, unknown>, @Res({ passthrough: true }) reply: FastifyReply) {
     const q = parseListQuery(query, batchesListSpec);
@@ -31,6 +32,7 @@ export class BatchesController {
   @Get(':id')
   @Requires('shop:read')
   @ApiOperation({ summary: 'One batch, with a summary of its targets (kg)' })
+  @Responds(200, 'batch.view')
   get(@Caller() c: RequestContext, @IdParam() id: string) {
     return this.batches.get(c, id);
   }
@@ -39,13 +41,14 @@ export class BatchesController {
   @Requires('targets:read')
   @UNITS_QUERY
   @ApiOperation({ summary: 'The targets stored with a batch', description: "Exactly as computed when the batch was planned (the system revision and mold volume of that moment), in the caller's unit system with SI alongside." })
+  @Responds(200, 'batch-targets.view')
   async targets(@Caller() c: RequestContext, @IdParam() id: string, @Query('units') units?: string) {
     return this.batches.storedTargets(c, id, await unitSystemFor(this.db, c, units));
   }
 
   @Get(':id/transitions')
   @Requires('shop:read')
-  @ListRoute(transitionsListSpec)
+  @ListRoute(transitionsListSpec, 'batch-transition.view')
   @ApiOperation({ summary: 'The state history of a batch' })
   async transitions(@Caller() c: RequestContext, @IdParam() id: string, @Query() query: Record<string, unknown>, @Res({ passthrough: true }) reply: FastifyReply) {
     const q = parseListQuery(query, transitionsListSpec);
@@ -57,15 +60,8 @@ export class BatchesController {
   @Post()
   @Requires('shop:write')
   @ApiOperation({ summary: 'Plan a batch and compute its targets', description: 'From a work order or ad hoc. The targets are computed once, now, and stored with every input and the computation version.' })
+  @Responds(201, 'batch.view')
   create(@Caller() c: RequestContext, @SchemaBody('batch.create') body: BatchInput) {
     return this.batches.create(c, body);
-  }
-
-  @Post(':id/release')
-  @Requires('readings:review')
-  @HttpCode(200)
-  @ApiOperation({ summary: 'Release a batch', description: 'When every rejected reading of the batch was waived (or none was rejected); 409 otherwise.' })
-  release(@Caller() c: RequestContext, @IdParam() id: string) {
-    return this.batches.release(c, id);
   }
 }

@@ -7,6 +7,7 @@ import { IdParam } from '../common/decorators/uuid-param.js';
 import { ListRoute, parseListQuery, setContentRange } from '../common/lists/list-query.js';
 import { SchemaBody } from '../common/schemas/schema.pipe.js';
 import { type DeviceInput, DevicesService, devicesListSpec } from './devices.service.js';
+import { Responds } from '../common/schemas/responds.decorator.js';
 
 @ApiTags('devices')
 @Controller('devices')
@@ -15,7 +16,7 @@ export class DevicesController {
 
   @Get()
   @Requires('devices:read')
-  @ListRoute(devicesListSpec)
+  @ListRoute(devicesListSpec, 'device.view')
   @ApiOperation({ summary: 'Scales, thermometers, hygrometers, loggers and gateways' })
   async list(@Caller() c: RequestContext, @Query() query: Record<string, unknown>, @Res({ passthrough: true }) reply: FastifyReply) {
     const q = parseListQuery(query, devicesListSpec);
@@ -27,6 +28,7 @@ export class DevicesController {
   @Get(':id')
   @Requires('devices:read')
   @ApiOperation({ summary: 'One device' })
+  @Responds(200, 'device.view')
   get(@Caller() c: RequestContext, @IdParam() id: string) {
     return this.devices.get(c, id);
   }
@@ -34,6 +36,7 @@ export class DevicesController {
   @Post()
   @Requires('devices:manage')
   @ApiOperation({ summary: 'Register a device', description: 'Scales need readability (the division d) and capacity, in any mass unit; stored in kg.' })
+  @Responds(201, 'device.view')
   create(@Caller() c: RequestContext, @SchemaBody('device.create') body: DeviceInput) {
     return this.devices.create(c, body);
   }
@@ -41,6 +44,7 @@ export class DevicesController {
   @Put(':id')
   @Requires('devices:manage')
   @ApiOperation({ summary: 'Change a device (station, calibration due date, readability, retired)' })
+  @Responds(200, 'device.view')
   update(@Caller() c: RequestContext, @IdParam() id: string, @SchemaBody('device.update') body: DeviceInput) {
     return this.devices.update(c, id, body);
   }

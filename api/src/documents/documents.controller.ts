@@ -9,6 +9,7 @@ import { isMultipart } from '../common/http/multipart.js';
 import { UploadIdempotencyInterceptor } from '../common/idempotency/idempotency.interceptor.js';
 import { ProblemException } from '../common/problems.js';
 import { DOCUMENT_KINDS, DocumentsService } from './documents.service.js';
+import { Responds } from '../common/schemas/responds.decorator.js';
 
 @ApiTags('material-systems')
 @Controller('material-systems/:id/documents')
@@ -19,6 +20,7 @@ export class DocumentsController {
   @Get()
   @Requires('shop:read')
   @ApiOperation({ summary: "The system's SDS and TDS documents", description: 'Everyone who reads shop data can reach the SDS of every chemical they handle.' })
+  @Responds(200, 'document.view', { array: true })
   list(@Caller() c: RequestContext, @IdParam() id: string, @Query('kind') kind?: string) {
     if (kind !== undefined && !(DOCUMENT_KINDS as readonly string[]).includes(kind)) {
       throw new ProblemException(400, { slug: 'malformed-request', detail: 'The "kind" query parameter must be SDS or TDS.', errors: [{ pointer: '/kind', detail: 'must be one of: SDS, TDS', code: 'enum' }] });
@@ -42,6 +44,7 @@ export class DocumentsController {
     },
   })
   @ApiOperation({ summary: 'Upload an SDS or TDS (PDF, multipart/form-data)' })
+  @Responds(201, 'document.view')
   upload(@Caller() c: RequestContext, @IdParam() id: string, @UploadedFile() file: UploadedMultipartFile | undefined, @Body() fields: Record<string, unknown> | undefined, @Req() req: FastifyRequest) {
     return this.documents.upload(c, id, isMultipart(req) ? file : null, fields ?? {});
   }
@@ -51,6 +54,7 @@ export class DocumentsController {
   @ApiProduces('application/pdf')
   @ApiParam({ name: 'documentId', schema: { type: 'string', format: 'uuid' } })
   @ApiOperation({ summary: 'Download a document (application/pdf)' })
+  @Responds(200, 'document.view', { mediaType: 'application/pdf', description: 'The PDF' })
   async content(@Caller() c: RequestContext, @IdParam() id: string, @IdParam('documentId') documentId: string) {
     const { row, content } = await this.documents.content(c, id, documentId);
     const ascii = row.file_name.replace(/[^\x20-\x7e]/g, '_');

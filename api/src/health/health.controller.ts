@@ -1,12 +1,13 @@
 import { InjectQueue } from '@nestjs/bull';
 import { Controller, Get, Inject } from '@nestjs/common';
-import { ApiOkResponse, ApiOperation, ApiServiceUnavailableResponse, ApiTags } from '@nestjs/swagger';
+import { ApiOperation, ApiServiceUnavailableResponse, ApiTags } from '@nestjs/swagger';
 import { HealthCheck, HealthCheckService, HealthIndicatorService } from '@nestjs/terminus';
 import type { Queue } from 'bull';
 import type { Knex } from 'knex';
 import { Public } from '../common/decorators/public.decorator.js';
 import { KNEX } from '../database/database.module.js';
 import { QUEUES } from '../queues/queues.module.js';
+import { Responds } from '../common/schemas/responds.decorator.js';
 
 function withTimeout<T>(p: Promise<T>, ms: number, what: string): Promise<T> {
   return Promise.race([p, new Promise<T>((_, reject) => setTimeout(() => reject(new Error(`${what} did not answer within ${ms} ms`)), ms).unref())]);
@@ -27,7 +28,7 @@ export class HealthController {
 
   @Get('health')
   @ApiOperation({ summary: 'Liveness: the process answers', description: 'Never touches PostgreSQL or Redis.' })
-  @ApiOkResponse({ schema: { type: 'object', properties: { status: { type: 'string', enum: ['ok'] }, startedAt: { type: 'string', format: 'date-time' } } } })
+  @Responds(200, 'health.view')
   alive() {
     return { status: 'ok', startedAt: this.startedAt.toISOString() };
   }
@@ -36,6 +37,7 @@ export class HealthController {
   @HealthCheck()
   @ApiOperation({ summary: 'Readiness: PostgreSQL and Redis are reachable' })
   @ApiServiceUnavailableResponse({ description: 'A dependency is down (problem+json, with per-check details)' })
+  @Responds(200, 'readiness.view')
   ready() {
     return this.health.check([
       async () => {

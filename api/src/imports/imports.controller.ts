@@ -1,5 +1,5 @@
 import { Controller, Get, Post, Query, Req, Res, UploadedFile, UseInterceptors } from '@nestjs/common';
-import { ApiBody, ApiConsumes, ApiOperation, ApiResponse, ApiTags } from '@nestjs/swagger';
+import { ApiBody, ApiConsumes, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { FileInterceptor, type UploadedMultipartFile } from '@nestjs/platform-fastify/multipart';
 import type { FastifyReply, FastifyRequest } from 'fastify';
 import { Caller, type RequestContext } from '../auth/principal.js';
@@ -10,6 +10,7 @@ import { OwnIdempotency } from '../common/idempotency/idempotency.interceptor.js
 import { ListRoute, parseListQuery, setContentRange } from '../common/lists/list-query.js';
 import { CSV_OPTIONAL, CSV_REQUIRED, MAX_IMPORT_BYTES } from './imports.constants.js';
 import { importsListSpec, ImportsService } from './imports.service.js';
+import { Responds } from '../common/schemas/responds.decorator.js';
 
 @ApiTags('readings')
 @Controller('imports')
@@ -35,8 +36,8 @@ export class ImportsController {
     },
   })
   @ApiOperation({ summary: 'Import a logger CSV', description: '202 with the import and its status URL; a queued job checks and ingests every row (GET /v1/imports/{id} shows processed/total, percent and the bad rows with their line numbers).' })
-  @ApiResponse({ status: 202, description: 'Queued' })
-  @ApiResponse({ status: 200, description: 'This file was uploaded before: the first import' })
+  @Responds(202, 'import.upload', { description: 'Queued' })
+  @Responds(200, 'import.upload', { description: 'This file was uploaded before: the first import' })
   async upload(@Caller() c: RequestContext, @UploadedFile() file: UploadedMultipartFile | undefined, @Req() req: FastifyRequest, @Res({ passthrough: true }) reply: FastifyReply) {
     const { created, view } = await this.imports.upload(c, isMultipart(req) ? file : null);
     reply.status(created ? 202 : 200);
@@ -45,7 +46,7 @@ export class ImportsController {
 
   @Get()
   @Requires('readings:read')
-  @ListRoute(importsListSpec)
+  @ListRoute(importsListSpec, 'import.view')
   @ApiOperation({ summary: 'Imports, newest first' })
   async list(@Caller() c: RequestContext, @Query() query: Record<string, unknown>, @Res({ passthrough: true }) reply: FastifyReply) {
     const q = parseListQuery(query, importsListSpec);
@@ -57,6 +58,7 @@ export class ImportsController {
   @Get(':id')
   @Requires('readings:read')
   @ApiOperation({ summary: 'One import: status, progress and bad rows' })
+  @Responds(200, 'import.view')
   get(@Caller() c: RequestContext, @IdParam() id: string) {
     return this.imports.get(c, id);
   }

@@ -8,6 +8,7 @@ import { ListRoute, parseListQuery, setContentRange } from '../common/lists/list
 import { SchemaBody } from '../common/schemas/schema.pipe.js';
 import { type MoldGeometryInput } from '@pourgate/batching';
 import { MoldsService, moldsListSpec } from './molds.service.js';
+import { Responds } from '../common/schemas/responds.decorator.js';
 
 @ApiTags('molds')
 @Controller('molds')
@@ -16,7 +17,7 @@ export class MoldsController {
 
   @Get()
   @Requires('shop:read')
-  @ListRoute(moldsListSpec)
+  @ListRoute(moldsListSpec, 'mold.view')
   @ApiOperation({ summary: 'Molds with their cavity volumes (m³)' })
   async list(@Caller() c: RequestContext, @Query() query: Record<string, unknown>, @Res({ passthrough: true }) reply: FastifyReply) {
     const q = parseListQuery(query, moldsListSpec);
@@ -28,6 +29,7 @@ export class MoldsController {
   @Get(':id')
   @Requires('shop:read')
   @ApiOperation({ summary: 'One mold' })
+  @Responds(200, 'mold.view')
   get(@Caller() c: RequestContext, @IdParam() id: string) {
     return this.molds.get(c, id);
   }
@@ -35,6 +37,7 @@ export class MoldsController {
   @Post()
   @Requires('shop:write')
   @ApiOperation({ summary: 'Define a mold', description: 'Cavity from box or cylinder dimensions, a water fill (mass ÷ density of water at its temperature) or an entered volume; less inserts; times cavities.' })
+  @Responds(201, 'mold.view')
   create(@Caller() c: RequestContext, @SchemaBody('mold.create') body: MoldGeometryInput) {
     return this.molds.create(c, body);
   }
@@ -42,6 +45,7 @@ export class MoldsController {
   @Put(':id')
   @Requires('shop:write')
   @ApiOperation({ summary: 'Change a mold (the whole record)' })
+  @Responds(200, 'mold.view')
   update(@Caller() c: RequestContext, @IdParam() id: string, @SchemaBody('mold.create') body: MoldGeometryInput) {
     return this.molds.update(c, id, body);
   }

@@ -3,6 +3,7 @@ import { DocumentBuilder, OpenAPIObject, SwaggerModule } from '@nestjs/swagger';
 import { EVENT_TYPES } from '../events/event-types.js';
 import { IDEMPOTENCY_TTL_HOURS } from '../common/idempotency/idempotency.interceptor.js';
 import { schemaRegistry } from '../common/schemas/schema-registry.js';
+import { IDEMPOTENT_REPLAY_HEADER, RETRY_AFTER_HEADER } from '../common/schemas/responds.decorator.js';
 
 export const API_KEY_HEADER = 'X-Api-Key';
 
@@ -69,6 +70,12 @@ function addIdempotencyKeyHeader(doc: OpenAPIObject): void {
         description: `A unique key per request (a UUID). Within ${IDEMPOTENCY_TTL_HOURS} h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key.`,
       },
     ];
+    // a replayed response is the stored one, with this header added
+    for (const [code, resp] of Object.entries(op.responses ?? {})) {
+      if (!/^2\d\d$/.test(code) || !resp || typeof resp !== 'object') continue;
+      const r = resp as { headers?: Record<string, unknown> };
+      r.headers = { ...(r.headers ?? {}), ...IDEMPOTENT_REPLAY_HEADER };
+    }
   }
 }
 
@@ -79,7 +86,7 @@ function addProblemResponses(doc: OpenAPIObject): void {
     for (const op of Object.values(item) as Array<{ responses?: Record<string, unknown> } | undefined>) {
       if (!op || typeof op !== 'object' || !('responses' in op)) continue;
       op.responses ??= {};
-      op.responses['default'] ??= { description: 'An error, as RFC 9457 problem details', content: problem };
+      op.responses['default'] ??= { description: 'An error, as RFC 9457 problem details', headers: RETRY_AFTER_HEADER, content: problem };
       for (const [code, resp] of Object.entries(op.responses)) {
         if (/^[45]\d\d$/.test(code) && resp && typeof resp === 'object' && !('content' in resp)) {
           (resp as Record<string, unknown>).content = problem;

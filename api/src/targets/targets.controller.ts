@@ -7,6 +7,7 @@ import { SchemaBody } from '../common/schemas/schema.pipe.js';
 import { KNEX } from '../database/database.module.js';
 import { unitSystemFor } from '../shop/unit-system.js';
 import { type MoldSpec, type OptionsInput, type SystemSpec, TargetsService } from './targets.service.js';
+import { Responds } from '../common/schemas/responds.decorator.js';
 
 interface PreviewBody {
   system: SystemSpec;
@@ -30,6 +31,7 @@ export class TargetsController {
     summary: 'Compute batch targets without storing anything',
     description: 'A system (by id, or inline) and a mold (by id, inline, or a free-rise cup) with options give every figure with its unit and SI alongside, warnings, and the cautions. Nothing is written.',
   })
+  @Responds(200, 'targets.view')
   async preview(@Caller() c: RequestContext, @SchemaBody('targets.preview') body: PreviewBody, @Query('units') units?: string) {
     const system = await unitSystemFor(this.db, c, units);
     const resolved = await this.targets.resolve(c.principal.organizationId, {

@@ -9,6 +9,7 @@ import { IdParam } from '../common/decorators/uuid-param.js';
 import { ListRoute, parseListQuery, setContentRange } from '../common/lists/list-query.js';
 import { SchemaBody } from '../common/schemas/schema.pipe.js';
 import { invitationsListSpec, UsersService, usersListSpec } from './users.service.js';
+import { Responds } from '../common/schemas/responds.decorator.js';
 
 @ApiTags('people')
 @Controller('users')
@@ -17,7 +18,7 @@ export class UsersController {
 
   @Get()
   @Requires('people:read')
-  @ListRoute(usersListSpec)
+  @ListRoute(usersListSpec, 'user.view')
   @ApiOperation({ summary: 'People of the organization' })
   async list(@Caller() c: RequestContext, @Query() query: Record<string, unknown>, @Res({ passthrough: true }) reply: FastifyReply) {
     const q = parseListQuery(query, usersListSpec);
@@ -29,6 +30,7 @@ export class UsersController {
   @Get(':id')
   @Requires('people:read')
   @ApiOperation({ summary: 'One person' })
+  @Responds(200, 'user.view')
   get(@Caller() c: RequestContext, @IdParam() id: string) {
     return this.users.get(c, id);
   }
@@ -36,6 +38,7 @@ export class UsersController {
   @Put(':id')
   @Requires('people:manage')
   @ApiOperation({ summary: 'Change a person’s name, role or disabled state', description: 'Disabling ends the person’s sessions. The last active admin cannot be demoted or disabled (409).' })
+  @Responds(200, 'user.view')
   update(@Caller() c: RequestContext, @IdParam() id: string, @SchemaBody('user.update') body: { name?: string; role?: Role; disabled?: boolean }) {
     return this.users.update(c, id, body);
   }
@@ -48,7 +51,7 @@ export class InvitationsController {
 
   @Get()
   @Requires('people:read')
-  @ListRoute(invitationsListSpec)
+  @ListRoute(invitationsListSpec, 'invitation.view')
   @ApiOperation({ summary: 'Invitations sent' })
   async list(@Caller() c: RequestContext, @Query() query: Record<string, unknown>, @Res({ passthrough: true }) reply: FastifyReply) {
     const q = parseListQuery(query, invitationsListSpec);
@@ -60,6 +63,7 @@ export class InvitationsController {
   @Get(':id')
   @Requires('people:read')
   @ApiOperation({ summary: 'One invitation' })
+  @Responds(200, 'invitation.view')
   get(@Caller() c: RequestContext, @IdParam() id: string) {
     return this.users.getInvitation(c, id);
   }
@@ -67,6 +71,7 @@ export class InvitationsController {
   @Post()
   @Requires('people:manage')
   @ApiOperation({ summary: 'Invite a person by e-mail', description: 'The e-mail carries a one-time link that expires (INVITATION_TTL_HOURS). Inviting the same address again revokes the earlier link.' })
+  @Responds(201, 'invitation.view')
   invite(@Caller() c: RequestContext, @SchemaBody('invitation.create') body: { email: string; role: Role; name?: string }) {
     return this.users.invite(c, body);
   }
@@ -75,6 +80,7 @@ export class InvitationsController {
   @HttpCode(200)
   @Requires('people:manage')
   @ApiOperation({ summary: 'Revoke a pending invitation' })
+  @Responds(200, 'invitation.view')
   revoke(@Caller() c: RequestContext, @IdParam() id: string) {
     return this.users.revokeInvitation(c, id);
   }
@@ -83,6 +89,7 @@ export class InvitationsController {
   @Public()
   @HttpCode(200)
   @ApiOperation({ summary: 'Accept an invitation: set name and password', description: 'Works once; a used, revoked or expired link answers 410.' })
+  @Responds(200, 'invitation.accepted')
   accept(@SchemaBody('invitation.accept') body: { token: string; name: string; password: string }, @Origin() origin: { ip: string; userAgent?: string }) {
     return this.users.acceptInvitation(body, origin);
   }

@@ -1,5 +1,5 @@
 import { Controller, Delete, Get, HttpCode, Post, Put, Query, Res } from '@nestjs/common';
-import { ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { FastifyReply } from 'fastify';
 import { Caller, type RequestContext } from '../auth/principal.js';
 import { Requires } from '../auth/requires.decorator.js';
@@ -7,6 +7,7 @@ import { IdParam } from '../common/decorators/uuid-param.js';
 import { ListRoute, parseListQuery, setContentRange } from '../common/lists/list-query.js';
 import { SchemaBody } from '../common/schemas/schema.pipe.js';
 import { deliveriesListSpec, type EndpointInput, endpointsListSpec, WebhooksService } from './webhooks.service.js';
+import { Responds } from '../common/schemas/responds.decorator.js';
 
 @ApiTags('webhooks')
 @Controller('webhook-endpoints')
@@ -15,7 +16,7 @@ export class WebhookEndpointsController {
 
   @Get()
   @Requires('webhooks:read')
-  @ListRoute(endpointsListSpec)
+  @ListRoute(endpointsListSpec, 'webhook-endpoint.view')
   @ApiOperation({ summary: 'Webhook endpoints (never their secrets)' })
   async list(@Caller() c: RequestContext, @Query() query: Record<string, unknown>, @Res({ passthrough: true }) reply: FastifyReply) {
     const q = parseListQuery(query, endpointsListSpec);
@@ -27,6 +28,7 @@ export class WebhookEndpointsController {
   @Get(':id')
   @Requires('webhooks:read')
   @ApiOperation({ summary: 'One webhook endpoint' })
+  @Responds(200, 'webhook-endpoint.view')
   get(@Caller() c: RequestContext, @IdParam() id: string) {
     return this.webhooks.getEndpoint(c, id);
   }
@@ -34,7 +36,7 @@ export class WebhookEndpointsController {
   @Post()
   @Requires('webhooks:manage')
   @ApiOperation({ summary: 'Add an endpoint', description: 'The response carries `secret` (Standard Webhooks `whsec_…`), shown this once. URLs must be http(s) and resolve to public addresses.' })
-  @ApiCreatedResponse({ description: 'The endpoint with its signing secret' })
+  @Responds(201, 'webhook-endpoint.created', { description: 'The endpoint with its signing secret' })
   create(@Caller() c: RequestContext, @SchemaBody('webhook-endpoint.create') body: EndpointInput) {
     return this.webhooks.createEndpoint(c, body);
   }
@@ -42,6 +44,7 @@ export class WebhookEndpointsController {
   @Put(':id')
   @Requires('webhooks:manage')
   @ApiOperation({ summary: 'Change an endpoint (URL, description, event types, enabled)' })
+  @Responds(200, 'webhook-endpoint.view')
   update(@Caller() c: RequestContext, @IdParam() id: string, @SchemaBody('webhook-endpoint.update') body: Partial<EndpointInput>) {
     return this.webhooks.updateEndpoint(c, id, body);
   }
@@ -49,6 +52,7 @@ export class WebhookEndpointsController {
   @Delete(':id')
   @Requires('webhooks:manage')
   @ApiOperation({ summary: 'Remove an endpoint (returns what was removed)' })
+  @Responds(200, 'webhook-endpoint.view', { description: 'What was removed' })
   remove(@Caller() c: RequestContext, @IdParam() id: string) {
     return this.webhooks.deleteEndpoint(c, id);
   }
@@ -56,6 +60,7 @@ export class WebhookEndpointsController {
   @Post(':id/rotate-secret')
   @Requires('webhooks:manage')
   @ApiOperation({ summary: 'New signing secret; both sign during the overlap', description: 'During the overlap every delivery carries two signatures in webhook-signature, so receivers can switch at their pace.' })
+  @Responds(201, 'webhook-endpoint.created', { description: 'The endpoint with its new signing secret' })
   rotate(@Caller() c: RequestContext, @IdParam() id: string, @SchemaBody('webhook-endpoint.rotate') body: { overlapSeconds: number }) {
     return this.webhooks.rotateSecret(c, id, body.overlapSeconds);
   }
@@ -64,7 +69,7 @@ export class WebhookEndpointsController {
   @HttpCode(200)
   @Requires('webhooks:manage')
   @ApiOperation({ summary: 'Send a webhook.test event now and see what the receiver answered' })
-  @ApiOkResponse({ description: 'statusCode, durationMs, responseSnippet or error, and verdict' })
+  @Responds(200, 'webhook-test.result')
   test(@Caller() c: RequestContext, @IdParam() id: string) {
     return this.webhooks.test(c, id);
   }
@@ -77,7 +82,7 @@ export class WebhookDeliveriesController {
 
   @Get()
   @Requires('webhooks:read')
-  @ListRoute(deliveriesListSpec)
+  @ListRoute(deliveriesListSpec, 'webhook-delivery.view')
   @ApiOperation({ summary: 'The delivery log: status, attempts, last answer, next attempt' })
   async list(@Caller() c: RequestContext, @Query() query: Record<string, unknown>, @Res({ passthrough: true }) reply: FastifyReply) {
     const q = parseListQuery(query, deliveriesListSpec);
@@ -89,6 +94,7 @@ export class WebhookDeliveriesController {
   @Get(':id')
   @Requires('webhooks:read')
   @ApiOperation({ summary: 'One delivery with every attempt' })
+  @Responds(200, 'webhook-delivery.detail')
   get(@Caller() c: RequestContext, @IdParam() id: string) {
     return this.webhooks.getDelivery(c, id);
   }
@@ -97,6 +103,7 @@ export class WebhookDeliveriesController {
   @HttpCode(200)
   @Requires('webhooks:manage')
   @ApiOperation({ summary: 'Send a finished (delivered, dead or cancelled) delivery again, same webhook-id' })
+  @Responds(200, 'webhook-delivery.detail')
   replay(@Caller() c: RequestContext, @IdParam() id: string) {
     return this.webhooks.replay(c, id);
   }
@@ -105,6 +112,7 @@ export class WebhookDeliveriesController {
   @HttpCode(200)
   @Requires('webhooks:manage')
   @ApiOperation({ summary: 'Replay every dead-lettered delivery since a time (optionally of one endpoint)' })
+  @Responds(200, 'webhook-delivery.replayed')
   replayAll(@Caller() c: RequestContext, @SchemaBody('webhook-delivery.replay') body: { since: string; endpointId?: string }) {
     return this.webhooks.replayFailedSince(c, body.since, body.endpointId);
   }

@@ -7,6 +7,7 @@ import { IdParam } from '../common/decorators/uuid-param.js';
 import { ListRoute, parseListQuery, setContentRange } from '../common/lists/list-query.js';
 import { SchemaBody } from '../common/schemas/schema.pipe.js';
 import { type WorkOrderInput, WorkOrdersService, workOrdersListSpec } from './work-orders.service.js';
+import { LOCATION_HEADER, Responds } from '../common/schemas/responds.decorator.js';
 
 @ApiTags('work-orders')
 @Controller('work-orders')
@@ -15,7 +16,7 @@ export class WorkOrdersController {
 
   @Get()
   @Requires('shop:read')
-  @ListRoute(workOrdersListSpec)
+  @ListRoute(workOrdersListSpec, 'work-order.view')
   @ApiOperation({ summary: 'Work orders' })
   async list(@Caller() c: RequestContext, @Query() query: Record<string, unknown>, @Res({ passthrough: true }) reply: FastifyReply) {
     const q = parseListQuery(query, workOrdersListSpec);
@@ -27,6 +28,7 @@ export class WorkOrdersController {
   @Get(':id')
   @Requires('shop:read')
   @ApiOperation({ summary: 'One work order' })
+  @Responds(200, 'work-order.view')
   get(@Caller() c: RequestContext, @IdParam() id: string) {
     return this.orders.get(c, id);
   }
@@ -34,9 +36,9 @@ export class WorkOrdersController {
   @Post()
   @Requires('work-orders:write')
   @ApiOperation({ summary: 'Post a work order (the ERP, with a key scoped work-orders:write)', description: 'Idempotent on externalRef: the same reference and body again answers 200 with the existing order; a different body for the same reference answers 409.' })
-  @ApiResponse({ status: 201, description: 'Created' })
-  @ApiResponse({ status: 200, description: 'Already posted with this body: the existing order' })
   @ApiResponse({ status: 409, description: 'Already posted with a different body' })
+  @Responds(201, 'work-order.view', { description: 'Created', headers: LOCATION_HEADER })
+  @Responds(200, 'work-order.view', { description: 'Already posted with this body: the existing order' })
   async post(@Caller() c: RequestContext, @SchemaBody('work-order.create') body: WorkOrderInput, @Res({ passthrough: true }) reply: FastifyReply) {
     const { created, order } = await this.orders.post(c, body);
     reply.status(created ? 201 : 200);
@@ -47,6 +49,7 @@ export class WorkOrdersController {
   @Put(':id')
   @Requires('work-orders:write')
   @ApiOperation({ summary: 'Change a work order (state, quantity, due date, ...)' })
+  @Responds(200, 'work-order.view')
   update(@Caller() c: RequestContext, @IdParam() id: string, @SchemaBody('work-order.update') body: WorkOrderInput) {
     return this.orders.update(c, id, body);
   }

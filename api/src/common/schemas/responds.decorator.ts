@@ -51,3 +51,8 @@ export const IDEMPOTENT_REPLAY_HEADER: HeaderDoc = {
 export const LOCATION_HEADER: HeaderDoc = {
   Location: { description: 'The address of the created resource', schema: { type: 'string' } },
 };
+
+/** When to try again: on 503 (a backing service is down), 429 (throttled) and 409 (an Idempotency-Key still in flight). */
+export const RETRY_AFTER_HEADER: HeaderDoc = {
+  'Retry-After': { description: 'Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight)', schema: { type: 'string', pattern: '^[0-9]+$' } },
+};
