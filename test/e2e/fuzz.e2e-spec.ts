@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { randomUUID } from 'node:crypto';
 import { ACTIONS, type Action, type Role } from '@pourgate/permissions';
 import { toProblem } from '../../api/src/common/filters/problem-details.filter.js';
-import { bodyValidator, type CaseContext, caseFor, type FuzzRequest, type FuzzResponse, fuzzable, rowCounts, rowDiff, runFuzz, violations, type WriteRoute, writeRoutes } from '../faults/fuzz-core.js';
+import { bodyValidator, type CaseContext, caseFor, type FuzzRequest, type FuzzResponse, fuzzable, listCaseFor, listRoutes, listViolations, rowCounts, rowDiff, runFuzz, violations, type WriteRoute, writeRoutes } from '../faults/fuzz-core.js';
 import type { FastifyRequest } from 'fastify';
 import { closeTestDb, makeOrg, type OrgFixture, testDb, tokensFor } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/app.js';
@@ -104,6 +104,41 @@ describe('fuzzing every write route', () => {
     expect(summary.cases).toBe(CASES);
     expect(summary.routes).toBe(fuzzable(routes).length);
     expect(Object.keys(before)).toEqual(expect.arrayContaining(['readings', 'batches', 'idempotency_keys', 'refresh_tokens']));
+  }, 120_000);
+});
+
+describe('fuzzing every list query', () => {
+  const LIST_CASES = Number(process.env.FUZZ_LIST_CASES ?? 600);
+
+  it('finds the list routes and their declared filters in the served document', () => {
+    const lists = listRoutes(doc);
+    expect(lists.length).toBeGreaterThan(10);
+    const readings = lists.find((l) => l.path === '/v1/readings')!;
+    expect(readings.filters).toEqual(expect.arrayContaining(['batchId', 'receivedAfter', 'reviewed', 'id']));
+    expect(readings.sortable).toContain('receivedAt');
+  });
+
+  it(`${LIST_CASES} generated sort/range/filter queries: a 200 or a 4xx problem+json, never a 5xx, no row written`, async () => {
+    const lists = listRoutes(doc);
+    const before = await rowCounts(testDb(), { organizationId: org.id, ids: Object.values(org.people).map((p) => p.id) });
+    const failures: string[] = [];
+    const statuses: Record<number, number> = {};
+    await fc.assert(
+      fc.asyncProperty(fc.constantFrom(...lists).chain((r) => listCaseFor(r)), async ({ route, url }) => {
+        const role = (ACTIONS[route.action as Action]?.roles ?? ['admin'])[0] as Role;
+        const res = await send({ method: 'GET', url, headers: { authorization: auth[role] } });
+        statuses[res.status] = (statuses[res.status] ?? 0) + 1;
+        const bad = listViolations(res);
+        if (bad.length) failures.push(`GET ${url} → ${res.status} ${bad.join('; ')} ${res.body.slice(0, 200)}`);
+      }),
+      { numRuns: LIST_CASES, seed: SEED },
+    );
+    if (failures.length) process.stderr.write(`list fuzz seed ${SEED}:\n${failures.slice(0, 10).join('\n')}\n`);
+    expect(failures).toEqual([]);
+    // both outcomes occur: the generator is not only producing refusals
+    expect(statuses[200]).toBeGreaterThan(0);
+    expect(statuses[400]).toBeGreaterThan(0);
+    expect(rowDiff(before, await rowCounts(testDb(), { organizationId: org.id, ids: Object.values(org.people).map((p) => p.id) }))).toEqual({});
   }, 120_000);
 });
 

@@ -23,13 +23,30 @@ const now = Date.now();
 const hoursAgo = (h: number) => new Date(now - h * 3_600_000);
 
 async function newBatch(): Promise<string> {
-  const res = await t.http.post('/v1/batches').set(as('engineer')).send({ materialSystemId: systemId, freeRiseCup: { volume: { value: 1, unit: 'L' } } });
+  const res = await t.http
+    .post('/v1/batches')
+    .set(as('engineer'))
+    .send({ materialSystemId: systemId, freeRiseCup: { volume: { value: 1, unit: 'L' } } });
   expect(res.status).toBe(201);
   return res.body.id;
 }
 
 function row(batchId: string, over: Record<string, unknown>) {
-  return { organization_id: org.id, batch_id: batchId, device_id: scaleId, client_reading_id: randomUUID(), quantity: 'mass', subject: 'part_a', value_si: 0.1, unit_given: 'kg', value_given: 0.1, stable: true, status: 'accepted', received_at: new Date(now), ...over };
+  return {
+    organization_id: org.id,
+    batch_id: batchId,
+    device_id: scaleId,
+    client_reading_id: randomUUID(),
+    quantity: 'mass',
+    subject: 'part_a',
+    value_si: 0.1,
+    unit_given: 'kg',
+    value_given: 0.1,
+    stable: true,
+    status: 'accepted',
+    received_at: new Date(now),
+    ...over,
+  };
 }
 
 beforeAll(async () => {
@@ -38,10 +55,15 @@ beforeAll(async () => {
   other = await makeOrg('overview-other');
   auth = await tokensFor(t.http, org);
   otherAuth = await tokensFor(t.http, other);
-  const sys = await t.http.post('/v1/material-systems').set(as('engineer')).send(flexSystem({ ratio: { a: 100, b: 100 }, specificGravityA: 1.1, specificGravityB: 1.1 }));
+  const sys = await t.http
+    .post('/v1/material-systems')
+    .set(as('engineer'))
+    .send(flexSystem({ ratio: { a: 100, b: 100 }, specificGravityA: 1.1, specificGravityB: 1.1 }));
   expect(sys.status).toBe(201);
   systemId = sys.body.id;
-  [{ id: scaleId }] = await testDb()('devices').insert({ organization_id: org.id, kind: 'scale', serial: `S-${randomUUID()}`, name: 'bench scale', readability_kg: 0.001, capacity_kg: 5, calibration_due: '2099-01-01' }).returning('id');
+  [{ id: scaleId }] = await testDb()('devices')
+    .insert({ organization_id: org.id, kind: 'scale', serial: `S-${randomUUID()}`, name: 'bench scale', readability_kg: 0.001, capacity_kg: 5, calibration_due: '2099-01-01' })
+    .returning('id');
   batchA = await newBatch();
   batchB = await newBatch();
   const targets = await testDb()('batches').where({ id: batchA }).first('targets');

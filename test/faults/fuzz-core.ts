@@ -370,3 +370,74 @@ export function rowDiff(before: Record<string, number>, after: Record<string, nu
   for (const t of new Set([...Object.keys(before), ...Object.keys(after)])) if (before[t] !== after[t]) out[t] = `${before[t] ?? 0} -> ${after[t] ?? 0}`;
   return out;
 }
+
+// ── list queries ────────────────────────────────────────────────────────────────────────────
+
+export interface ListRoute {
+  path: string;
+  action?: string;
+  /** The filters the route declares (from its `filter` parameter's description). */
+  filters: string[];
+  sortable: string[];
+}
+
+/** Every list operation of the document: a GET whose parameters are the simple-rest trio. */
+export function listRoutes(doc: OpenApiDoc): ListRoute[] {
+  const out: ListRoute[] = [];
+  for (const [path, item] of Object.entries(doc.paths)) {
+    const op = item.get as { parameters?: { name: string; in: string; description?: string }[]; 'x-pourgate-action'?: string } | undefined;
+    const filter = op?.parameters?.find((p) => p.in === 'query' && p.name === 'filter');
+    if (!op || !filter || path.includes('{')) continue;
+    const filters = /filters: (.*)$/.exec(filter.description ?? '')?.[1];
+    const sort = op.parameters?.find((p) => p.name === 'sort')?.description ?? '';
+    out.push({
+      path,
+      action: op['x-pourgate-action'],
+      filters: filters && filters !== 'none' ? filters.split(', ') : [],
+      sortable: /fields: (.*)$/.exec(sort)?.[1]?.split(', ') ?? [],
+    });
+  }
+  return out;
+}
+
+/** Values a filter of any type may be sent: well-typed, wrong-typed, absurd, NUL-laden, nested. */
+const filterValue: fc.Arbitrary<Json> = fc.oneof(
+  fc.uuid(),
+  fc.constantFrom('x', '', 'yesterday', '0000-01-01', '2016-12-31T23:59:60Z', '2026-12-02', '2026-12-02T10:00:00Z', 'a\u0000b', "'; drop table readings; --", '%', '_', '\\', 'true', '1e308'),
+  fc.string({ maxLength: 40 }),
+  fc.string({ maxLength: 300 }),
+  fc.constantFrom(1e20, -1, 0, 1.5, Number.MAX_SAFE_INTEGER, -0, 1e308),
+  fc.integer(),
+  fc.double({ noNaN: true, noDefaultInfinity: true }),
+  fc.boolean(),
+  fc.constant(null),
+  fc.array(fc.oneof(fc.uuid(), fc.string({ maxLength: 20 }), fc.integer()), { maxLength: 5 }),
+  fc.array(fc.uuid(), { minLength: 501, maxLength: 520 }),
+  fc.dictionary(fc.string({ maxLength: 5 }), fc.string({ maxLength: 5 }), { maxKeys: 2 }),
+);
+
+/** One list request with a generated sort, range and filter (declared names mostly, some junk). */
+export function listCaseFor(route: ListRoute): fc.Arbitrary<{ route: ListRoute; url: string }> {
+  const name = route.filters.length ? fc.oneof({ arbitrary: fc.constantFrom(...route.filters), weight: 5 }, { arbitrary: fc.constantFrom('__proto__', 'constructor', 'toString', 'a/b', 'x\u0000'), weight: 1 }) : fc.constantFrom('__proto__', 'nope');
+  const filter = fc.oneof(
+    fc.dictionary(name, filterValue, { maxKeys: 3 }).map((f) => JSON.stringify(f)),
+    fc.constantFrom('[]', 'null', '"x"', '{', '{"a":', '1e999'),
+  );
+  const field = route.sortable.length ? fc.oneof(fc.constantFrom(...route.sortable), fc.string({ maxLength: 10 })) : fc.string({ maxLength: 10 });
+  const sort = fc.oneof(fc.tuple(field, fc.constantFrom('ASC', 'DESC', 'asc', 'sideways', '')).map((s) => JSON.stringify(s)), fc.constantFrom('[]', '["id"]', 'x', '[1,2]'));
+  const n = fc.oneof(fc.nat(50), fc.constantFrom(1e20, -1, 1.5, 999_999, 1_000_000, 1_000_001, 2 ** 31, Number.MAX_SAFE_INTEGER));
+  const range = fc.oneof(fc.tuple(n, n).map((r) => JSON.stringify(r)), fc.constantFrom('[0]', '[]', '[1e20,1e20]', '"0-9"', '[0,"9"]'));
+  return fc
+    .record({ filter: fc.option(filter, { freq: 4 }), sort: fc.option(sort, { freq: 2 }), range: fc.option(range, { freq: 2 }) })
+    .map((q) => {
+      const params = new URLSearchParams();
+      for (const [k, v] of Object.entries(q)) if (v !== null) params.set(k, v);
+      return { route, url: `${route.path}?${params.toString()}` };
+    });
+}
+
+/** What is wrong with a list answer: a 5xx, or an error that is not a problem. A 200 is fine. */
+export function listViolations(res: FuzzResponse): string[] {
+  if (res.status === 200) return [];
+  return violations(res);
+}

@@ -15,7 +15,8 @@ export class ProblemsController {
 
   @Get(':slug')
   one(@Param('slug') slug: string) {
-    const p = PROBLEM_TYPES[slug as ProblemSlug];
+    // own properties only: "__proto__" or "constructor" are not problem types
+    const p = Object.hasOwn(PROBLEM_TYPES, slug) ? PROBLEM_TYPES[slug as ProblemSlug] : undefined;
     if (!p) throw new NotFoundException(`No problem type "${slug}".`);
     return { type: `/v1/problems/${slug}`, ...p };
   }

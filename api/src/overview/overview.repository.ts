@@ -31,11 +31,7 @@ export class OverviewRepository {
 
   /** Batches with at least one settled mass reading received since the zone's midnight. */
   async poursSince(organizationId: string, since: Date): Promise<number> {
-    const r = await this.db('readings')
-      .where({ organization_id: organizationId, quantity: 'mass', stable: true })
-      .where('received_at', '>=', since)
-      .countDistinct({ n: 'batch_id' })
-      .first();
+    const r = await this.db('readings').where({ organization_id: organizationId, quantity: 'mass', stable: true }).where('received_at', '>=', since).countDistinct({ n: 'batch_id' }).first();
     return Number(r?.n ?? 0);
   }
 
@@ -106,7 +102,12 @@ export class OverviewRepository {
     return this.db('material_systems as s')
       .where('s.organization_id', organizationId)
       .whereExists(
-        this.db('batches as b').join('readings as r', 'r.batch_id', 'b.id').whereRaw('b.material_system_id = s.id').where('r.received_at', '>=', since).where('r.quantity', 'mass').select(this.db.raw('1')),
+        this.db('batches as b')
+          .join('readings as r', 'r.batch_id', 'b.id')
+          .whereRaw('b.material_system_id = s.id')
+          .where('r.received_at', '>=', since)
+          .where('r.quantity', 'mass')
+          .select(this.db.raw('1')),
       )
       .select('s.id', 's.name')
       .orderBy('s.name');

@@ -90,9 +90,13 @@ export class UsersService {
       }
       patch.password_hash = await argon2.hash(body.newPassword);
     }
+    // nothing to change (an empty body, or the same values): 200 with the profile as it is, no audit entry
+    if (Object.keys(patch).length === 0) return this.tokens.me(u.id);
     await this.db.transaction(async (trx) => {
       await trx('users').where({ id: u.id }).update(patch);
-      await this.audit.record({ organizationId: u.organization_id, ...actorOf(c.principal), action: body.newPassword ? 'user.password_changed' : 'user.profile_changed', targetType: 'user', targetId: u.id, details: { fields: Object.keys(body).filter((k) => !/password/i.test(k)) }, ip: c.ip, userAgent: c.userAgent }, trx);
+      // a new password shuts out whoever held the old one: every other session ends, this one stays
+      const sessionsEnded = body.newPassword ? await this.tokens.endOtherSessions(u.id, c.principal.kind === 'user' ? c.principal.sessionId : undefined, trx) : undefined;
+      await this.audit.record({ organizationId: u.organization_id, ...actorOf(c.principal), action: body.newPassword ? 'user.password_changed' : 'user.profile_changed', targetType: 'user', targetId: u.id, details: { fields: Object.keys(body).filter((k) => !/password/i.test(k)), ...(sessionsEnded !== undefined ? { sessionsEnded } : {}) }, ip: c.ip, userAgent: c.userAgent }, trx);
     });
     return this.tokens.me(u.id);
   }
@@ -144,27 +148,40 @@ export class UsersService {
     return invitationView(r);
   }
 
+  /**
+   * The answer is the same whether or not the address already has an account (here or in another
+   * organization): an admin must not learn who uses Pourgate elsewhere. The person learns what they
+   * need from the mail: a link to set a password, or a note that the address is taken.
+   */
   async invite(c: RequestContext, body: { email: string; role: Role; name?: string }) {
     const orgId = c.principal.organizationId;
-    if (await this.users.findByEmail(body.email)) {
-      throw new ProblemException(409, { detail: 'A person with this e-mail already has an account.', errors: [{ pointer: '/email', detail: 'already has an account' }] });
-    }
+    const existing = await this.users.findByEmail(body.email);
     const token = `inv_${randomBytes(24).toString('base64url')}`;
     const hours = this.config.get('INVITATION_TTL_HOURS', { infer: true });
     const expires = new Date(Date.now() + hours * 3600_000);
     const invitation = await this.db.transaction(async (trx) => {
       await trx('invitations').where({ organization_id: orgId, email: body.email }).whereNull('accepted_at').whereNull('revoked_at').update({ revoked_at: trx.fn.now() });
-      const [row] = await trx('invitations').insert({ organization_id: orgId, email: body.email, role: body.role, token_hash: sha256(token), invited_by: c.principal.id, expires_at: expires }).returning('*');
+      const [row] = await trx('invitations').insert({ organization_id: orgId, email: body.email, role: body.role, name: body.name ?? null, token_hash: sha256(token), invited_by: c.principal.id, expires_at: expires }).returning('*');
       await this.audit.record({ organizationId: orgId, ...actorOf(c.principal), action: 'invitation.sent', targetType: 'invitation', targetId: row.id, details: { email: body.email, role: body.role }, ip: c.ip, userAgent: c.userAgent }, trx);
       return row;
     });
     const org = await this.db('organizations').where({ id: orgId }).first();
-    const link = `${this.config.get('PUBLIC_URL', { infer: true })}/#/accept-invitation?token=${encodeURIComponent(token)}`;
-    await this.mail.send({
-      to: body.email,
-      subject: `You are invited to ${org.name} on Pourgate`,
-      text: `${c.principal.name} invited you to ${org.name} on Pourgate as ${body.role}.\n\nSet your password here (the link works once and expires in ${hours} hours):\n${link}\n\nIf you did not expect this, ignore this message.`,
-    });
+    const base = this.config.get('PUBLIC_URL', { infer: true });
+    if (existing) {
+      // no link: the address cannot take a second account, and the token is never sent
+      await this.mail.send({
+        to: body.email,
+        subject: `You are invited to ${org.name} on Pourgate`,
+        text: `${c.principal.name} invited you to ${org.name} on Pourgate as ${body.role}.\n\nThis e-mail address already has a Pourgate account, and one address holds one account. To join ${org.name}, ask ${c.principal.name} to invite another address of yours; your existing account stays as it is (sign in at ${base}/).\n\nIf you did not expect this, ignore this message.`,
+      });
+    } else {
+      const link = `${base}/#/accept-invitation?token=${encodeURIComponent(token)}`;
+      await this.mail.send({
+        to: body.email,
+        subject: `You are invited to ${org.name} on Pourgate`,
+        text: `${c.principal.name} invited you to ${org.name} on Pourgate as ${body.role}.\n\nSet your password here (the link works once and expires in ${hours} hours):\n${link}\n\nIf you did not expect this, ignore this message.`,
+      });
+    }
     return this.getInvitation(c, invitation.id);
   }
 
@@ -174,10 +191,27 @@ export class UsersService {
     return this.getInvitation(c, id);
   }
 
+  /**
+   * What a link offers (shop, role, the address and the name the admin typed), for the acceptance
+   * page; only a usable token answers, with the same 410 as accepting otherwise.
+   */
+  async lookupInvitation(token: string) {
+    const inv = await this.db('invitations')
+      .join('organizations', 'organizations.id', 'invitations.organization_id')
+      .leftJoin('users', 'users.id', 'invitations.invited_by')
+      .where({ 'invitations.token_hash': sha256(token) })
+      .whereNull('invitations.accepted_at')
+      .whereNull('invitations.revoked_at')
+      .where('invitations.expires_at', '>', this.db.fn.now())
+      .first('invitations.email', 'invitations.role', 'invitations.name', 'invitations.expires_at', 'organizations.name as organization_name', 'users.name as inviter_name');
+    if (!inv) throw new ProblemException(410, { title: 'Invitation not usable', detail: 'This invitation link was already used, was revoked, or has expired. Ask your admin for a new one.' });
+    return { organization: { name: inv.organization_name as string }, role: inv.role as Role, email: inv.email as string, name: (inv.name as string | null) ?? null, invitedBy: (inv.inviter_name as string | null) ?? null, expiresAt: new Date(inv.expires_at).toISOString() };
+  }
+
   /** One use: the token is claimed in the same statement that checks it, so a second accept fails. */
   async acceptInvitation(body: { token: string; name: string; password: string }, origin: { ip: string; userAgent?: string }) {
     const hash = await argon2.hash(body.password);
-    return this.db.transaction(async (trx) => {
+    const user = await this.db.transaction(async (trx) => {
       const [inv] = await trx('invitations')
         .where({ token_hash: sha256(body.token) })
         .whereNull('accepted_at')
@@ -189,7 +223,10 @@ export class UsersService {
       if (await trx('users').where({ email: inv.email }).first()) throw new ProblemException(409, { detail: 'A person with this e-mail already has an account.' });
       const [user] = await trx('users').insert({ organization_id: inv.organization_id, email: inv.email, name: body.name, role: inv.role, password_hash: hash }).returning('*');
       await this.audit.record({ organizationId: inv.organization_id, actorType: 'user', actorId: user.id, actorLabel: user.email, action: 'invitation.accepted', targetType: 'invitation', targetId: inv.id, details: { role: inv.role }, ip: origin.ip, userAgent: origin.userAgent }, trx);
-      return { email: user.email as string, role: user.role as Role };
+      return user;
     });
+    // the person who just set a password is signed in: no second sign-in after accepting
+    const session = await this.tokens.startSession(user);
+    return { email: user.email as string, role: user.role as Role, session };
   }
 }

@@ -1,5 +1,5 @@
 import type { Knex } from 'knex';
-import type { FilterKind, ListQuery, ListSpec } from './list-query.js';
+import { filterKind, type FilterKind, type FilterSpec, type ListQuery, type ListSpec } from './list-query.js';
 
 /**
  * Applies parsed list filters to a Knex query. `columns` maps API field names to SQL columns
@@ -7,7 +7,7 @@ import type { FilterKind, ListQuery, ListSpec } from './list-query.js';
  */
 export function applyFilters(qb: Knex.QueryBuilder, q: ListQuery, spec: ListSpec, columns: Record<string, string> = {}): Knex.QueryBuilder {
   for (const [field, value] of Object.entries(q.filter)) {
-    const kind = (spec.filters as Record<string, FilterKind>)[field];
+    const kind = filterKind((spec.filters as Record<string, FilterKind | FilterSpec>)[field]!);
     const col = columns[field] ?? field;
     switch (kind) {
       case 'eq':

@@ -5,6 +5,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { SCHEMAS_DIR } from '../../config/paths.js';
 import type { FieldError } from '../problems.js';
+import { DATE, isStorableDate, isStorableDateTime } from '../storable-dates.js';
 
 const addFormats = addFormatsPkg as unknown as (ajv: Ajv2020) => Ajv2020;
 const ID_PREFIX = 'urn:pourgate:schema:';
@@ -28,8 +29,8 @@ export class SchemaRegistry {
   constructor(dir = SCHEMAS_DIR) {
     // strict, except that `required` inside if/then may name properties declared by the parent
     const opts = { allErrors: true, useDefaults: true, strict: true, strictRequired: false, keywords: ANNOTATIONS };
-    this.bodyAjv = addFormats(new Ajv2020({ ...opts, coerceTypes: false }));
-    this.queryAjv = addFormats(new Ajv2020({ ...opts, coerceTypes: 'array' }));
+    this.bodyAjv = storableDates(addFormats(new Ajv2020({ ...opts, coerceTypes: false })));
+    this.queryAjv = storableDates(addFormats(new Ajv2020({ ...opts, coerceTypes: 'array' })));
     for (const file of fs.readdirSync(dir).filter((f) => f.endsWith('.schema.json')).sort()) {
       const schema = JSON.parse(fs.readFileSync(path.join(dir, file), 'utf8')) as Schema;
       const name = file.replace(/\.schema\.json$/, '');
@@ -65,7 +66,8 @@ export class SchemaRegistry {
       fn = ajv.getSchema(ID_PREFIX + name)!;
       this.compiled.set(key, fn);
     }
-    return fn(value) ? [] : toFieldErrors(fn.errors ?? []);
+    if (!fn(value)) return toFieldErrors(fn.errors ?? []);
+    return nulCharacters(value);
   }
 
   /** The schemas as OpenAPI 3.1 components: `$ref`s between files rewritten to component refs. */
@@ -77,6 +79,38 @@ export class SchemaRegistry {
     }
     return out;
   }
+}
+
+/**
+ * `date` and `date-time` as PostgreSQL can store them: ajv-formats accepts year 0000 and leap
+ * seconds, which the database refuses (a 500 before this). Years 0001–9999, seconds 00–59.
+ */
+function storableDates(ajv: Ajv2020): Ajv2020 {
+  ajv.addFormat('date', {
+    type: 'string',
+    validate: (v: string) => {
+      const m = DATE.exec(v);
+      return !!m && isStorableDate(Number(m[1]), Number(m[2]), Number(m[3]));
+    },
+  });
+  ajv.addFormat('date-time', { type: 'string', validate: isStorableDateTime });
+  return ajv;
+}
+
+/**
+ * One rule for every schema: no string anywhere in a request may hold U+0000 (PostgreSQL's text
+ * cannot store it). Keys count too. Returns a pointer to each offending value.
+ */
+export function nulCharacters(value: unknown, pointer = ''): FieldError[] {
+  if (typeof value === 'string') return value.includes('\u0000') ? [{ pointer: pointer || '/', detail: 'must not contain a NUL character (U+0000)', code: 'nul' }] : [];
+  if (!value || typeof value !== 'object') return [];
+  const out: FieldError[] = [];
+  for (const [k, v] of Object.entries(value)) {
+    const at = `${pointer}/${k.replace(/~/g, '~0').replace(/\//g, '~1')}`;
+    if (k.includes('\u0000')) out.push({ pointer: at, detail: 'a field name must not contain a NUL character (U+0000)', code: 'nul' });
+    out.push(...nulCharacters(v, at));
+  }
+  return out;
 }
 
 function rewriteRefs(node: unknown): unknown {
