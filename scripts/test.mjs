@@ -38,36 +38,14 @@ const env = {
 
 const results = [];
 
-/** The browser suite: the real API (serving the built console) on the test database, driven by Chromium. */
+/**
+ * The browser suite: @playwright/test on Debian's Chromium against the built console served by the
+ * real API on the test database; its webServer option starts the API and a mail catcher
+ * (test/browser/playwright.config.ts) and stops them before the database servers stop.
+ */
 async function browserSuite() {
-  const { spawn } = await import('node:child_process');
   const port = Number(process.env.TEST_BROWSER_PORT ?? 3291);
-  const smtpPort = 55093;
-  const mailPort = 55094;
-  const catcher = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'fakes/src/smtp-catcher.ts'), '--smtp-port', String(smtpPort), '--http-port', String(mailPort)], { cwd: ROOT, env, stdio: 'ignore' });
-  const api = spawn(process.execPath, ['--import', '@swc-node/register/esm-register', path.join(ROOT, 'api/src/main.ts')], {
-    cwd: ROOT,
-    stdio: ['ignore', 'ignore', 'inherit'],
-    env: { ...env, SWC_NODE_PROJECT: path.join(ROOT, 'api/tsconfig.json'), PORT: String(port), PUBLIC_URL: `http://127.0.0.1:${port}`, SMTP_URL: `smtp://127.0.0.1:${smtpPort}`, LOG_LEVEL: 'warn', QUEUE_PREFIX: 'browser-suite', CORS_ORIGINS: `http://127.0.0.1:${port}`, WEBHOOK_ALLOWED_HOSTS: '127.0.0.1,localhost' },
-  });
-  try {
-    let up = false;
-    for (let i = 0; i < 120 && !up; i++) {
-      await new Promise((r) => setTimeout(r, 500));
-      up = await fetch(`http://127.0.0.1:${port}/v1/health`).then((r) => r.ok).catch(() => false);
-    }
-    if (!up) {
-      results.push({ name: 'browser suite (API did not start)', ok: false, seconds: '-' });
-      return;
-    }
-    step('browser suite: Chromium against the built console and the real API', process.execPath, [path.join(ROOT, 'test/browser/run.mjs')], { BASE_URL: `http://127.0.0.1:${port}`, MAIL_URL: `http://127.0.0.1:${mailPort}` });
-  } finally {
-    // wait for a clean shutdown before the database servers stop under it
-    const exited = new Promise((r) => api.once('exit', r));
-    api.kill('SIGTERM');
-    catcher.kill('SIGTERM');
-    await Promise.race([exited, new Promise((r) => setTimeout(r, 15_000))]);
-  }
+  step('browser suite: Chromium against the built console and the real API', process.execPath, [path.join(ROOT, 'node_modules/@playwright/test/cli.js'), 'test', '-c', 'test/browser'], { TEST_BROWSER_PORT: String(port) });
 }
 function step(name, cmd, args, extraEnv = {}) {
   const t0 = Date.now();
@@ -90,6 +68,9 @@ try {
     if (built) step('console: first-page bundle within 250 kB gzip', 'npm', ['run', 'size', '-w', 'admin']);
   }
   if (seeded) {
+    // the module boundaries (controllers without Knex, no reaching into another module's repository or
+    // into api/ by path, pure packages, no import cycles) and the TypeScript rules: eslint.config.js
+    if (process.argv.length <= 2) step('lint (eslint: module boundaries and TypeScript rules)', process.execPath, [path.join(ROOT, 'node_modules/eslint/bin/eslint.js'), 'api/src', 'packages', 'seeds', 'fakes/src', 'sdk/src', 'admin/src', 'migrations', 'test']);
     step('typecheck (tsc --noEmit)', process.execPath, [path.join(ROOT, 'node_modules/typescript/bin/tsc'), '-p', 'api', '--noEmit']);
     step('typecheck of the SDK (tsc -p sdk)', process.execPath, [path.join(ROOT, 'node_modules/typescript/bin/tsc'), '-p', 'sdk', '--noEmit']);
     step('jest: unit, reference and e2e suites', process.execPath, [
