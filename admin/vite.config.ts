@@ -40,6 +40,8 @@ const config = {
     include: ['src/**/*.test.{ts,tsx}'],
     setupFiles: ['./src/test/setup.ts'],
     restoreMocks: true,
+    // a loaded machine (CI, several suites at once) takes seconds to mount a react-admin tree
+    testTimeout: 20_000,
     // icons import @mui/material/utils; run them through Vite so they share the optimized copy
     server: { deps: { inline: [/@mui\/icons-material/] } },
     deps: {

@@ -29,7 +29,7 @@ import { useNow } from '../common/useNow';
 import type { PourgateDataProvider } from '../dataProvider';
 import { expiryLabel, formatDate, formatDateTime } from '../format/dates';
 import { monoFont } from '../theme';
-import type { ApiKey } from '../types';
+import type { ApiKey } from '../api/views';
 import { KeyDialogsProvider, useKeyDialogs } from './KeyDialogs';
 import { canManageKey, keyStateView, KIND_LABEL, kindsAllowed } from './keyRules';
 

@@ -1,6 +1,6 @@
 import { fireEvent, render, screen, waitFor } from '@testing-library/react';
 import { describe, expect, it, vi } from 'vitest';
-import type { ApiKeyWithSecret } from '../types';
+import type { ApiKeyWithSecret } from '../api/views';
 import { SecretReveal } from './SecretReveal';
 
 const key: ApiKeyWithSecret = {
@@ -18,6 +18,7 @@ const key: ApiKeyWithSecret = {
   lastUsedIp: null,
   expiresAt: null,
   revokedAt: null,
+  rotatedFrom: null,
   graceUntil: null,
   secret: 'pgd_test_9f3a.s3cr3t-value-only-once',
 };

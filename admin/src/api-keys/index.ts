@@ -1,6 +1,6 @@
 import { lazy } from 'react';
 import { menuIcons } from '../layout/icons';
-import type { ApiKey } from '../types';
+import type { ApiKey } from '../api/views';
 
 export default {
   list: lazy(() => import('./ApiKeyList')),

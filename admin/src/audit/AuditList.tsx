@@ -12,7 +12,7 @@ import { PageHeader } from '../common/PageHeader';
 import { RelativeTime } from '../common/RelativeTime';
 import { dayEndIso, dayStartIso, formatDateTime, isoToDay } from '../format/dates';
 import { monoFont } from '../theme';
-import type { ActorType, AuditEvent, User } from '../types';
+import type { ActorType, AuditEntry, User } from '../api/views';
 import { ACTOR_LABEL, detailRows } from './auditFormat';
 
 const ACTOR_ICON: Record<ActorType, typeof PersonOutline> = {
@@ -37,7 +37,7 @@ const filters = [
 ];
 
 function ActorCell() {
-  const e = useRecordContext<AuditEvent>();
+  const e = useRecordContext<AuditEntry>();
   if (!e) return null;
   const Icon = ACTOR_ICON[e.actorType] ?? HelpOutline;
   return (
@@ -54,7 +54,7 @@ function ActorCell() {
 }
 
 function ActionCell() {
-  const e = useRecordContext<AuditEvent>();
+  const e = useRecordContext<AuditEntry>();
   if (!e) return null;
   return (
     <Box component="code" sx={{ fontFamily: monoFont, fontSize: '0.8rem', bgcolor: '#eef3f3', color: '#0b4a53', px: 0.75, py: 0.25, borderRadius: 0.5 }}>
@@ -64,7 +64,7 @@ function ActionCell() {
 }
 
 function TargetCell() {
-  const e = useRecordContext<AuditEvent>();
+  const e = useRecordContext<AuditEntry>();
   if (!e || !e.targetType) return <span>—</span>;
   return (
     <Box>
@@ -79,7 +79,7 @@ function TargetCell() {
 }
 
 function EventDetails() {
-  const e = useRecordContext<AuditEvent>();
+  const e = useRecordContext<AuditEntry>();
   if (!e) return null;
   const rows = [
     { key: 'event id', value: e.id },
@@ -131,7 +131,7 @@ function AuditList() {
           <DataTable.Col
             source="createdAt"
             label="When"
-            render={(e: AuditEvent) => (
+            render={(e: AuditEntry) => (
               <Box>
                 <Typography variant="body2" sx={{ whiteSpace: 'nowrap' }}>
                   {formatDateTime(e.createdAt)}
@@ -145,7 +145,7 @@ function AuditList() {
           <DataTable.Col label="Actor" disableSort field={ActorCell} />
           <DataTable.Col source="action" label="Action" field={ActionCell} />
           <DataTable.Col label="Target" disableSort field={TargetCell} />
-          <DataTable.Col source="ip" label="From" disableSort render={(e: AuditEvent) => <span style={{ fontFamily: monoFont, fontSize: '0.8rem' }}>{e.ip ?? '—'}</span>} />
+          <DataTable.Col source="ip" label="From" disableSort render={(e: AuditEntry) => <span style={{ fontFamily: monoFont, fontSize: '0.8rem' }}>{e.ip ?? '—'}</span>} />
         </DataTable>
       </List>
     </>

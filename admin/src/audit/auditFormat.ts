@@ -1,4 +1,4 @@
-import type { ActorType } from '../types';
+import type { ActorType } from '../api/views';
 
 export const ACTOR_LABEL: Readonly<Record<ActorType, string>> = {
   user: 'Person',

@@ -1,10 +1,10 @@
 import { lazy } from 'react';
 import { menuIcons } from '../layout/icons';
-import type { AuditEvent } from '../types';
+import type { AuditEntry } from '../api/views';
 
 export default {
   list: lazy(() => import('./AuditList')),
   icon: menuIcons['audit-events'],
-  recordRepresentation: (e: AuditEvent) => e.action,
+  recordRepresentation: (e: AuditEntry) => e.action,
   options: { label: 'Audit log' },
 };

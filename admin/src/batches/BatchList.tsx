@@ -11,7 +11,7 @@ import { formatDate } from '../format/dates';
 import { useUnitSystem } from '../review/hooks';
 import { formatSi } from '../format/quantities';
 import { monoFont } from '../theme';
-import { BATCH_STATE, batchTitle, shortRef, type Batch, type BatchState } from './types';
+import { BATCH_STATE, batchTitle, shortRef, type Batch, type BatchState } from './labels';
 
 function SystemFilter(props: { source: string; label: string; alwaysOn?: boolean }) {
   const { data } = useGetList<{ id: string; name: string }>('material-systems', { pagination: { page: 1, perPage: 100 }, sort: { field: 'name', order: 'ASC' } });

@@ -11,13 +11,14 @@ import { formatDate, formatDateTime } from '../format/dates';
 import { releaseBatch } from '../review/commands';
 import { useHolds, useUnitSystem } from '../review/hooks';
 import { describeReason } from '../review/reasons';
-import { readingTitle, readingValue, type Reading } from '../review/types';
+import { readingTitle, readingValue, type Reading } from '../review/labels';
 import { formatNumber } from '../format/quantities';
 import { monoFont, palette } from '../theme';
 import { BatchStateChip } from './BatchList';
 import { CautionList, ComponentTable, ProcessFigures, TargetSummary, WarningList, massDecimals } from './TargetFigures';
 import { ToleranceBars, type BarRow } from './ToleranceBars';
-import { BATCH_STATE, batchTitle, shortRef, type Batch, type TargetsView, type Transition } from './types';
+import type { BatchTransition as Transition, TargetsView } from '../api/views';
+import { BATCH_STATE, batchTitle, shortRef, type Batch, } from './labels';
 import { readableReason } from './timeline';
 import { ratioError, weighedMasses } from './weighed';
 

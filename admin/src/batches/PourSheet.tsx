@@ -11,7 +11,8 @@ import { formatDisplay, formatNumber, formatQuantity } from '../format/quantitie
 import { monoFont } from '../theme';
 import { useBatchTargets } from './BatchShow';
 import { CautionList, massDecimals, ratioText, SdsLine } from './TargetFigures';
-import { batchTitle, shortRef, type Batch } from './types';
+import type { ComponentTarget } from '../api/views';
+import { batchTitle, shortRef, type Batch } from './labels';
 
 /** Print: only the sheet, on white, without the console's frame. */
 const printStyles = (
@@ -79,7 +80,7 @@ function PourSheet() {
   // the judge weighs pigment against its target with the system's mass tolerance (the ratio tolerance unless set)
   const tol = t.ratioTolerancePercent / 100;
   const lot = (part: string) => batch.lots.find((l) => l.part === part)?.lotNumber ?? '';
-  const components = [
+  const components: { key: string; label: string; c: ComponentTarget }[] = [
     { key: 'A', label: 'Part A', c: t.components.A },
     { key: 'B', label: 'Part B', c: t.components.B },
     ...(t.components.pigment.mass.value > 0 ? [{ key: 'pigment', label: 'Pigment', c: t.components.pigment }] : []),

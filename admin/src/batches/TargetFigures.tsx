@@ -3,7 +3,7 @@ import { Alert, Box, Table, TableBody, TableCell, TableHead, TableRow, Typograph
 import type { ReactNode } from 'react';
 import { monoFont } from '../theme';
 import { decimalsForStep, formatDisplay, formatNumber, formatQuantity, type DisplayQuantity } from '../format/quantities';
-import type { Caution, TargetsView, TargetWarning } from './types';
+import type { Caution, ComponentTarget, TargetsView, TargetWarning } from '../api/views';
 
 /** Decimals for masses: one scale division when the scale is known. */
 export function massDecimals(t: Pick<TargetsView, 'scaleReadability'>): number | undefined {
@@ -65,7 +65,7 @@ export function TargetSummary({ t }: { t: TargetsView }) {
 export function ComponentTable({ t, lots }: { t: TargetsView; lots?: { part: string; lotNumber: string }[] }) {
   const md = massDecimals(t);
   const lotOf = (part: string) => lots?.find((l) => l.part === part)?.lotNumber ?? '—';
-  const rows = [
+  const rows: { key: string; label: string; c: ComponentTarget }[] = [
     { key: 'A', label: 'Part A', c: t.components.A },
     { key: 'B', label: 'Part B', c: t.components.B },
     { key: 'pigment', label: 'Pigment', c: t.components.pigment },

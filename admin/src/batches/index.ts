@@ -1,6 +1,6 @@
 import { lazy } from 'react';
 import { menuIcons } from '../layout/icons';
-import { batchTitle, type Batch } from './types';
+import { batchTitle, type Batch } from './labels';
 
 export default {
   list: lazy(() => import('./BatchList')),

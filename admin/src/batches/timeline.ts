@@ -1,5 +1,5 @@
 import { reasonTitle } from '../review/reasons';
-import { shortRef } from './types';
+import { shortRef } from './labels';
 
 /**
  * A transition's reason as the API wrote it, made readable: ids shortened to the reference the

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { Reading } from '../review/types';
+import type { Reading } from '../review/labels';
 import { barDomain, positionOn, ratioError, weighedMasses } from './weighed';
 
 let n = 0;
@@ -7,7 +7,7 @@ function mass(subject: Reading['subject'], kg: number, over: Partial<Reading> = 
   n += 1;
   return {
     id: `r${String(n).padStart(3, '0')}`, batchId: 'b', deviceId: 'd', clientReadingId: `c${n}`, quantity: 'mass', subject, valueSi: kg, unitSi: 'kg',
-    given: { value: kg * 1000, unit: 'g' }, stable: true, deviceTime: null, receivedAt: `2026-12-02T08:00:${String(n).padStart(2, '0')}Z`,
+    given: { value: kg * 1000, unit: 'g' }, stable: true, deviceTime: null, statusUrl: '/v1/readings/x', receivedAt: `2026-12-02T08:00:${String(n).padStart(2, '0')}Z`,
     clockSkewSeconds: null, clockSkewFlagged: false, status: 'accepted', reasons: [], judgedAt: null, review: null, ...over,
   };
 }

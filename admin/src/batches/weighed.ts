@@ -3,7 +3,7 @@
  * and the A:B ratio error those masses make against the target (e = (m_A/m_B) ÷ (t_A/t_B) − 1,
  * the same definition the API judges by).
  */
-import type { Reading } from '../review/types';
+import type { Reading } from '../review/labels';
 
 export type WeighedPart = 'A' | 'B' | 'pigment' | 'mixed';
 

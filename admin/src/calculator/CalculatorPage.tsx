@@ -25,10 +25,9 @@ import { PageHeader } from '../common/PageHeader';
 import { SafetyNote } from '../common/SafetyNote';
 import { problemOf } from '../dataProvider/problem';
 import { CautionList, ComponentTable, ProcessFigures, SdsLine, TargetSummary, WarningList } from '../batches/TargetFigures';
-import type { TargetsView } from '../batches/types';
+import type { Device, TargetsView } from '../api/views';
 import { postCommand } from '../review/commands';
 import { useUnitSystem } from '../review/hooks';
-import type { Device } from '../review/types';
 import { formatNumber } from '../format/quantities';
 import { buildPreview, fieldOfPointer, initialForm, type CalculatorForm } from './previewRequest';
 

@@ -69,7 +69,7 @@ export default function Dashboard() {
         </Box>
       </Box>
 
-      {held.includes('readings:read') && held.includes('shop:read') ? (
+      {held.includes('overview:read') ? (
         <Box sx={{ mb: 2.5 }}>
           <Suspense fallback={<Skeleton variant="rounded" height={420} />}>
             <FloorPanel />

@@ -1,28 +1,21 @@
-import { Box, Card, CardContent, FormControl, InputLabel, MenuItem, Select, Skeleton, Typography } from '@mui/material';
+import { Alert, Box, Button, Card, CardContent, FormControl, InputLabel, MenuItem, Select, Skeleton, Typography } from '@mui/material';
 import { BarChart } from '@mui/x-charts/BarChart';
 import { ChartsReferenceLine } from '@mui/x-charts/ChartsReferenceLine';
 import { LineChart } from '@mui/x-charts/LineChart';
-import { useMemo, useState } from 'react';
+import { useCallback, useEffect, useState } from 'react';
 import { Link } from 'react-router-dom';
-import { useGetList } from 'react-admin';
-import type { Batch } from '../batches/types';
-import { shortRef } from '../batches/types';
-import { useNow } from '../common/useNow';
-import { formatDate } from '../format/dates';
-import type { Reading } from '../review/types';
-import { formatNumber } from '../format/quantities';
+import { useDataProvider } from 'react-admin';
+import type { Overview } from '../api/views';
+import { shortRef } from '../batches/labels';
+import type { PourgateDataProvider } from '../dataProvider';
+import { formatDate, formatDateTime } from '../format/dates';
+import { formatNumber, formatPercent } from '../format/quantities';
 import { palette } from '../theme';
-import { outside, poursToday, ratioErrorsBySystem, rejectionByDay } from './floorStats';
 
-/** How far back the overview reads, and how many rows at most (one API page each). */
+/** How many days the rejection rate covers (the API counts them, in the shop's calendar days). */
 const DAYS = 14;
-const LIMIT = 500;
-
-interface SystemRow {
-  id: string;
-  name: string;
-  ratioTolerancePercent: number | null;
-}
+/** The figures are re-read this often while the overview is open. */
+const REFRESH_MS = 60_000;
 
 function Stat({ label, value, hint, testId, to }: { label: string; value: string; hint?: string; testId: string; to?: string }) {
   const body = (
@@ -55,50 +48,81 @@ function Stat({ label, value, hint, testId, to }: { label: string; value: string
 
 const shortDay = (day: string) => formatDate(`${day}T12:00:00`).replace(/ \d{4}$/, '');
 
-/** Pours today, the rejection rate over two weeks, and a control chart of ratio error per system. */
-export default function FloorPanel() {
-  const now = useNow(60_000);
-  // the window moves by whole hours, so the list query keeps its cache key between clock ticks
-  const hour = Math.floor(now / 3_600_000);
-  const since = useMemo(() => new Date((hour - DAYS * 24) * 3_600_000).toISOString(), [hour]);
-  const { data: readings, isPending: readingsPending, total: readingsTotal } = useGetList<Reading>('readings', {
-    filter: { receivedAfter: since },
-    pagination: { page: 1, perPage: LIMIT },
-    sort: { field: 'receivedAt', order: 'DESC' },
-  });
-  const { data: batches = [], isPending: batchesPending } = useGetList<Batch>('batches', { pagination: { page: 1, perPage: LIMIT }, sort: { field: 'createdAt', order: 'DESC' } });
-  const { data: systems = [] } = useGetList<SystemRow>('material-systems', { pagination: { page: 1, perPage: 100 }, sort: { field: 'name', order: 'ASC' } });
+/** The person's time zone, so "today" is the shop's day and not UTC's. */
+function localTimeZone(): string | undefined {
+  try {
+    return Intl.DateTimeFormat().resolvedOptions().timeZone || undefined;
+  } catch {
+    return undefined;
+  }
+}
 
-  const rows = useMemo(() => readings ?? [], [readings]);
-  const pours = useMemo(() => poursToday(rows, now), [rows, now]);
-  const waiting = useMemo(() => rows.filter((r) => r.status === 'rejected' && !r.review).length, [rows]);
-  const rates = useMemo(() => rejectionByDay(rows, DAYS, now), [rows, now]);
-  const series = useMemo(() => ratioErrorsBySystem(batches, rows), [batches, rows]);
-  const withData = systems.filter((s) => series.has(s.id));
-  const [chosen, setChosen] = useState<string>('');
-  const systemId = chosen && series.has(chosen) ? chosen : (withData[0]?.id ?? '');
-  const system = systems.find((s) => s.id === systemId);
-  const points = series.get(systemId) ?? [];
-  const tol = system?.ratioTolerancePercent ?? 5;
-  const judgedToday = rates[rates.length - 1];
-  const judged = rates.reduce((s, r) => s + r.judged, 0);
-  const rejected = rates.reduce((s, r) => s + r.rejected, 0);
-  const plannedToday = batches.filter((b) => b.plannedFor === new Date(now).toISOString().slice(0, 10)).length;
-  const pending = readingsPending || batchesPending;
-  const yMax = Math.max(tol * 1.8, ...points.map((p) => Math.abs(p.errorPercent) * 1.15));
+/** `GET /v1/overview`, re-read every minute; the previous figures stay on screen while it reloads. */
+export function useOverview(materialSystemId: string) {
+  const dataProvider = useDataProvider<PourgateDataProvider>();
+  const [data, setData] = useState<Overview | undefined>();
+  const [error, setError] = useState<unknown>();
+  const [tick, setTick] = useState(0);
+  const reload = useCallback(() => setTick((t) => t + 1), []);
+  useEffect(() => {
+    let live = true;
+    dataProvider
+      .getOverview({ days: DAYS, timeZone: localTimeZone(), materialSystemId: materialSystemId || undefined })
+      .then(({ data: d }) => {
+        if (!live) return;
+        setData(d);
+        setError(undefined);
+      })
+      .catch((e: unknown) => {
+        if (live) setError(e);
+      });
+    const t = setTimeout(() => setTick((n) => n + 1), REFRESH_MS);
+    return () => {
+      live = false;
+      clearTimeout(t);
+    };
+  }, [dataProvider, materialSystemId, tick]);
+  return { data, error, reload };
+}
+
+const pct = (v: number | null | undefined, decimals = 0) => (v === null || v === undefined ? '—' : formatPercent(v, { decimals }));
+
+/** Pours today, open rejections, the rejection rate per day and a control chart of ratio error per batch: all counted by the API. */
+export default function FloorPanel() {
+  const [chosen, setChosen] = useState('');
+  const { data, error, reload } = useOverview(chosen);
+
+  if (error && !data) {
+    return (
+      <Alert severity="warning" action={<Button onClick={reload}>Try again</Button>} data-testid="floor-panel-error">
+        The shop-floor figures could not be loaded.
+      </Alert>
+    );
+  }
+
+  const rates = data?.rejectionRateByDay ?? [];
+  const today = rates[rates.length - 1];
+  const ratio = data?.ratioError;
+  const points = ratio?.points ?? [];
+  const systemId = ratio?.materialSystemId ?? '';
+  const system = ratio?.systems.find((x) => x.id === systemId);
+  const tolerances = [...new Set(points.map((p) => p.tolerancePercent))];
+  const tol = tolerances.length === 1 ? tolerances[0] : undefined;
+  const yMax = Math.max(1, ...points.map((p) => p.tolerancePercent * 1.8), ...points.map((p) => Math.abs(p.errorPercent) * 1.15));
+  const tolText = (v: number) => formatNumber(v, { decimals: 1, trim: true });
 
   return (
     <Box component="section" aria-label="Shop floor" sx={{ display: 'grid', gap: 2 }} data-testid="floor-panel">
       <Box sx={{ display: 'grid', gap: 1.5, gridTemplateColumns: { xs: '1fr 1fr', md: 'repeat(4, minmax(0, 1fr))' } }}>
-        <Stat label="Pours today" value={pending ? '…' : String(pours)} hint={`batches weighed since midnight · ${plannedToday} planned for today`} testId="stat-pours-today" to="/batches" />
+        <Stat label="Pours today" value={data ? formatNumber(data.poursToday, { decimals: 0 }) : '…'} hint={data ? `batches weighed since midnight · ${data.plannedToday} planned for today` : undefined} testId="stat-pours-today" to="/batches" />
         <Stat
           label="Rejected today"
-          value={pending || !judgedToday ? '…' : judgedToday.rate === null ? '—' : `${formatNumber(judgedToday.rate, { decimals: 0 })} %`}
-          hint={judgedToday ? `${judgedToday.rejected} of ${judgedToday.judged} judged readings` : undefined}
+          value={data ? pct(today?.ratePercent) : '…'}
+          hint={data && today ? `${today.rejected} of ${today.judged} judged readings · ${data.readingsToday} readings today` : undefined}
           testId="stat-rejected-today"
         />
-        <Stat label="Waiting for a decision" value={pending ? '…' : String(waiting)} hint={`rejected in the last ${DAYS} days, not yet waived or upheld`} testId="stat-waiting" to="/readings" />
-        <Stat label={`Last ${DAYS} days`} value={judged ? `${formatNumber((rejected / judged) * 100, { decimals: 1 })} %` : '—'} hint={`${rejected} of ${judged} judged readings rejected`} testId="stat-rate" />
+        <Stat label="Waiting for a decision" value={data ? formatNumber(data.openRejections, { decimals: 0 }) : '…'} hint="rejected readings not yet waived or upheld" testId="stat-waiting" to="/readings" />
+        <Stat label={`Last ${data?.days ?? DAYS} days`} value={data ? pct(data.rejectionRatePercent, 1) : '…'} hint={data ? `${data.rejected} of ${data.judged} judged readings rejected` : undefined} testId="stat-rate" />
       </Box>
 
       <Box sx={{ display: 'grid', gap: 2, gridTemplateColumns: { xs: '1fr', lg: 'minmax(0, 1fr) minmax(0, 1.25fr)' } }}>
@@ -110,16 +134,25 @@ export default function FloorPanel() {
             <Typography variant="caption" color="text.secondary">
               Share of judged readings rejected, per day
             </Typography>
-            {pending ? (
+            {!data ? (
               <Skeleton variant="rounded" height={240} sx={{ mt: 1 }} />
             ) : (
-              <Box data-testid="chart-rejection-rate" role="img" aria-label={`Rejection rate per day over the last ${DAYS} days: ${rates.filter((r) => r.rate !== null).map((r) => `${shortDay(r.day)} ${formatNumber(r.rate!, { decimals: 0 })} %`).join(', ') || 'no readings judged'}`}>
+              <Box
+                data-testid="chart-rejection-rate"
+                role="img"
+                aria-label={`Rejection rate per day over the last ${data.days} days: ${
+                  rates
+                    .filter((r) => r.ratePercent !== null)
+                    .map((r) => `${shortDay(r.day)} ${pct(r.ratePercent)}`)
+                    .join(', ') || 'no readings judged'
+                }`}
+              >
                 <BarChart
                   height={250}
                   margin={{ left: 0, right: 8, top: 16, bottom: 0 }}
                   xAxis={[{ data: rates.map((r) => shortDay(r.day)), scaleType: 'band', tickLabelStyle: { fontSize: 10 } }]}
                   yAxis={[{ min: 0, max: 100, valueFormatter: (v: number) => `${v} %`, width: 44 }]}
-                  series={[{ data: rates.map((r) => (r.rate === null ? null : Math.round(r.rate * 10) / 10)), label: 'rejected', color: palette.copper, valueFormatter: (v) => (v === null ? 'nothing judged' : `${v} %`) }]}
+                  series={[{ data: rates.map((r) => r.ratePercent), label: 'rejected', color: palette.copper, valueFormatter: (v) => (v === null ? 'nothing judged' : pct(v, 1)) }]}
                   hideLegend
                   grid={{ horizontal: true }}
                 />
@@ -136,63 +169,72 @@ export default function FloorPanel() {
                   Ratio error per batch
                 </Typography>
                 <Typography variant="caption" color="text.secondary">
-                  Individual values of the A:B ratio error, with the ±{formatNumber(tol, { decimals: 1, trim: true })} % tolerance
+                  Individual values of the A:B ratio error{tol !== undefined ? `, with the ±${tolText(tol)} % tolerance` : ', with each batch’s tolerance'}
                 </Typography>
               </Box>
               <FormControl size="small" sx={{ minWidth: 200 }}>
                 <InputLabel id="control-system">Material system</InputLabel>
-                <Select labelId="control-system" label="Material system" value={systemId} onChange={(e) => setChosen(e.target.value)} data-testid="control-system">
-                  {withData.length === 0 ? <MenuItem value="">No weighed batches yet</MenuItem> : null}
-                  {withData.map((s) => (
-                    <MenuItem key={s.id} value={s.id}>
-                      {s.name}
+                <Select labelId="control-system" label="Material system" value={ratio?.systems.some((x) => x.id === systemId) ? systemId : ''} onChange={(e) => setChosen(e.target.value)} data-testid="control-system">
+                  {!ratio || ratio.systems.length === 0 ? <MenuItem value="">No weighed batches yet</MenuItem> : null}
+                  {ratio?.systems.map((x) => (
+                    <MenuItem key={x.id} value={x.id}>
+                      {x.name}
                     </MenuItem>
                   ))}
                 </Select>
               </FormControl>
             </Box>
-            {pending ? (
+            {!data ? (
               <Skeleton variant="rounded" height={240} sx={{ mt: 1 }} />
             ) : points.length === 0 ? (
               <Box sx={{ height: 250, display: 'grid', placeItems: 'center', textAlign: 'center', color: 'text.secondary' }}>
-                <Typography variant="body2">No batch has both parts weighed in the last {DAYS} days.</Typography>
+                <Typography variant="body2">No batch has both parts weighed in the last {data.days} days.</Typography>
               </Box>
             ) : (
-              <Box data-testid="chart-control" role="img" aria-label={`Ratio error of ${points.length} batches of ${system?.name ?? 'this system'}; ${outside(points, tol)} outside ±${tol} %`}>
+              <Box data-testid="chart-control" role="img" aria-label={`Ratio error of ${points.length} batches of ${system?.name ?? 'this system'}; ${ratio?.outside ?? 0} outside their tolerance`}>
                 <LineChart
                   height={250}
                   margin={{ left: 0, right: 56, top: 16, bottom: 0 }}
-                  xAxis={[{ data: points.map((_, i) => i + 1), scaleType: 'point', valueFormatter: (i: number, ctx: { location: string }) => (ctx.location === 'tick' ? String(i) : `batch ${shortRef(points[i - 1]?.batchId)} · ${formatDate(points[i - 1]?.at)}`), tickLabelStyle: { fontSize: 10 }, label: 'batch, oldest first' }]}
-                  yAxis={[
+                  xAxis={[
                     {
-                      min: -yMax,
-                      max: yMax,
-                      valueFormatter: (v: number) => `${formatNumber(v, { decimals: 1, trim: true })} %`,
-                      width: 52,
-                      // points outside the band turn red, so they stand out without reading the axis
-                      colorMap: { type: 'piecewise', thresholds: [-tol - 1e-9, tol + 1e-9], colors: ['#b3261e', palette.petrol, '#b3261e'] },
+                      data: points.map((_, i) => i + 1),
+                      scaleType: 'point',
+                      valueFormatter: (i: number, ctx: { location: string }) => (ctx.location === 'tick' ? String(i) : `batch ${shortRef(points[i - 1]?.batchId)} · ${formatDateTime(points[i - 1]?.lastReadingAt)}`),
+                      tickLabelStyle: { fontSize: 10 },
+                      label: 'batch, oldest first',
                     },
                   ]}
-                  series={[{ data: points.map((p) => Math.round(p.errorPercent * 100) / 100), label: 'ratio error', color: palette.petrol, showMark: true, curve: 'linear', valueFormatter: (v) => (v === null ? '' : `${formatNumber(v, { decimals: 2, signed: true })} %`) }]}
+                  yAxis={[{ min: -yMax, max: yMax, valueFormatter: (v: number) => `${tolText(v)} %`, width: 52 }]}
+                  series={[
+                    { data: points.map((p) => p.errorPercent), label: 'ratio error', color: palette.petrol, showMark: true, curve: 'linear', valueFormatter: (v) => (v === null ? '' : formatPercent(v, { decimals: 2, signed: true })) },
+                    // tolerances differ between batches: each batch's own band, drawn as steps
+                    ...(tol === undefined
+                      ? [
+                          { data: points.map((p) => p.tolerancePercent), label: 'upper tolerance', color: '#b3261e', showMark: false, curve: 'stepAfter' as const },
+                          { data: points.map((p) => -p.tolerancePercent), label: 'lower tolerance', color: '#b3261e', showMark: false, curve: 'stepAfter' as const },
+                        ]
+                      : []),
+                  ]}
                   hideLegend
                   grid={{ horizontal: true }}
                 >
-                  <ChartsReferenceLine y={tol} label={`+${tol} %`} labelAlign="end" lineStyle={{ stroke: '#b3261e', strokeDasharray: '6 4' }} labelStyle={{ fontSize: 11, fill: '#8c1d17' }} />
-                  <ChartsReferenceLine y={-tol} label={`−${tol} %`} labelAlign="end" lineStyle={{ stroke: '#b3261e', strokeDasharray: '6 4' }} labelStyle={{ fontSize: 11, fill: '#8c1d17' }} />
+                  {tol !== undefined ? <ChartsReferenceLine y={tol} label={`+${tolText(tol)} %`} labelAlign="end" lineStyle={{ stroke: '#b3261e', strokeDasharray: '6 4' }} labelStyle={{ fontSize: 11, fill: '#8c1d17' }} /> : null}
+                  {tol !== undefined ? <ChartsReferenceLine y={-tol} label={`−${tolText(tol)} %`} labelAlign="end" lineStyle={{ stroke: '#b3261e', strokeDasharray: '6 4' }} labelStyle={{ fontSize: 11, fill: '#8c1d17' }} /> : null}
                   <ChartsReferenceLine y={0} lineStyle={{ stroke: palette.textSoft, strokeWidth: 1 }} />
                 </LineChart>
-                <Typography variant="caption" color="text.secondary">
-                  {points.length} batches · {outside(points, tol)} outside the band
+                <Typography variant="caption" color="text.secondary" data-testid="chart-control-caption">
+                  {points.length} batches · {ratio?.outside ?? 0} outside the band
                 </Typography>
               </Box>
             )}
           </CardContent>
         </Card>
       </Box>
-      <Typography variant="caption" color="text.secondary">
-        Computed in the console from the latest {LIMIT} readings of the last {DAYS} days
-        {readingsTotal !== undefined && readingsTotal > LIMIT ? ` (of ${readingsTotal})` : ''} and the latest {LIMIT} batches.
-      </Typography>
+      {data ? (
+        <Typography variant="caption" color="text.secondary">
+          Counted by Pourgate over every reading; days in {data.timeZone}; as of {formatDateTime(data.generatedAt)}.
+        </Typography>
+      ) : null}
     </Box>
   );
 }

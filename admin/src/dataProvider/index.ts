@@ -1,9 +1,22 @@
 import simpleRestProvider from 'ra-data-simple-rest';
 import type { DataProvider } from 'react-admin';
-import type { ApiKey, ApiKeyWithSecret, Invitation } from '../types';
 import type { HttpClient } from './httpClient';
 import { writeBody } from './writeBodies';
-import type { DeliveryDetail, EndpointTestResult, MaterialSystemDocument, MaterialSystemRevision, Profile, ProfileUpdate, WebhookDelivery, WebhookEndpointWithSecret } from './shopTypes';
+import type {
+  ApiKey,
+  ApiKeyWithSecret,
+  DeliveryDetail,
+  EndpointTestResult,
+  Invitation,
+  MaterialSystemDocument,
+  MaterialSystemRevision,
+  Overview,
+  OverviewQuery,
+  Profile,
+  ProfileUpdate,
+  WebhookDelivery,
+  WebhookEndpointWithSecret,
+} from '../api/views';
 
 export interface AcceptInvitationInput {
   token: string;
@@ -22,6 +35,8 @@ export interface PourgateDataProvider extends DataProvider {
   testWebhookEndpoint(id: string): Promise<{ data: EndpointTestResult }>;
   rotateWebhookSecret(id: string, overlapSeconds: number): Promise<{ data: WebhookEndpointWithSecret }>;
   replayWebhookDelivery(id: string): Promise<{ data: DeliveryDetail }>;
+  /** The shop floor's figures, counted by the API (`GET /v1/overview`). */
+  getOverview(query: OverviewQuery): Promise<{ data: Overview }>;
   /** The signed-in person as `GET /v1/me` has them now (the session's copy may be older). */
   getProfile(): Promise<{ data: Profile }>;
   updateProfile(patch: ProfileUpdate): Promise<{ data: Profile }>;
@@ -83,6 +98,12 @@ export function createDataProvider(http: HttpClient, apiBase = '/v1'): PourgateD
     async downloadDocument(href) {
       const { blob } = await http.fetchJson(href, { asBlob: true, headers: { Accept: 'application/pdf' } });
       return blob ?? new Blob([]);
+    },
+    async getOverview(query) {
+      const qs = new URLSearchParams();
+      for (const [k, v] of Object.entries(query)) if (v !== undefined && v !== null && v !== '') qs.set(k, String(v));
+      const { json } = await get(`/overview${qs.size ? `?${qs}` : ''}`);
+      return { data: json as Overview };
     },
     async getProfile() {
       const { json } = await get('/me');

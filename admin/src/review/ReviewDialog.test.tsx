@@ -2,11 +2,11 @@ import { fireEvent, render, screen, waitFor } from '@testing-library/react';
 import { AdminContext, type DataProvider } from 'react-admin';
 import { describe, expect, it, vi } from 'vitest';
 import { ReviewDialog } from './ReviewDialog';
-import type { Reading } from './types';
+import type { Reading } from './labels';
 
 const reading: Reading = {
   id: 'r-1', batchId: 'b-1', deviceId: 'd-1', clientReadingId: 'c-1', quantity: 'mass', subject: 'part_b', valueSi: 0.2904, unitSi: 'kg',
-  given: { value: 290.4, unit: 'g' }, stable: true, deviceTime: null, receivedAt: '2026-12-02T08:00:00Z', clockSkewSeconds: null, clockSkewFlagged: false,
+  given: { value: 290.4, unit: 'g' }, stable: true, deviceTime: null, statusUrl: '/v1/readings/x', receivedAt: '2026-12-02T08:00:00Z', clockSkewSeconds: null, clockSkewFlagged: false,
   status: 'rejected', judgedAt: '2026-12-02T08:00:01Z', review: null,
   reasons: [{ code: 'RATIO_ISOCYANATE_HEAVY', message: 'The isocyanate side (part B) is heavy.', measured: -7.8787878788, limit: -5, unit: '%' }],
 };

@@ -5,7 +5,7 @@ import type { UnitSystem } from '../auth/me';
 import { problemOf } from '../dataProvider/problem';
 import { reviewReading } from './commands';
 import { describeReason } from './reasons';
-import { readingTitle, readingValue, type Reading } from './types';
+import { readingTitle, readingValue, type Reading } from './labels';
 
 export type Decision = 'waive' | 'uphold';
 

@@ -24,13 +24,14 @@ import { PageHeader } from '../common/PageHeader';
 import { RelativeTime } from '../common/RelativeTime';
 import { StatusChip } from '../common/StatusChip';
 import { dayEndIso, dayStartIso, formatDateTime, isoToDay } from '../format/dates';
-import { BATCH_STATE, batchTitle, shortRef, type Batch } from '../batches/types';
+import { BATCH_STATE, batchTitle, shortRef, type Batch } from '../batches/labels';
 import { monoFont } from '../theme';
 import { releaseBatch } from './commands';
 import { useHolds, useUnitSystem } from './hooks';
 import { describeReason, REASON_FILTER_CODES, reasonTitle } from './reasons';
 import { ReviewDialog, type Decision } from './ReviewDialog';
-import { READING_STATUS, readingTitle, readingValue, type Device, type Reading } from './types';
+import { READING_STATUS, readingTitle, readingValue, type Reading } from './labels';
+import type { Device } from '../api/views';
 import { formatSi } from '../format/quantities';
 
 /** The keys of the queue; the same list is printed on the page. */

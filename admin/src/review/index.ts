@@ -1,7 +1,7 @@
 import { lazy } from 'react';
 import { menuIcons } from '../layout/icons';
 import { reasonTitle } from './reasons';
-import type { Reading } from './types';
+import type { Reading } from './labels';
 
 export default {
   list: lazy(() => import('./ReviewQueue')),

@@ -1,6 +1,6 @@
 import { lazy } from 'react';
 import { menuIcons } from '../layout/icons';
-import type { WebhookDelivery, WebhookEndpoint } from '../dataProvider/shopTypes';
+import type { WebhookDelivery, WebhookEndpoint } from '../api/views';
 
 export const webhookEndpoints = {
   list: lazy(() => import('./EndpointList')),

@@ -1,50 +1,6 @@
-import type { Reason } from './reasons';
+import type { Reading, ReadingQuantity, ReadingStatus, ReadingSubject } from '../api/views';
 
-/** A reading as `GET /v1/readings` sends it (api/src/readings/readings.service.ts, readingView). */
-export type ReadingStatus = 'pending' | 'accepted' | 'rejected' | 'unused';
-export type ReadingQuantity = 'mass' | 'temperature' | 'humidity' | 'milestone';
-export type ReadingSubject = 'part_a' | 'part_b' | 'pigment' | 'mixed' | 'mold' | 'ambient' | 'mix_start' | 'pour' | 'demold';
-
-export interface ReadingReview {
-  decision: 'waive' | 'uphold';
-  note: string | null;
-  by: string | null;
-  at: string | null;
-}
-
-export interface Reading {
-  id: string;
-  batchId: string;
-  deviceId: string;
-  clientReadingId: string;
-  quantity: ReadingQuantity;
-  subject: ReadingSubject;
-  valueSi: number;
-  unitSi: 'kg' | 'degC' | '%' | 's';
-  given: { value: number; unit: string };
-  stable: boolean;
-  deviceTime: string | null;
-  receivedAt: string;
-  clockSkewSeconds: number | null;
-  clockSkewFlagged: boolean;
-  status: ReadingStatus;
-  reasons: Reason[];
-  judgedAt: string | null;
-  review: ReadingReview | null;
-}
-
-export interface Device {
-  id: string;
-  kind: string;
-  serial: string;
-  name: string;
-  stationCode: string | null;
-  station?: { id: string; code: string; name: string } | null;
-  readabilityKg: number | null;
-  capacityKg: number | null;
-  calibrationDue: string | null;
-  retired: boolean;
-}
+export type { Reading };
 
 export const SUBJECT_LABEL: Readonly<Record<ReadingSubject, string>> = {
   part_a: 'Part A',

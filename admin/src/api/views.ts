@@ -1,0 +1,81 @@
+/**
+ * The API's response bodies, as the SDK generates them from schemas/<name>.schema.json. The console
+ * declares no response shape of its own: when a view changes, the typecheck shows every screen it
+ * touches.
+ */
+import type { components, operations } from '@pourgate/sdk';
+
+type Schemas = components['schemas'];
+
+export type User = Schemas['user.view'];
+export type Invitation = Schemas['invitation.view'];
+export type InvitationState = Invitation['state'];
+export type ApiKey = Schemas['api-key.view'];
+export type ApiKeyState = ApiKey['state'];
+export type ApiKeyKind = ApiKey['kind'];
+export type ApiKeyEnvironment = ApiKey['environment'];
+/** Only the create and rotate answers carry the secret, and only once. */
+export type ApiKeyWithSecret = Schemas['api-key.created'];
+export type AuditEntry = Schemas['audit-entry.view'];
+export type ActorType = AuditEntry['actorType'];
+
+export type Batch = Schemas['batch.view'];
+export type BatchState = Batch['state'];
+export type BatchTransition = Schemas['batch-transition.view'];
+export type BatchTargets = Schemas['batch-targets.view'];
+export type TargetsPreview = Schemas['targets.view'];
+export type TargetFigures = Schemas['targets.figures'];
+/** A batch's stored targets or a preview: the figures, plus the batch fields on a stored one. */
+export type TargetsView = TargetFigures & Partial<Pick<BatchTargets, 'batchId' | 'state' | 'computedAt'>>;
+type Components = TargetFigures['components'];
+/** One row of a components table: part A or B (with side, band and volume) or the pigment. */
+export type ComponentTarget = Omit<Components['pigment'], 'percentOfAB'> & Partial<Omit<Components['A'], 'mass' | 'massUnrounded'>> & { percentOfAB?: number };
+export type TargetWarning = Schemas['batch-warning'];
+export type Caution = Schemas['caution'];
+export type DisplayedQuantity = Schemas['displayed-quantity'];
+
+export type Reading = Schemas['reading.view'];
+export type ReadingStatus = Reading['status'];
+export type ReadingQuantity = Reading['quantity'];
+export type ReadingSubject = Reading['subject'];
+export type ReadingReview = NonNullable<Reading['review']>;
+export type ReadingReason = Schemas['reading.reason'];
+
+export type Device = Schemas['device.view'];
+export type Lot = Schemas['lot.view'];
+export type Mold = Schemas['mold.view'];
+export type MaterialSystem = Schemas['material-system.view'];
+export type MaterialSystemRevision = Schemas['material-system-revision.view'];
+export type MaterialSystemDocument = Schemas['document.view'];
+export type WorkOrder = Schemas['work-order.view'];
+export type CupTest = Schemas['qc-cup-test.view'];
+export type ImportJob = Schemas['import.view'];
+
+export type WebhookEndpoint = Schemas['webhook-endpoint.view'];
+export type WebhookEndpointWithSecret = Schemas['webhook-endpoint.created'];
+export type EndpointTestResult = Schemas['webhook-test.result'];
+export type WebhookDelivery = Schemas['webhook-delivery.view'];
+export type DeliveryStatus = WebhookDelivery['status'];
+export type DeliveryDetail = Schemas['webhook-delivery.detail'];
+
+export type Overview = Schemas['overview.view'];
+export type OverviewQuery = Schemas['overview.query'];
+
+type MeAnswer = operations['Auth_me']['responses'] extends { 200: { content: { 'application/json': infer T } } } ? T : MeFallback;
+/**
+ * GET /v1/me has no view schema yet: until it does, the fields the console reads of it (the person,
+ * the organization, the allowed actions), which the SDK replaces as soon as the schema lands.
+ */
+interface MeFallback {
+  id: string;
+  email: string;
+  name: string;
+  role: 'admin' | 'engineer' | 'integrator' | 'viewer';
+  unitSystem: 'metric' | 'imperial';
+  notifyRejections?: NotifyRejections;
+  organization: { id: string; name: string; unitSystem?: 'metric' | 'imperial' };
+  actions: string[];
+}
+export type Profile = MeAnswer;
+export type ProfileUpdate = Schemas['me.update'];
+export type NotifyRejections = NonNullable<ProfileUpdate['notifyRejections']>;
