@@ -8,7 +8,6 @@ import { randomUUID } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { makeShop, readingBody, resetDatabase, ROOT, startApi } from '../test/faults/harness.js';
-// @ts-expect-error -- services.mjs has no type declarations
 import { startPostgres, startRedis } from '../scripts/lib/services.mjs';
 
 const dir = path.join(ROOT, 'test-output', 'profiles');

@@ -18,7 +18,6 @@ import path from 'node:path';
 import pg from 'pg';
 import { startErpReceiver } from '../fakes/src/erp-receiver.js';
 import { type ApiProcess, json, makeShop, readingBody, resetDatabase, ROOT, type Shop, sleep, startApi } from '../test/faults/harness.js';
-// @ts-expect-error -- services.mjs has no type declarations
 import { startPostgres, startRedis } from '../scripts/lib/services.mjs';
 
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 3);

@@ -1,12 +1,10 @@
 import 'reflect-metadata';
 import helmet from '@fastify/helmet';
 import rateLimit from '@fastify/rate-limit';
-import fastifyStatic from '@fastify/static';
 import { NestFactory } from '@nestjs/core';
 import { FastifyAdapter, NestFastifyApplication } from '@nestjs/platform-fastify';
 import { SwaggerModule } from '@nestjs/swagger';
 import { Redis } from 'ioredis';
-import fs from 'node:fs';
 import path from 'node:path';
 import type { DestinationStream } from 'pino';
 import { AppModule } from './app.module.js';
@@ -16,6 +14,7 @@ import { validateEnv } from './config/env.js';
 import { PROJECT_ROOT } from './config/paths.js';
 import { createLogger, genReqId, PinoNestLogger } from './logging/logger.js';
 import { buildOpenApiDocument } from './openapi/openapi.js';
+import { serveConsole } from './static/console-assets.js';
 
 export interface CreateAppOptions {
   /** Where log lines go (tests capture them); stdout by default. */
@@ -25,7 +24,7 @@ export interface CreateAppOptions {
 /** Builds the whole HTTP application, initialised and ready; `main.ts` only adds `listen`. */
 export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastifyApplication> {
   const env = validateEnv(process.env);
-  const logger = createLogger(env.LOG_LEVEL, opts.logStream);
+  const logger = createLogger(env.LOG_LEVEL, opts.logStream, env.LOG_FORMAT);
   const adapter = new FastifyAdapter({
     loggerInstance: logger,
     genReqId,
@@ -93,9 +92,7 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
     customSiteTitle: 'Pourgate API',
   });
 
-  const consoleDir = env.ADMIN_DIST || path.join(PROJECT_ROOT, 'admin', 'dist');
-  const root = fs.existsSync(path.join(consoleDir, 'index.html')) ? consoleDir : path.join(PROJECT_ROOT, 'api', 'placeholder');
-  await app.register(fastifyStatic as never, { root, prefix: '/', wildcard: false, decorateReply: false, index: ['index.html'] });
+  await serveConsole(app, env.ADMIN_DIST || path.join(PROJECT_ROOT, 'admin', 'dist'), path.join(PROJECT_ROOT, 'api', 'placeholder'), logger);
 
   await app.init();
   await fastify.ready();

@@ -22,6 +22,7 @@ import { TargetsModule } from './targets/targets.module.js';
 import { WorkOrdersModule } from './work-orders/work-orders.module.js';
 import { EventsModule } from './events/events.module.js';
 import { WebhooksModule } from './webhooks/webhooks.module.js';
+import { ScheduleModule } from './schedule/schedule.module.js';
 import { DatabaseModule } from './database/database.module.js';
 import { HealthModule } from './health/health.module.js';
 import { MailModule } from './mail/mail.module.js';
@@ -36,6 +37,7 @@ import { UsersModule } from './users/users.module.js';
 @Module({})
 export class AppModule {
   static forRoot(): DynamicModule {
+    const webhooks = WebhooksModule.forRoot();
     return {
       module: AppModule,
       imports: [
@@ -59,7 +61,8 @@ export class AppModule {
         ImportsModule,
         QcCupTestsModule,
         EventsModule,
-        WebhooksModule.forRoot(),
+        webhooks,
+        ScheduleModule.forRoot(webhooks),
         OverviewModule,
         HealthModule,
       ],

@@ -1,7 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { startTestApp, TestApp } from './support/app.js';
 // the same code `npm start` and `npm test` use to run PostgreSQL; here a cluster of this suite's own
-// @ts-expect-error plain ESM helper without types
 import { startPostgres } from '../../scripts/lib/services.mjs';
 
 interface Pg {

@@ -11,7 +11,6 @@ import { ACTIONS, type Action } from '@pourgate/permissions';
 import { bodyValidator, type CaseContext, rowCounts, rowDiff, runFuzz, writeRoutes } from './fuzz-core.js';
 import { type ApiProcess, json, makeShop, rawSend, readingBody, resetDatabase, ROOT, type Shop, sleep, startApi } from './harness.js';
 // plain Node module shared with `npm start` / `npm test`
-// @ts-expect-error -- services.mjs has no type declarations
 import { startPostgres, startRedis } from '../../scripts/lib/services.mjs';
 
 const small = process.env.FAULTS_SCALE === 'small';

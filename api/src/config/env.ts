@@ -37,7 +37,13 @@ export const envSchema = {
     OUTBOX_RELAY: { enum: ['on', 'off'], default: 'on' },
     NOTIFICATIONS: { enum: ['on', 'off'], default: 'on', description: 'Whether this worker sends rejection e-mails' },
     NOTIFY_INTERVAL_MS: { type: 'integer', minimum: 20, maximum: 600000, default: 1000, description: 'How often one-by-one rejection e-mails are sent' },
-    NOTIFY_DIGEST_INTERVAL_MS: { type: 'integer', minimum: 100, maximum: 86400000, default: 3600000, description: 'How often rejection digests are sent (hourly)' },
+    NOTIFY_DIGEST_CRON: { type: 'string', minLength: 9, default: '0 6 * * *', description: 'When the daily rejection digest goes out (cron, in NOTIFY_DIGEST_TZ): 06:00 by default' },
+    NOTIFY_DIGEST_TZ: { type: 'string', minLength: 1, default: 'UTC' },
+    NOTIFY_DIGEST_INTERVAL_MS: { type: 'integer', minimum: 100, maximum: 86400000, description: 'Tests and demos only: send digests every so many ms instead of on NOTIFY_DIGEST_CRON' },
+    WORKER_HEALTH_PORT: { type: 'integer', minimum: 0, maximum: 65535, default: 3100, description: 'PROCESS_ROLE=worker: port of the health endpoint for orchestrators (0: none)' },
+    SHUTDOWN_TIMEOUT_MS: { type: 'integer', minimum: 1000, maximum: 600000, default: 25000, description: 'How long a stopping process waits for running jobs before it exits anyway' },
+    LOG_FORMAT: { enum: ['auto', 'json', 'pretty'], default: 'auto', description: 'auto: readable lines at a terminal outside production, JSON otherwise' },
+    QUEUE_DASHBOARD: { enum: ['on', 'off'], default: 'on', description: 'The queue dashboard for admins under /v1/admin/queues' },
     QUEUE_PREFIX: { type: 'string', pattern: '^[A-Za-z0-9:_-]+$', default: 'bull' },
   },
   required: ['DATABASE_URL', 'REDIS_URL'],
@@ -74,7 +80,13 @@ export interface Env {
   OUTBOX_RELAY: 'on' | 'off';
   NOTIFICATIONS: 'on' | 'off';
   NOTIFY_INTERVAL_MS: number;
-  NOTIFY_DIGEST_INTERVAL_MS: number;
+  NOTIFY_DIGEST_CRON: string;
+  NOTIFY_DIGEST_TZ: string;
+  NOTIFY_DIGEST_INTERVAL_MS?: number;
+  WORKER_HEALTH_PORT: number;
+  SHUTDOWN_TIMEOUT_MS: number;
+  LOG_FORMAT: 'auto' | 'json' | 'pretty';
+  QUEUE_DASHBOARD: 'on' | 'off';
   QUEUE_PREFIX: string;
 }
 

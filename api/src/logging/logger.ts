@@ -2,6 +2,7 @@ import type { LoggerService } from '@nestjs/common';
 import { randomUUID } from 'node:crypto';
 import type { IncomingMessage } from 'node:http';
 import pinoPkg from 'pino';
+import pinoPretty from 'pino-pretty';
 import type { DestinationStream, Logger, LoggerOptions } from 'pino';
 
 const pino = pinoPkg as unknown as (opts: LoggerOptions, stream?: DestinationStream) => Logger;
@@ -23,7 +24,32 @@ export const REDACT_PATHS = [
   '*.apiKey',
 ];
 
-export function createLogger(level: string, stream?: DestinationStream): Logger {
+export type LogFormat = 'auto' | 'json' | 'pretty';
+
+/**
+ * JSON lines for log shippers; readable lines for a person at a terminal. `auto` is readable only
+ * outside production and only when stdout is a terminal (piped or redirected output stays JSON).
+ */
+export function prettyLogs(format: LogFormat, nodeEnv: string | undefined, stdoutIsTTY: boolean): boolean {
+  if (format !== 'auto') return format === 'pretty';
+  return nodeEnv !== 'production' && stdoutIsTTY;
+}
+
+/** pino-pretty as an in-process stream (no worker thread): one readable line per entry. */
+export function prettyStream(destination?: NodeJS.WritableStream, colorize = true): DestinationStream {
+  return pinoPretty({
+    colorize,
+    destination: destination ?? 1,
+    sync: true,
+    translateTime: 'SYS:HH:MM:ss.l',
+    ignore: 'pid,hostname,service',
+    singleLine: true,
+  }) as unknown as DestinationStream;
+}
+
+/** A given stream (tests) is used as it is; otherwise stdout, readable or JSON by `prettyLogs`. */
+export function createLogger(level: string, stream?: DestinationStream, format: LogFormat = 'auto'): Logger {
+  if (!stream && prettyLogs(format, process.env.NODE_ENV, process.stdout.isTTY === true)) stream = prettyStream();
   return pino(
     {
       level,

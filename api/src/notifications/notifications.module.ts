@@ -1,12 +1,10 @@
 import { Module } from '@nestjs/common';
-import { workerEnabled } from '../config/process-role.js';
 import { MailModule } from '../mail/mail.module.js';
-import { NotificationsSender } from './notifications.sender.js';
 import { NotificationsService } from './notifications.service.js';
 
 @Module({
   imports: [MailModule],
-  providers: [NotificationsService, ...(workerEnabled() ? [NotificationsSender] : [])],
+  providers: [NotificationsService],
   exports: [NotificationsService],
 })
 export class NotificationsModule {}

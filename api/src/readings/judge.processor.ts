@@ -1,7 +1,7 @@
 import { OnQueueFailed, OnQueueStalled, Process, Processor } from '@nestjs/bull';
-import { BeforeApplicationShutdown, Injectable, Logger, OnApplicationBootstrap, OnApplicationShutdown } from '@nestjs/common';
+import { Logger } from '@nestjs/common';
 import type { Job } from 'bull';
-import { JUDGE_CONCURRENCY, JUDGE_QUEUE, type JudgeJob, SWEEP_AFTER_MS, SWEEP_EVERY_MS } from './readings.constants.js';
+import { JUDGE_CONCURRENCY, JUDGE_QUEUE, type JudgeJob } from './readings.constants.js';
 import { ReadingsService } from './readings.service.js';
 
 /** The Bull consumer: one job per reading (job id = reading id). */
@@ -26,32 +26,5 @@ export class JudgeProcessor {
   @OnQueueFailed()
   failed(job: Job<JudgeJob>, err: Error) {
     this.log.warn(`judging of reading ${job.data.readingId} failed (attempt ${job.attemptsMade}): ${err.message}; the reading stays pending for a retry or the sweeper`);
-  }
-}
-
-/** At boot and on a timer, re-queues readings left pending (PostgreSQL is the source of truth). */
-@Injectable()
-export class PendingReadingsSweeper implements OnApplicationBootstrap, BeforeApplicationShutdown, OnApplicationShutdown {
-  private timer?: NodeJS.Timeout;
-  private stopped = false;
-
-  constructor(private readonly readings: ReadingsService) {}
-
-  onApplicationBootstrap(): void {
-    const run = () => {
-      if (!this.stopped) void this.readings.sweep(SWEEP_AFTER_MS, () => this.stopped).catch(() => undefined);
-    };
-    this.timer = setInterval(run, SWEEP_EVERY_MS);
-    setImmediate(run);
-    this.timer.unref();
-  }
-
-  beforeApplicationShutdown(): void {
-    this.stopped = true;
-  }
-
-  onApplicationShutdown(): void {
-    this.stopped = true;
-    if (this.timer) clearInterval(this.timer);
   }
 }

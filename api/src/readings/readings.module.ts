@@ -1,7 +1,7 @@
 import { BullModule } from '@nestjs/bull';
 import { Module } from '@nestjs/common';
 import { workerEnabled } from '../config/process-role.js';
-import { JudgeProcessor, PendingReadingsSweeper } from './judge.processor.js';
+import { JudgeProcessor } from './judge.processor.js';
 import { JUDGE_QUEUE } from './readings.constants.js';
 import { ReadingsController } from './readings.controller.js';
 import { ReadingsRepository } from './readings.repository.js';
@@ -10,7 +10,7 @@ import { ReadingsService } from './readings.service.js';
 @Module({
   imports: [BullModule.registerQueue({ name: JUDGE_QUEUE })],
   controllers: [ReadingsController],
-  providers: [ReadingsRepository, ReadingsService, ...(workerEnabled() ? [JudgeProcessor, PendingReadingsSweeper] : [])],
+  providers: [ReadingsRepository, ReadingsService, ...(workerEnabled() ? [JudgeProcessor] : [])],
   exports: [ReadingsService],
 })
 export class ReadingsModule {}

@@ -3,9 +3,7 @@ import { DynamicModule, Module } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import type { Env } from '../config/env.js';
 import { workerEnabled } from '../config/process-role.js';
-import { NotificationsModule } from '../notifications/notifications.module.js';
 import { DeliveryProcessor } from './delivery.processor.js';
-import { RelayService } from './relay.service.js';
 import { DeliveryFailed, WEBHOOK_BACKOFF, WEBHOOK_QUEUE } from './webhooks.constants.js';
 import { WebhookDeliveriesController, WebhookEndpointsController } from './webhooks.controller.js';
 import { WebhooksRepository } from './webhooks.repository.js';
@@ -17,7 +15,6 @@ export class WebhooksModule {
     return {
       module: WebhooksModule,
       imports: [
-        NotificationsModule,
         BullModule.registerQueueAsync({
           name: WEBHOOK_QUEUE,
           inject: [ConfigService],
@@ -30,7 +27,7 @@ export class WebhooksModule {
         }),
       ],
       controllers: [WebhookEndpointsController, WebhookDeliveriesController],
-      providers: [WebhooksRepository, WebhooksService, ...(workerEnabled() ? [DeliveryProcessor, RelayService] : [])],
+      providers: [WebhooksRepository, WebhooksService, ...(workerEnabled() ? [DeliveryProcessor] : [])],
       exports: [WebhooksService],
     };
   }

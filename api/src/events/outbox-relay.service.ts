@@ -4,18 +4,20 @@ import type { Knex } from 'knex';
 import type { Env } from '../config/env.js';
 import { KNEX } from '../database/database.module.js';
 import { NotificationsService } from '../notifications/notifications.service.js';
-import { WebhooksService } from './webhooks.service.js';
+import { WebhooksService } from '../webhooks/webhooks.service.js';
 
 /**
  * The outbox relay (worker processes): turns new event rows into one delivery row per matching
- * endpoint and queues them. Rows are claimed with SKIP LOCKED, so any number of workers can run
- * it. A sweep re-queues deliveries whose job was lost (Redis restarted empty).
+ * endpoint (and the e-mail notices) and queues them. It polls every WEBHOOK_RELAY_INTERVAL_MS in
+ * every worker; rows are claimed with FOR UPDATE SKIP LOCKED and marked relayed in the same
+ * transaction, and a delivery row is unique per (endpoint, event), so N workers never relay an
+ * event twice. The sweep, which re-queues deliveries whose job was lost (Redis restarted empty),
+ * is a periodic job (api/src/schedule), run once per period whatever the number of workers.
  */
 @Injectable()
-export class RelayService implements OnApplicationBootstrap, OnApplicationShutdown {
+export class OutboxRelay implements OnApplicationBootstrap, OnApplicationShutdown {
   private readonly logger = new Logger('OutboxRelay');
   private timer?: NodeJS.Timeout;
-  private sweepTimer?: NodeJS.Timeout;
   private running = false;
   private stopped = false;
 
@@ -30,14 +32,11 @@ export class RelayService implements OnApplicationBootstrap, OnApplicationShutdo
     if (this.config.get('OUTBOX_RELAY', { infer: true }) === 'off') return;
     const every = this.config.get('WEBHOOK_RELAY_INTERVAL_MS', { infer: true });
     this.timer = setInterval(() => void this.tick(), every);
-    this.sweepTimer = setInterval(() => void this.sweep().catch((e: Error) => this.logger.warn(`sweep failed: ${e.message}`)), 15_000);
-    void this.sweep().catch(() => undefined);
   }
 
   async onApplicationShutdown(): Promise<void> {
     this.stopped = true;
     clearInterval(this.timer);
-    clearInterval(this.sweepTimer);
     while (this.running) await new Promise((r) => setTimeout(r, 20));
   }
 
