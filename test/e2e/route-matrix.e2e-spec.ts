@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { randomBytes, randomUUID } from 'node:crypto';
-import { ACTIONS, type Action, type ActionRule, API_KEY_SCOPES, ROLES, type Role } from '@pourgate/permissions';
+import { ACTIONS, type Action, type ActionRule, API_KEY_SCOPES, refusedScopes, roleAllows, ROLES, type Role } from '@pourgate/permissions';
 import { sha256 } from '../../api/src/auth/tokens.service.js';
 import { closeTestDb, makeOrg, type OrgFixture, testDb, tokensFor } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/app.js';
@@ -130,6 +130,25 @@ describe('route × role × organization matrix', () => {
       const scoped = Boolean((ACTIONS[op.action!] as ActionRule).scope);
       const ok = scoped ? ![401, 403].includes(res.status) && res.status < 500 : res.status === 403;
       if (!ok) wrong.push(`${op.method} ${op.path} with key -> ${res.status}`);
+    }
+    expect(wrong).toEqual([]);
+  });
+});
+
+describe('key creation: every role × kind × scope', () => {
+  it('a key is issued only with scopes its issuer may grant and its kind may hold; a refusal names the scope', async () => {
+    const wrong: string[] = [];
+    for (const role of ROLES) {
+      for (const kind of ['device', 'integration'] as const) {
+        for (const scope of API_KEY_SCOPES) {
+          const res = await t.http.post('/v1/api-keys').set('authorization', auth[role]).send({ name: `${role} ${kind} ${scope}`, kind, scopes: [scope] });
+          const mayManage = roleAllows(role, 'api-keys:manage') && !(role === 'integrator' && kind === 'integration');
+          const expected = mayManage && refusedScopes(role, kind, [scope]).length === 0 ? 201 : 403;
+          if (res.status !== expected) wrong.push(`${role} ${kind} ${scope} -> ${res.status} (expected ${expected})`);
+          else if (expected === 403 && mayManage && !String(res.body.detail).includes(scope)) wrong.push(`${role} ${kind} ${scope}: the refusal does not name the scope`);
+          else if (expected === 201 && (res.body.kind !== kind || res.body.scopes.join() !== scope)) wrong.push(`${role} ${kind} ${scope}: issued ${res.body.kind} ${res.body.scopes}`);
+        }
+      }
     }
     expect(wrong).toEqual([]);
   });

@@ -201,7 +201,7 @@ function RowActions() {
     setBusy(true);
     try {
       await dataProvider.revokeApiKey(k.id);
-      notify(`“${k.name}” is revoked. Requests with it are refused from now on.`, { type: 'success' });
+      notify(`“${k.name}” is revoked with every secret it had, including one still in a rotation grace period. Requests with any of them are refused from now on.`, { type: 'success' });
       refresh();
     } catch (error) {
       notify((error as Error).message, { type: 'error' });
@@ -233,8 +233,9 @@ function RowActions() {
         title={`Revoke “${k.name}”?`}
         content={
           <>
-            Every request signed with <code style={{ fontFamily: monoFont }}>{k.prefix}…</code> is refused from the moment you
-            confirm{k.state === 'grace' ? ', ending its grace period early' : ''}. This cannot be undone; issue a new key to reconnect.
+            Every secret of this key is refused from the moment you confirm: <code style={{ fontFamily: monoFont }}>{k.prefix}…</code>,
+            the secret it replaced if that one is still in its rotation grace period, and the secret that replaced it if it was
+            rotated. This cannot be undone; issue a new key to reconnect.
           </>
         }
         confirm="Revoke key"

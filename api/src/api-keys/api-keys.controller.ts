@@ -3,6 +3,7 @@ import { ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { FastifyReply } from 'fastify';
 import type { ApiKeyScope } from '@pourgate/permissions';
 import { Caller, type RequestContext } from '../auth/principal.js';
+import { NoStore } from '../auth/no-store.decorator.js';
 import { Requires } from '../auth/requires.decorator.js';
 import { IdParam } from '../common/decorators/uuid-param.js';
 import { ListRoute, parseListQuery, setContentRange } from '../common/lists/list-query.js';
@@ -36,7 +37,8 @@ export class ApiKeysController {
 
   @Post()
   @Requires('api-keys:manage')
-  @ApiOperation({ summary: 'Issue an API key', description: 'The response carries `secret` — the only time it is shown. Send it in the X-Api-Key header.' })
+  @NoStore()
+  @ApiOperation({ summary: 'Issue an API key', description: 'The response carries `secret` — the only time it is shown. Send it in the X-Api-Key header. The scopes must be ones the issuer may grant (integrators: the device scopes), and a device key holds only the device scopes; otherwise 403 naming the refused scopes.' })
   @Responds(201, 'api-key.created', { description: 'The key, with its secret (shown once)' })
   create(@Caller() c: RequestContext, @SchemaBody('api-key.create') body: { name: string; kind: 'device' | 'integration'; environment: 'live' | 'test'; scopes: ApiKeyScope[]; deviceId?: string | null; expiresAt?: string | null }) {
     return this.keys.create(c, body);
@@ -45,7 +47,7 @@ export class ApiKeysController {
   @Post(':id/revoke')
   @HttpCode(200)
   @Requires('api-keys:manage')
-  @ApiOperation({ summary: 'Revoke a key at once' })
+  @ApiOperation({ summary: 'Revoke a key at once', description: 'Ends every secret of the key together: its predecessor still in a rotation grace period and any successor too. A revoked key cannot be rotated (409).' })
   @Responds(200, 'api-key.view')
   revoke(@Caller() c: RequestContext, @IdParam() id: string) {
     return this.keys.revoke(c, id);
@@ -53,6 +55,7 @@ export class ApiKeysController {
 
   @Post(':id/rotate')
   @Requires('api-keys:manage')
+  @NoStore()
   @ApiOperation({ summary: 'Rotate a key: a new secret now, the old one valid for the grace period' })
   @Responds(201, 'api-key.created', { description: 'The successor key, with its secret (shown once)' })
   rotate(@Caller() c: RequestContext, @IdParam() id: string, @SchemaBody('api-key.rotate') body: { graceSeconds: number }) {

@@ -2,7 +2,7 @@ import { Inject, Injectable, Logger } from '@nestjs/common';
 import type { Knex } from 'knex';
 import { randomBytes } from 'node:crypto';
 import { AuditService } from '../audit/audit.service.js';
-import type { ApiKeyScope } from '@pourgate/permissions';
+import { type ApiKeyScope, DEVICE_KEY_SCOPES, refusedScopes } from '@pourgate/permissions';
 import { actorOf, Principal, RequestContext } from '../auth/principal.js';
 import { sha256 } from '../auth/tokens.service.js';
 import { listPage } from '../common/lists/knex-list.js';
@@ -88,7 +88,9 @@ export class ApiKeysService {
     if (!/^pg[di]_(live|test)_[A-Za-z0-9_-]{43}$/.test(secret)) return null;
     const r = (await this.db('api_keys').where({ secret_hash: sha256(secret) }).first()) as ApiKeyRow | undefined;
     if (!r || keyState(r) === 'revoked' || keyState(r) === 'expired') return null;
-    return { kind: 'api_key', id: r.id, organizationId: r.organization_id, scopes: r.scopes, deviceId: r.device_id, name: r.name, keyKind: r.kind, prefix: r.prefix };
+    // a device key issued before scopes were checked at creation still holds the device scopes only
+    const scopes = r.kind === 'device' ? r.scopes.filter((s) => (DEVICE_KEY_SCOPES as readonly string[]).includes(s)) : r.scopes;
+    return { kind: 'api_key', id: r.id, organizationId: r.organization_id, scopes, deviceId: r.device_id, name: r.name, keyKind: r.kind, prefix: r.prefix };
   }
 
   /** When this process last recorded each key's use (so most requests skip the write entirely). */
@@ -128,8 +130,22 @@ export class ApiKeysService {
     }
   }
 
+  /** A key holds no scope its issuer may not grant, and a device key only the device scopes. */
+  private checkScopes(c: RequestContext, kind: 'device' | 'integration', scopes: readonly string[]) {
+    if (c.principal.kind !== 'user') throw new ProblemException(403, { detail: 'Only people issue API keys.' });
+    const refused = refusedScopes(c.principal.role, kind, scopes);
+    if (refused.length === 0) return;
+    const why = kind === 'device' && refused.every((s) => !(DEVICE_KEY_SCOPES as readonly string[]).includes(s)) ? `a device key holds only ${DEVICE_KEY_SCOPES.join(', ')}` : `your role (${c.principal.role}) may not grant them`;
+    throw new ProblemException(403, {
+      title: 'Scopes refused',
+      detail: `These scopes cannot go on this key: ${refused.join(', ')} (${why}).`,
+      errors: refused.map((s) => ({ pointer: `/scopes/${scopes.indexOf(s)}`, detail: `${s} refused`, code: 'scope' })),
+    });
+  }
+
   async create(c: RequestContext, body: { name: string; kind: 'device' | 'integration'; environment: 'live' | 'test'; scopes: ApiKeyScope[]; deviceId?: string | null; expiresAt?: string | null }) {
     this.checkKind(c, body.kind);
+    this.checkScopes(c, body.kind, body.scopes);
     if (body.expiresAt && new Date(body.expiresAt) <= new Date()) {
       throw new ProblemException(422, { slug: 'validation-failed', detail: 'The expiry is in the past.', errors: [{ pointer: '/expiresAt', detail: 'must be in the future' }] });
     }
@@ -148,25 +164,57 @@ export class ApiKeysService {
     return { ...(await this.get(c, id)), secret };
   }
 
+  /**
+   * Ends every secret of the key at once: the key, the keys it was rotated from (a predecessor may
+   * still be in its grace period) and any successor. A leak is answered by one revoke.
+   */
   async revoke(c: RequestContext, id: string) {
     const key = await this.get(c, id);
     this.checkKind(c, key.kind);
-    if (key.state !== 'revoked') {
-      await this.db.transaction(async (trx) => {
-        await trx('api_keys').where({ id }).update({ revoked_at: trx.fn.now(), revoked_by: c.principal.id });
-        await this.audit.record({ organizationId: c.principal.organizationId, ...actorOf(c.principal), action: 'api_key.revoked', targetType: 'api_key', targetId: id, details: { name: key.name, prefix: key.prefix }, ip: c.ip, userAgent: c.userAgent }, trx);
-      });
-    }
+    await this.db.transaction(async (trx) => {
+      const lineage = await this.lineage(trx, c.principal.organizationId, id);
+      const ended = await trx('api_keys').whereIn('id', lineage).whereNull('revoked_at').update({ revoked_at: trx.fn.now(), revoked_by: c.principal.kind === 'user' ? c.principal.id : null }).returning('id');
+      if (ended.length) await this.audit.record({ organizationId: c.principal.organizationId, ...actorOf(c.principal), action: 'api_key.revoked', targetType: 'api_key', targetId: id, details: { name: key.name, prefix: key.prefix, ended: ended.map((r: { id: string }) => r.id) }, ip: c.ip, userAgent: c.userAgent }, trx);
+    });
     return this.get(c, id);
   }
 
+  /** The ids of a key's rotation chain (ancestors and descendants), locked for the change. */
+  private async lineage(trx: Knex.Transaction, orgId: string, id: string): Promise<string[]> {
+    // lock, then look again: a rotation that committed while we waited added a successor to end too
+    const first = await this.chain(trx, orgId, id);
+    await trx('api_keys').whereIn('id', first).forUpdate().select('id');
+    const ids = await this.chain(trx, orgId, id);
+    await trx('api_keys').whereIn('id', ids).forUpdate().select('id');
+    return ids;
+  }
+
+  private async chain(trx: Knex.Transaction, orgId: string, id: string): Promise<string[]> {
+    const { rows } = await trx.raw<{ rows: { id: string }[] }>(
+      `WITH RECURSIVE up AS (
+         SELECT id, rotated_from FROM api_keys WHERE id = ? AND organization_id = ?
+         UNION SELECT k.id, k.rotated_from FROM api_keys k JOIN up ON k.id = up.rotated_from WHERE k.organization_id = ?
+       ), down AS (
+         SELECT id FROM api_keys WHERE id = ? AND organization_id = ?
+         UNION SELECT k.id FROM api_keys k JOIN down ON k.rotated_from = down.id WHERE k.organization_id = ?
+       )
+       SELECT id FROM up UNION SELECT id FROM down`,
+      [id, orgId, orgId, id, orgId, orgId],
+    );
+    return rows.map((r) => r.id);
+  }
+
   async rotate(c: RequestContext, id: string, graceSeconds: number) {
-    const old = await this.get(c, id);
-    this.checkKind(c, old.kind);
-    if (old.state === 'revoked' || old.state === 'expired') throw new ProblemException(409, { detail: `A ${old.state} key cannot be rotated; issue a new one.` });
-    if (old.state === 'grace') throw new ProblemException(409, { detail: 'This key was already rotated; rotate its successor instead.' });
-    const { secret, prefix } = newSecret(old.kind, old.environment);
+    const seen = await this.get(c, id);
+    this.checkKind(c, seen.kind);
+    this.checkScopes(c, seen.kind, seen.scopes);
+    const { secret, prefix } = newSecret(seen.kind, seen.environment);
     const newId = await this.db.transaction(async (trx) => {
+      // the state is read again under a row lock, so a revoke running at the same time wins cleanly
+      const locked = (await trx('api_keys').where({ id, organization_id: c.principal.organizationId }).forUpdate().first()) as ApiKeyRow;
+      const old = view(locked);
+      if (old.state === 'revoked' || old.state === 'expired') throw new ProblemException(409, { detail: `A ${old.state} key cannot be rotated; issue a new one.` });
+      if (old.state === 'grace') throw new ProblemException(409, { detail: 'This key was already rotated; rotate its successor instead.' });
       const [row] = await trx('api_keys')
         .insert({ organization_id: c.principal.organizationId, name: old.name, kind: old.kind, environment: old.environment, scopes: old.scopes, device_id: old.deviceId, prefix, secret_hash: sha256(secret), created_by: c.principal.id, expires_at: old.expiresAt, rotated_from: old.id })
         .returning('id');
