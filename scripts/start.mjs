@@ -39,11 +39,19 @@ if (!env.S3_ENDPOINT && !env.DOCUMENTS_DIR && env.NODE_ENV !== 'production') {
   const store = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'fakes/src/object-store.ts'), '--port', String(s3Port), '--dir', path.join(ROOT, '.data/objects')], { cwd: ROOT, env, stdio: 'inherit' });
   stops.push(() => store.kill('SIGTERM'));
   env.S3_ENDPOINT = `http://127.0.0.1:${s3Port}`;
+  // the stand-in's development keys; a real store takes the SDK's default credential chain
+  env.S3_ACCESS_KEY_ID ??= 'pourgate-local';
+  env.S3_SECRET_ACCESS_KEY ??= 'pourgate-local-secret';
 }
 if (!env.WEBHOOK_ALLOWED_HOSTS && env.NODE_ENV === 'development') {
   // the local fakes (ERP receiver) listen on loopback; production allows public addresses only
   env.WEBHOOK_ALLOWED_HOSTS = '127.0.0.1,localhost';
 }
+// links in mail (invitations, notices) point at the address this service actually listens on,
+// unless PUBLIC_URL says otherwise (a proxy, a domain name)
+const port = Number(env.PORT ?? 3000);
+const listenHost = env.HOST && !['0.0.0.0', '::'].includes(env.HOST) ? env.HOST : '127.0.0.1';
+if (!env.PUBLIC_URL) env.PUBLIC_URL = `http://${listenHost.includes(':') ? `[${listenHost}]` : listenHost}:${port}`;
 const stopServices = () => { for (const s of stops.splice(0).reverse()) s(); };
 
 if (runTs(path.join(ROOT, 'scripts/db.ts'), ['migrate'], env).status !== 0) { stopServices(); fail('migrations failed'); }
@@ -58,7 +66,6 @@ function build(name, target, sources, args) {
 build('the API', 'api/dist/main.js', ['api/src', 'api/tsconfig.json', 'api/tsconfig.build.json'], ['run', 'build', '-w', 'api']);
 if (fs.existsSync(path.join(ROOT, 'admin/vite.config.ts')) && !process.env.SKIP_CONSOLE_BUILD) build('the console', 'admin/dist/index.html', ['admin/src', 'admin/index.html', 'admin/vite.config.ts'], ['run', 'build', '-w', 'admin']);
 
-const port = Number(env.PORT ?? 3000);
 const child = spawn(process.execPath, ['--enable-source-maps', path.join(ROOT, 'api/dist/main.js')], { cwd: ROOT, env, stdio: 'inherit' });
 let stopping = false;
 const shutdown = (sig) => {

@@ -4,10 +4,11 @@ import { ApiOperation, ApiTags, ApiTooManyRequestsResponse } from '@nestjs/swagg
 import { Public } from '../common/decorators/public.decorator.js';
 import { SchemaBody } from '../common/schemas/schema.pipe.js';
 import { Caller, Origin, type RequestContext } from './principal.js';
+import { NoStore } from './no-store.decorator.js';
 import { Requires } from './requires.decorator.js';
 import { TokensService } from './tokens.service.js';
 import { UsersService } from '../users/users.service.js';
-import { Responds } from '../common/schemas/responds.decorator.js';
+import { Responds, RETRY_AFTER_HEADER } from '../common/schemas/responds.decorator.js';
 
 @ApiTags('auth')
 @Controller()
@@ -17,9 +18,9 @@ export class AuthController {
   @Post('auth/sign-in')
   @Public()
   @HttpCode(200)
-  @RouteConfig({ rateLimit: {} })
-  @ApiOperation({ summary: 'Sign in with e-mail and password', description: 'Failed attempts are throttled per account and per address (429 with Retry-After). The message never says whether the e-mail exists.' })
-  @ApiTooManyRequestsResponse({ description: 'Throttled' })
+  @NoStore()
+  @ApiOperation({ summary: 'Sign in with e-mail and password', description: 'Every attempt is counted before the password is checked, per account (also for unknown addresses) and per client address (429 with Retry-After). The message never says whether the e-mail exists.' })
+  @ApiTooManyRequestsResponse({ description: 'Throttled: too many attempts for this account or from this address', headers: RETRY_AFTER_HEADER })
   @Responds(200, 'auth.session')
   signIn(@SchemaBody('auth.sign-in') body: { email: string; password: string }, @Origin() origin: { ip: string; userAgent?: string }) {
     return this.tokens.signIn(body.email, body.password, origin);
@@ -29,6 +30,7 @@ export class AuthController {
   @Public()
   @HttpCode(200)
   @RouteConfig({ rateLimit: {} })
+  @NoStore()
   @ApiOperation({ summary: 'Trade a refresh token for a new session', description: 'Refresh tokens rotate: each works once. Presenting a used one ends every session of its family.' })
   @Responds(200, 'auth.session')
   refresh(@SchemaBody('auth.refresh') body: { refreshToken: string }, @Origin() origin: { ip: string; userAgent?: string }) {

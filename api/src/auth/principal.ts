@@ -3,7 +3,7 @@ import type { ApiKeyScope, Role } from '@pourgate/permissions';
 
 /** Who is calling: a signed-in person or a machine holding an API key. Always one organization. */
 export type Principal =
-  | { kind: 'user'; id: string; organizationId: string; role: Role; email: string; name: string }
+  | { kind: 'user'; id: string; organizationId: string; role: Role; email: string; name: string; sessionId?: string }
   | { kind: 'api_key'; id: string; organizationId: string; scopes: ApiKeyScope[]; deviceId: string | null; name: string; keyKind: 'device' | 'integration'; prefix: string };
 
 export interface RequestContext {
@@ -36,4 +36,14 @@ export function actorOf(p: Principal): { actorType: 'user' | 'api_key'; actorId:
   return p.kind === 'user'
     ? { actorType: 'user', actorId: p.id, actorLabel: p.email }
     : { actorType: 'api_key', actorId: p.id, actorLabel: `${p.name} (${p.prefix}…)` };
+}
+
+/**
+ * The one device whose data a caller is confined to: a device key sees only its own device's
+ * readings (an unbound device key: none, `null`); people and integration keys are not confined
+ * (`undefined`) and see the organization's.
+ */
+export function confinedDevice(p: Principal): string | null | undefined {
+  if (p.kind !== 'api_key' || p.keyKind !== 'device') return undefined;
+  return p.deviceId;
 }

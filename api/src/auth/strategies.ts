@@ -7,6 +7,7 @@ import { ApiKeysService } from '../api-keys/api-keys.service.js';
 import type { Env } from '../config/env.js';
 import { API_KEY_HEADER } from '../openapi/openapi.js';
 import type { Principal } from './principal.js';
+import { TokensService } from './tokens.service.js';
 import { UsersRepository } from '../users/users.repository.js';
 
 export interface AccessClaims {
@@ -14,13 +15,15 @@ export interface AccessClaims {
   org: string;
   role: string;
   typ: 'access';
+  /** The session (refresh-token family) the token belongs to: signing out or a password change ends it. */
+  sid: string;
 }
 
 /** People: a short-lived access JWT in `Authorization: Bearer`. The user row is re-read, so a
  *  disabled account or a changed role takes effect at once, not when the token expires. */
 @Injectable()
 export class JwtStrategy extends PassportStrategy(JwtStrategyBase, 'jwt') {
-  constructor(config: ConfigService<Env, true>, private readonly users: UsersRepository) {
+  constructor(config: ConfigService<Env, true>, private readonly users: UsersRepository, private readonly tokens: TokensService) {
     super({
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
       secretOrKey: config.get('JWT_SECRET', { infer: true }),
@@ -31,10 +34,10 @@ export class JwtStrategy extends PassportStrategy(JwtStrategyBase, 'jwt') {
   }
 
   async validate(claims: AccessClaims): Promise<Principal | false> {
-    if (claims.typ !== 'access') return false;
-    const u = await this.users.findById(claims.sub);
-    if (!u || u.disabled || u.organization_id !== claims.org) return false;
-    return { kind: 'user', id: u.id, organizationId: u.organization_id, role: u.role, email: u.email, name: u.name };
+    if (claims.typ !== 'access' || typeof claims.sid !== 'string') return false;
+    const [u, alive] = await Promise.all([this.users.findById(claims.sub), this.tokens.sessionAlive(claims.sid)]);
+    if (!u || u.disabled || u.organization_id !== claims.org || !alive) return false;
+    return { kind: 'user', id: u.id, organizationId: u.organization_id, role: u.role, email: u.email, name: u.name, sessionId: claims.sid };
   }
 }
 

@@ -5,6 +5,7 @@ import argon2 from 'argon2';
 import type { Redis } from 'ioredis';
 import type { Knex } from 'knex';
 import { createHash, randomBytes, randomUUID } from 'node:crypto';
+import rateLimiterFlexible, { type RateLimiterAbstract, type RateLimiterRes } from 'rate-limiter-flexible';
 import { AuditService } from '../audit/audit.service.js';
 import { ProblemException } from '../common/problems.js';
 import type { Env } from '../config/env.js';
@@ -43,12 +44,19 @@ export interface MeView {
   actions: string[];
 }
 
+const { RateLimiterMemory, RateLimiterRedis } = rateLimiterFlexible;
+
 const BAD_CREDENTIALS = 'The e-mail or the password is not right, or the account is disabled.';
 
 /** Sign-in, refresh-token rotation (with reuse detection) and sign-out. */
 @Injectable()
 export class TokensService {
   private readonly logger = new Logger('Auth');
+
+  /** Attempts per account (known or not, so answers stay alike) within SIGNIN_LOCK_SECONDS. */
+  private readonly perAccount: RateLimiterAbstract;
+  /** Attempts per client address per minute. */
+  private readonly perAddress: RateLimiterAbstract;
 
   constructor(
     @Inject(KNEX) private readonly db: Knex,
@@ -57,24 +65,35 @@ export class TokensService {
     private readonly users: UsersRepository,
     private readonly audit: AuditService,
     private readonly config: ConfigService<Env, true>,
-  ) {}
+  ) {
+    const ns = config.get('RATE_LIMIT_NAMESPACE', { infer: true });
+    // Redis counts for every API process; if it is down, each process keeps counting in memory
+    // rather than letting guesses through unchecked (or locking everyone out).
+    const limiter = (keyPrefix: string, points: number, duration: number) =>
+      new RateLimiterRedis({ storeClient: redis, keyPrefix, points, duration, rejectIfRedisNotReady: true, insuranceLimiter: new RateLimiterMemory({ keyPrefix, points, duration }) });
+    this.perAccount = limiter(`${ns}signin-account`, config.get('SIGNIN_MAX_FAILURES', { infer: true }), config.get('SIGNIN_LOCK_SECONDS', { infer: true }));
+    this.perAddress = limiter(`${ns}signin-address`, config.get('SIGNIN_IP_LIMIT_PER_MINUTE', { infer: true }), 60);
+  }
 
+  /**
+   * Each attempt is reserved (an atomic increment in Redis) before the password is looked at, so N
+   * parallel guesses check at most the limit; a right password gives the account's reservation back.
+   */
   async signIn(email: string, password: string, origin: Origin): Promise<Session> {
-    const accountKey = `pourgate:signin-failures:${sha256(email.toLowerCase())}`;
-    const max = this.config.get('SIGNIN_MAX_FAILURES', { infer: true });
-    const failures = await this.safe(() => this.redis.get(accountKey), null);
-    if (failures !== null && Number(failures) >= max) {
-      const ttl = await this.safe(() => this.redis.ttl(accountKey), 60);
-      await this.audit.record({ organizationId: null, actorType: 'anonymous', actorLabel: email, action: 'auth.sign_in_throttled', ip: origin.ip, userAgent: origin.userAgent });
-      throw new ProblemException(429, { title: 'Too many failed sign-ins', detail: `Too many failed sign-ins for this account. Try again in ${Math.max(ttl, 1)} s.` }, { 'retry-after': String(Math.max(ttl, 1)) });
+    const accountKey = sha256(email.toLowerCase());
+    const address = await this.reserve(this.perAddress, origin.ip);
+    if (address) {
+      await this.auditThrottle(address, this.perAddress, 'address', email, origin);
+      throw this.throttled(address, 'Too many sign-in attempts from this address');
+    }
+    const account = await this.reserve(this.perAccount, accountKey);
+    if (account) {
+      await this.auditThrottle(account, this.perAccount, 'account', email, origin);
+      throw this.throttled(account, 'Too many failed sign-ins for this account');
     }
     const user = await this.users.findByEmail(email);
     const ok = user?.password_hash ? await argon2.verify(user.password_hash, password) : (await argon2.verify(await DUMMY_HASH, password), false);
     if (!user || !ok || user.disabled) {
-      await this.safe(async () => {
-        const n = await this.redis.incr(accountKey);
-        if (n === 1) await this.redis.expire(accountKey, this.config.get('SIGNIN_LOCK_SECONDS', { infer: true }));
-      }, undefined);
       await this.audit.record({
         organizationId: user?.organization_id ?? null,
         actorType: 'anonymous',
@@ -88,7 +107,7 @@ export class TokensService {
       });
       throw new ProblemException(401, { title: 'Sign-in failed', detail: BAD_CREDENTIALS });
     }
-    await this.safe(() => this.redis.del(accountKey), 0);
+    await this.perAccount.delete(accountKey).catch((e: Error) => this.logger.warn(`sign-in counter not cleared: ${e.message}`));
     await this.db('users').where({ id: user.id }).update({ last_sign_in_at: this.db.fn.now() });
     await this.audit.record({ organizationId: user.organization_id, actorType: 'user', actorId: user.id, actorLabel: user.email, action: 'auth.signed_in', ip: origin.ip, userAgent: origin.userAgent });
     return this.issue(user, randomUUID());
@@ -135,10 +154,15 @@ export class TokensService {
     };
   }
 
+  /** A new session for a person who has just proved who they are another way (an accepted invitation). */
+  startSession(user: UserRow): Promise<Session> {
+    return this.issue(user, randomUUID());
+  }
+
   private async issue(user: UserRow, familyId: string): Promise<Session> {
     const accessTtl = this.config.get('ACCESS_TOKEN_TTL_SECONDS', { infer: true });
     const refreshTtl = this.config.get('REFRESH_TOKEN_TTL_SECONDS', { infer: true });
-    const claims: AccessClaims = { sub: user.id, org: user.organization_id, role: user.role, typ: 'access' };
+    const claims: AccessClaims = { sub: user.id, org: user.organization_id, role: user.role, typ: 'access', sid: familyId };
     const accessToken = await this.jwt.signAsync(claims, { expiresIn: accessTtl, issuer: 'pourgate', audience: 'pourgate-api', algorithm: 'HS256' });
     const refreshToken = `rt_${randomBytes(32).toString('base64url')}`;
     const refreshExpires = new Date(Date.now() + refreshTtl * 1000);
@@ -156,13 +180,45 @@ export class TokensService {
     return new ProblemException(401, { title: 'Refresh refused', detail: 'The refresh token is unknown, expired, revoked or already used; sign in again.' });
   }
 
-  /** Redis helps throttle, but an outage of it must not lock everyone out. */
-  private async safe<T>(fn: () => Promise<T>, fallback: T): Promise<T> {
+  /** Takes one attempt from the limiter; answers the refusal when none is left, else null. */
+  private async reserve(limiter: RateLimiterAbstract, key: string): Promise<RateLimiterRes | null> {
     try {
-      return await fn();
+      await limiter.consume(key);
+      return null;
     } catch (e) {
-      this.logger.warn(`sign-in throttling skipped: ${(e as Error).message}`);
-      return fallback;
+      if (e instanceof Error) {
+        // neither Redis nor the in-memory fallback answered: refuse rather than check unthrottled
+        this.logger.warn(`sign-in limiter failed: ${e.message}`);
+        throw new ProblemException(503, { detail: 'Sign-in is briefly unavailable; try again in a moment.' }, { 'retry-after': '5' });
+      }
+      return e as RateLimiterRes;
     }
+  }
+
+  /** The first refused attempt of a window goes to the audit log; a flood adds no row per request. */
+  private async auditThrottle(res: RateLimiterRes, limiter: RateLimiterAbstract, limit: 'address' | 'account', email: string, origin: Origin): Promise<void> {
+    if (res.consumedPoints !== limiter.points + 1) return;
+    await this.audit.record({ organizationId: null, actorType: 'anonymous', actorLabel: email, action: 'auth.sign_in_throttled', details: { limit }, ip: origin.ip, userAgent: origin.userAgent });
+  }
+
+  private throttled(res: RateLimiterRes, title: string): ProblemException {
+    const wait = Math.max(1, Math.ceil(res.msBeforeNext / 1000));
+    return new ProblemException(429, { title, detail: `${title}. Try again in ${wait} s.` }, { 'retry-after': String(wait) });
+  }
+
+  /**
+   * Ends every other session (refresh-token family) of a person, keeping the one in use; a changed
+   * password must shut out whoever held the old one. Returns how many sessions ended.
+   */
+  async endOtherSessions(userId: string, keepFamily: string | undefined, trx: Knex | Knex.Transaction = this.db): Promise<number> {
+    const q = trx('refresh_tokens').where({ user_id: userId }).whereNull('revoked_at');
+    if (keepFamily) q.whereNot({ family_id: keepFamily });
+    const ended = await q.update({ revoked_at: trx.fn.now() }).returning('family_id');
+    return new Set(ended.map((r: { family_id: string }) => r.family_id)).size;
+  }
+
+  /** Whether a session (refresh-token family) is still alive: signed out or ended sessions are not. */
+  async sessionAlive(familyId: string): Promise<boolean> {
+    return Boolean(await this.db('refresh_tokens').where({ family_id: familyId }).whereNull('revoked_at').where('expires_at', '>', this.db.fn.now()).first('id'));
   }
 }

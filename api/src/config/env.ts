@@ -10,7 +10,7 @@ export const envSchema = {
     NODE_ENV: { enum: ['development', 'test', 'production'], default: 'development' },
     HOST: { type: 'string', default: '127.0.0.1' },
     PORT: { type: 'integer', minimum: 1, maximum: 65535, default: 3000 },
-    PUBLIC_URL: { type: 'string', pattern: '^https?://', default: 'http://127.0.0.1:3000' },
+    PUBLIC_URL: { type: 'string', pattern: '^https?://', description: 'Base of links in mail; unset: the address the API listens on (HOST, PORT)' },
     DATABASE_URL: { type: 'string', pattern: '^postgres(ql)?://' },
     DATABASE_POOL_MAX: { type: 'integer', minimum: 1, maximum: 200, default: 10 },
     REDIS_URL: { type: 'string', pattern: '^rediss?://' },
@@ -30,6 +30,7 @@ export const envSchema = {
     SIGNIN_IP_LIMIT_PER_MINUTE: { type: 'integer', minimum: 1, default: 30 },
     RATE_LIMIT_NAMESPACE: { type: 'string', default: 'pourgate-rl:' },
     SECRETS_KEY: { type: 'string', minLength: 16, default: 'development-only-secrets-key' },
+    SECRETS_KEY_PREVIOUS: { type: 'string', default: '', description: 'Former SECRETS_KEY values (comma-separated) whose sealed secrets must still open after a rotation' },
     WEBHOOK_ALLOWED_HOSTS: { type: 'string', default: '' },
     WEBHOOK_RETRY_SCHEDULE: { type: 'string', pattern: '^\\s*\\d+(\\.\\d+)?(\\s*,\\s*\\d+(\\.\\d+)?)*\\s*$', default: '0,5,300,1800,7200,18000,36000,50400,72000,86400' },
     WEBHOOK_TIMEOUT_MS: { type: 'integer', minimum: 100, maximum: 60000, default: 15000 },
@@ -73,6 +74,7 @@ export interface Env {
   SIGNIN_IP_LIMIT_PER_MINUTE: number;
   RATE_LIMIT_NAMESPACE: string;
   SECRETS_KEY: string;
+  SECRETS_KEY_PREVIOUS: string;
   WEBHOOK_ALLOWED_HOSTS: string;
   WEBHOOK_RETRY_SCHEDULE: string;
   WEBHOOK_TIMEOUT_MS: number;
@@ -112,5 +114,38 @@ export function validateEnv(raw: Record<string, unknown>): Env {
   if (env.NODE_ENV === 'production' && env.SECRETS_KEY === envSchema.properties.SECRETS_KEY.default) {
     throw new Error('Invalid configuration:\n  SECRETS_KEY: must be set to a secret of your own in production');
   }
+  if (env.NODE_ENV === 'production' && secretsKeysPrevious(env.SECRETS_KEY_PREVIOUS).includes(envSchema.properties.SECRETS_KEY.default)) {
+    throw new Error('Invalid configuration:\n  SECRETS_KEY_PREVIOUS: must not hold the development key in production');
+  }
+  // links in mail point where the API listens unless told otherwise (a proxy, a domain name)
+  env.PUBLIC_URL ??= `http://${linkHost(env.HOST)}:${env.PORT}`;
   return { ...raw, ...env } as Env;
+}
+
+/** SECRETS_KEY_PREVIOUS as a list. */
+export function secretsKeysPrevious(spec: string | undefined): string[] {
+  return (spec ?? '').split(',').map((k) => k.trim()).filter(Boolean);
+}
+
+/** A host a browser can open: a wildcard listen address becomes loopback; IPv6 goes in brackets. */
+function linkHost(host: string): string {
+  if (host === '0.0.0.0' || host === '::' || host === '') return '127.0.0.1';
+  return host.includes(':') ? `[${host}]` : host;
+}
+
+/**
+ * Why links in mail would not reach this API, or null when they do: PUBLIC_URL names another
+ * port (or a loopback host while the API listens elsewhere). Worth a warning in development, where
+ * nothing sits in between; behind a proxy in production a difference is normal.
+ */
+export function publicUrlMismatch(env: Pick<Env, 'PUBLIC_URL' | 'HOST' | 'PORT'>): string | null {
+  let url: URL;
+  try {
+    url = new URL(env.PUBLIC_URL);
+  } catch {
+    return `PUBLIC_URL ${env.PUBLIC_URL} is not a URL`;
+  }
+  const port = Number(url.port || (url.protocol === 'https:' ? 443 : 80));
+  if (port !== env.PORT) return `PUBLIC_URL ${env.PUBLIC_URL} points at port ${port}, but the API listens on ${env.HOST}:${env.PORT}; links in mail will not reach it`;
+  return null;
 }

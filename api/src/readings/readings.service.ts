@@ -3,7 +3,7 @@ import { Inject, Injectable, Logger } from '@nestjs/common';
 import type { Queue } from 'bull';
 import type { Knex } from 'knex';
 import { AuditService } from '../audit/audit.service.js';
-import { actorOf, type RequestContext } from '../auth/principal.js';
+import { actorOf, confinedDevice, type RequestContext } from '../auth/principal.js';
 import { SYSTEM_ACTOR, moveBatch } from '../batches/batch-transitions.js';
 import { toSI, UnitError } from '@pourgate/batching';
 import type { ListQuery } from '../common/lists/list-query.js';
@@ -202,13 +202,17 @@ export class ReadingsService {
   }
 
   async list(c: RequestContext, q: ListQuery) {
-    const { rows, total } = await this.repo.list(c.principal.organizationId, q);
+    // a device key lists its own device's readings only (its filter cannot widen that)
+    const device = confinedDevice(c.principal);
+    if (device === null) return { rows: [], total: 0 };
+    const { rows, total } = await this.repo.list(c.principal.organizationId, device === undefined ? q : { ...q, filter: { ...q.filter, deviceId: device } });
     return { rows: rows.map(readingView), total };
   }
 
   async get(c: RequestContext, id: string) {
     const r = await this.repo.find(c.principal.organizationId, id);
-    if (!r) throw new ProblemException(404, { detail: 'No reading with that id in your organization.' });
+    const device = confinedDevice(c.principal);
+    if (!r || (device !== undefined && r.device_id !== device)) throw new ProblemException(404, { detail: 'No reading with that id in your organization.' });
     return readingView(r);
   }
 

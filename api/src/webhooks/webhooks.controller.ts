@@ -2,6 +2,7 @@ import { Controller, Delete, Get, HttpCode, Post, Put, Query, Res } from '@nestj
 import { ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { FastifyReply } from 'fastify';
 import { Caller, type RequestContext } from '../auth/principal.js';
+import { NoStore } from '../auth/no-store.decorator.js';
 import { Requires } from '../auth/requires.decorator.js';
 import { IdParam } from '../common/decorators/uuid-param.js';
 import { ListRoute, parseListQuery, setContentRange } from '../common/lists/list-query.js';
@@ -35,6 +36,7 @@ export class WebhookEndpointsController {
 
   @Post()
   @Requires('webhooks:manage')
+  @NoStore()
   @ApiOperation({ summary: 'Add an endpoint', description: 'The response carries `secret` (Standard Webhooks `whsec_…`), shown this once. URLs must be http(s) and resolve to public addresses.' })
   @Responds(201, 'webhook-endpoint.created', { description: 'The endpoint with its signing secret' })
   create(@Caller() c: RequestContext, @SchemaBody('webhook-endpoint.create') body: EndpointInput) {
@@ -59,6 +61,7 @@ export class WebhookEndpointsController {
 
   @Post(':id/rotate-secret')
   @Requires('webhooks:manage')
+  @NoStore()
   @ApiOperation({ summary: 'New signing secret; both sign during the overlap', description: 'During the overlap every delivery carries two signatures in webhook-signature, so receivers can switch at their pace.' })
   @Responds(201, 'webhook-endpoint.created', { description: 'The endpoint with its new signing secret' })
   rotate(@Caller() c: RequestContext, @IdParam() id: string, @SchemaBody('webhook-endpoint.rotate') body: { overlapSeconds: number }) {
