@@ -5,8 +5,8 @@ export interface S3Settings {
   endpoint: string;
   bucket: string;
   region: string;
-  accessKeyId: string;
-  secretAccessKey: string;
+  /** Static keys, or null for the SDK's default credential chain. */
+  credentials: { accessKeyId: string; secretAccessKey: string } | null;
   forcePathStyle: boolean;
 }
 
@@ -15,14 +15,14 @@ export interface S3Settings {
  * processes. Development and tests point S3_ENDPOINT at the stand-in in fakes/object-store.ts.
  */
 export class S3DocumentStore implements DocumentStore {
-  private readonly s3: S3Client;
+  readonly s3: S3Client;
 
   constructor(private readonly cfg: S3Settings) {
     this.s3 = new S3Client({
       endpoint: cfg.endpoint,
       region: cfg.region,
       forcePathStyle: cfg.forcePathStyle,
-      credentials: { accessKeyId: cfg.accessKeyId, secretAccessKey: cfg.secretAccessKey },
+      ...(cfg.credentials ? { credentials: cfg.credentials } : {}),
       // plain PUTs with Content-Length: what every S3-compatible store understands
       requestChecksumCalculation: 'WHEN_REQUIRED',
       responseChecksumValidation: 'WHEN_REQUIRED',

@@ -14,10 +14,39 @@ export class SsrfError extends Error {
   }
 }
 
+const v4 = (b: number[]) => new ipaddr.IPv4(b);
+
+/**
+ * IPv6 forms that carry an IPv4 address, with where its four bytes sit: a stack or a gateway may
+ * turn them into the IPv4 address, so `[::127.0.0.1]` or `[64:ff9b::a9fe:a9fe]` is only as public
+ * as the address inside.
+ */
+function embeddedIPv4(a: ipaddr.IPv6): { form: string; inner: ipaddr.IPv4 } | null {
+  const b = a.toByteArray();
+  const zero = (from: number, to: number) => b.slice(from, to).every((x) => x === 0);
+  if (zero(0, 10) && b[10] === 0xff && b[11] === 0xff) return { form: 'IPv4-mapped', inner: v4(b.slice(12)) };
+  if (zero(0, 8) && b[8] === 0xff && b[9] === 0xff && zero(10, 12)) return { form: 'IPv4-translated', inner: v4(b.slice(12)) };
+  // ::/96, IPv4-compatible (deprecated by RFC 4291); :: and ::1 are themselves
+  if (zero(0, 12) && !(zero(12, 15) && b[15] <= 1)) return { form: 'IPv4-compatible', inner: v4(b.slice(12)) };
+  if (a.match(ipaddr.IPv6.parse('64:ff9b::'), 96)) return { form: 'NAT64', inner: v4(b.slice(12)) };
+  if (a.match(ipaddr.IPv6.parse('64:ff9b:1::'), 48)) return { form: 'NAT64 (local use)', inner: v4(b.slice(12)) };
+  if (a.match(ipaddr.IPv6.parse('2002::'), 16)) return { form: '6to4', inner: v4(b.slice(2, 6)) };
+  // Teredo: the client's address is the last 32 bits, inverted
+  if (a.match(ipaddr.IPv6.parse('2001::'), 32)) return { form: 'Teredo', inner: v4(b.slice(12).map((x) => x ^ 0xff)) };
+  return null;
+}
+
+/** The address's range as ipaddr.js names it; for an IPv6 form carrying an IPv4 address, the inner one's. */
 export function addressRange(address: string): string {
-  let addr = ipaddr.parse(address);
-  if (addr.kind() === 'ipv6' && (addr as ipaddr.IPv6).isIPv4MappedAddress()) addr = (addr as ipaddr.IPv6).toIPv4Address();
-  return addr.range();
+  const addr = ipaddr.parse(address);
+  if (addr.kind() === 'ipv4') return addr.range();
+  const a = addr as ipaddr.IPv6;
+  const embedded = embeddedIPv4(a);
+  if (!embedded) return a.range();
+  const inner = embedded.inner.range();
+  if (embedded.form === 'IPv4-mapped') return inner;
+  // a public address inside a translation or tunnel form: refused all the same (reach it directly)
+  return inner === 'unicast' ? `${a.range() === 'unicast' ? 'ipv4Compatible' : a.range()}` : `${inner}, ${embedded.form}`;
 }
 
 /** `unicast` is the only range ipaddr.js gives public addresses; everything else is refused. */

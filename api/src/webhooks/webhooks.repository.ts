@@ -11,7 +11,10 @@ export interface EndpointRow {
   enabled: boolean;
   disabled_reason: string | null;
   secret_enc: string;
+  /** Version of the key that sealed secret_enc (null: sealed before keys were versioned). */
+  secret_key_version: string | null;
   previous_secret_enc: string | null;
+  previous_secret_key_version: string | null;
   previous_secret_until: Date | null;
   created_by: string | null;
   created_at: Date;

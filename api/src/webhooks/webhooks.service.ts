@@ -13,6 +13,7 @@ import type { Env } from '../config/env.js';
 import { KNEX } from '../database/database.module.js';
 import { MailService } from '../mail/mail.service.js';
 import { SecretBox, newWebhookSecret } from './secret-box.js';
+import { secretsKeysPrevious } from '../config/env.js';
 import { AllowList, checkWebhookUrl } from './ssrf-guard.js';
 import { sendWebhook, type SendResult } from './webhook-sender.js';
 import { deliveryJobId, WEBHOOK_QUEUE } from './webhooks.constants.js';
@@ -57,7 +58,7 @@ export class WebhooksService {
     private readonly config: ConfigService<Env, true>,
     @InjectQueue(WEBHOOK_QUEUE) private readonly queue: Queue,
   ) {
-    this.box = new SecretBox(config.get('SECRETS_KEY', { infer: true }));
+    this.box = new SecretBox(config.get('SECRETS_KEY', { infer: true }), secretsKeysPrevious(config.get('SECRETS_KEY_PREVIOUS', { infer: true })));
     this.allow = new AllowList(config.get('WEBHOOK_ALLOWED_HOSTS', { infer: true }));
   }
 
@@ -82,8 +83,9 @@ export class WebhooksService {
   async createEndpoint(c: RequestContext, body: EndpointInput) {
     await this.checkUrl(body.url);
     const secret = newWebhookSecret();
+    const sealed = this.box.seal(secret);
     const id = await this.db.transaction(async (trx) => {
-      const [row] = await trx('webhook_endpoints').insert({ organization_id: c.principal.organizationId, url: body.url, description: body.description ?? '', event_types: body.eventTypes ?? [], enabled: body.enabled ?? true, secret_enc: this.box.seal(secret), created_by: c.principal.kind === 'user' ? c.principal.id : null }).returning('id');
+      const [row] = await trx('webhook_endpoints').insert({ organization_id: c.principal.organizationId, url: body.url, description: body.description ?? '', event_types: body.eventTypes ?? [], enabled: body.enabled ?? true, secret_enc: sealed.sealed, secret_key_version: sealed.version, created_by: c.principal.kind === 'user' ? c.principal.id : null }).returning('id');
       await this.audit.record({ organizationId: c.principal.organizationId, ...actorOf(c.principal), action: 'webhook_endpoint.created', targetType: 'webhook_endpoint', targetId: row.id, details: { url: body.url }, ip: c.ip, userAgent: c.userAgent }, trx);
       return row.id as string;
     });
@@ -126,8 +128,9 @@ export class WebhooksService {
     const cur = await this.repo.endpoint(c.principal.organizationId, id);
     if (!cur) throw notFound('webhook endpoint');
     const secret = newWebhookSecret();
+    const sealed = this.box.seal(secret);
     await this.db.transaction(async (trx) => {
-      await trx('webhook_endpoints').where({ id }).update({ secret_enc: this.box.seal(secret), previous_secret_enc: cur.secret_enc, previous_secret_until: new Date(Date.now() + overlapSeconds * 1000) });
+      await trx('webhook_endpoints').where({ id }).update({ secret_enc: sealed.sealed, secret_key_version: sealed.version, previous_secret_enc: cur.secret_enc, previous_secret_key_version: cur.secret_key_version, previous_secret_until: new Date(Date.now() + overlapSeconds * 1000) });
       await this.audit.record({ organizationId: c.principal.organizationId, ...actorOf(c.principal), action: 'webhook_endpoint.secret_rotated', targetType: 'webhook_endpoint', targetId: id, details: { overlapSeconds }, ip: c.ip, userAgent: c.userAgent }, trx);
     });
     return { ...(await this.getEndpoint(c, id)), secret };
@@ -135,8 +138,8 @@ export class WebhooksService {
 
   /** The secrets that sign right now: the current one, and the previous during an overlap. */
   signingSecrets(e: EndpointRow): string[] {
-    const out = [this.box.open(e.secret_enc)];
-    if (e.previous_secret_enc && e.previous_secret_until && e.previous_secret_until > new Date()) out.push(this.box.open(e.previous_secret_enc));
+    const out = [this.box.open(e.secret_enc, e.secret_key_version)];
+    if (e.previous_secret_enc && e.previous_secret_until && e.previous_secret_until > new Date()) out.push(this.box.open(e.previous_secret_enc, e.previous_secret_key_version));
     return out;
   }
 
