@@ -39,28 +39,6 @@ export function refusedScopes(issuer: Role, kind: 'device' | 'integration', scop
   return [...new Set(scopes)].filter((s) => !grantable.includes(s) || !forKind.includes(s));
 }
 
-/** What a device key (a scale, a logger) may ever hold: post readings, read targets and devices. */
-export const DEVICE_KEY_SCOPES = ['readings:write', 'targets:read', 'devices:read'] as const satisfies readonly ApiKeyScope[];
-
-/**
- * The scopes each role may put on a key it issues. A key never holds more than its issuer may
- * grant: admins set up the organization's integrations (an ERP key posts work orders), integrators
- * set up devices and so grant the device scopes only; the other roles issue no keys.
- */
-export const KEY_SCOPE_GRANTS = {
-  admin: API_KEY_SCOPES,
-  integrator: DEVICE_KEY_SCOPES,
-  engineer: [],
-  viewer: [],
-} as const satisfies Record<Role, readonly ApiKeyScope[]>;
-
-/** The scopes of a requested key that its issuer may not grant, or that its kind may not hold. */
-export function refusedScopes(issuer: Role, kind: 'device' | 'integration', scopes: readonly string[]): string[] {
-  const grantable = KEY_SCOPE_GRANTS[issuer] as readonly string[];
-  const forKind = (kind === 'device' ? DEVICE_KEY_SCOPES : API_KEY_SCOPES) as readonly string[];
-  return [...new Set(scopes)].filter((s) => !grantable.includes(s) || !forKind.includes(s));
-}
-
 const everyone = ROLES;
 
 export const ACTIONS = {
