@@ -46,7 +46,8 @@ export default tseslint.config(
           paths: [{ name: 'knex', message: 'Controllers translate HTTP only: queries belong in the module’s repository.' }],
           patterns: [
             { group: ['**/database/database.module.js'], message: 'Controllers translate HTTP only: queries belong in the module’s repository.' },
-            { group: ['./*.repository.js', '../*/*.repository.js'], message: 'Controllers call services; repositories are the services’ business.' },
+            // a list's spec (its sortable fields and filters) may be read from the repository that applies it
+            { group: ['./*.repository.js', '../*/*.repository.js'], importNamePattern: '^(?!\\w*[Ss]pec$)', message: 'Controllers call services; repositories are the services’ business (a list spec excepted).' },
           ],
         },
       ],
