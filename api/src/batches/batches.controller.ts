@@ -1,14 +1,12 @@
-import { Controller, Get, Inject, Post, Query, Res } from '@nestjs/common';
+import { Controller, Get, Post, Query, Res } from '@nestjs/common';
 import { ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { FastifyReply } from 'fastify';
-import type { Knex } from 'knex';
 import { Caller, type RequestContext } from '../auth/principal.js';
 import { Requires } from '../auth/requires.decorator.js';
 import { IdParam } from '../common/decorators/uuid-param.js';
 import { ListRoute, parseListQuery, setContentRange } from '../common/lists/list-query.js';
 import { SchemaBody } from '../common/schemas/schema.pipe.js';
-import { KNEX } from '../database/database.module.js';
-import { unitSystemFor } from '../shop/unit-system.js';
+import { DisplayUnitsService } from '../users/display-units.service.js';
 import { UNITS_QUERY } from '../targets/targets.controller.js';
 import { type BatchInput, BatchesService, batchesListSpec, transitionsListSpec } from './batches.service.js';
 import { Responds } from '../common/schemas/responds.decorator.js';
@@ -16,7 +14,7 @@ import { Responds } from '../common/schemas/responds.decorator.js';
 @ApiTags('batches')
 @Controller('batches')
 export class BatchesController {
-  constructor(private readonly batches: BatchesService, @Inject(KNEX) private readonly db: Knex) {}
+  constructor(private readonly batches: BatchesService, private readonly displayUnits: DisplayUnitsService) {}
 
   @Get()
   @Requires('shop:read')
@@ -43,7 +41,7 @@ export class BatchesController {
   @ApiOperation({ summary: 'The targets stored with a batch', description: "Exactly as computed when the batch was planned (the system revision and mold volume of that moment), in the caller's unit system with SI alongside." })
   @Responds(200, 'batch-targets.view')
   async targets(@Caller() c: RequestContext, @IdParam() id: string, @Query('units') units?: string) {
-    return this.batches.storedTargets(c, id, await unitSystemFor(this.db, c, units));
+    return this.batches.storedTargets(c, id, await this.displayUnits.resolve(c, units));
   }
 
   @Get(':id/transitions')

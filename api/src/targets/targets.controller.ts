@@ -1,11 +1,9 @@
-import { Controller, HttpCode, Inject, Post, Query } from '@nestjs/common';
+import { Controller, HttpCode, Post, Query } from '@nestjs/common';
 import { ApiOperation, ApiQuery, ApiTags } from '@nestjs/swagger';
-import type { Knex } from 'knex';
 import { Caller, type RequestContext } from '../auth/principal.js';
 import { Requires } from '../auth/requires.decorator.js';
 import { SchemaBody } from '../common/schemas/schema.pipe.js';
-import { KNEX } from '../database/database.module.js';
-import { unitSystemFor } from '../shop/unit-system.js';
+import { DisplayUnitsService } from '../users/display-units.service.js';
 import { type MoldSpec, type OptionsInput, type SystemSpec, TargetsService } from './targets.service.js';
 import { Responds } from '../common/schemas/responds.decorator.js';
 
@@ -21,7 +19,7 @@ export const UNITS_QUERY = ApiQuery({ name: 'units', required: false, enum: ['me
 @ApiTags('targets')
 @Controller('targets')
 export class TargetsController {
-  constructor(private readonly targets: TargetsService, @Inject(KNEX) private readonly db: Knex) {}
+  constructor(private readonly targets: TargetsService, private readonly displayUnits: DisplayUnitsService) {}
 
   @Post('preview')
   @HttpCode(200)
@@ -33,7 +31,7 @@ export class TargetsController {
   })
   @Responds(200, 'targets.view')
   async preview(@Caller() c: RequestContext, @SchemaBody('targets.preview') body: PreviewBody, @Query('units') units?: string) {
-    const system = await unitSystemFor(this.db, c, units);
+    const system = await this.displayUnits.resolve(c, units);
     const resolved = await this.targets.resolve(c.principal.organizationId, {
       system: body.system,
       mold: body.mold,

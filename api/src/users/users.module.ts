@@ -1,9 +1,10 @@
 import { Global, Module } from '@nestjs/common';
+import { DisplayUnitsService } from './display-units.service.js';
 import { InvitationsController, UsersController } from './users.controller.js';
 import { PublicUrlCheck } from './public-url.check.js';
 import { UsersRepository } from './users.repository.js';
 import { UsersService } from './users.service.js';
 
 @Global()
-@Module({ controllers: [UsersController, InvitationsController], providers: [UsersRepository, UsersService, PublicUrlCheck], exports: [UsersRepository, UsersService] })
+@Module({ controllers: [UsersController, InvitationsController], providers: [UsersRepository, UsersService, PublicUrlCheck, DisplayUnitsService], exports: [UsersRepository, UsersService, DisplayUnitsService] })
 export class UsersModule {}

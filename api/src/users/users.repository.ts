@@ -60,6 +60,12 @@ export class UsersRepository {
     return this.db<UserRow>('users').where({ id, organization_id: orgId }).first();
   }
 
+  /** The organization's default unit system (what API keys see). */
+  async organizationUnitSystem(orgId: string): Promise<'metric' | 'imperial' | undefined> {
+    const o = await this.db('organizations').where({ id: orgId }).first('unit_system');
+    return o?.unit_system;
+  }
+
   countActiveAdmins(orgId: string, trx?: Knex.Transaction): Promise<number> {
     return (trx ?? this.db)('users')
       .where({ organization_id: orgId, role: 'admin', disabled: false })
