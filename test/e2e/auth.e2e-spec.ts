@@ -91,7 +91,7 @@ describe('invitations by e-mail', () => {
 
     const accept = await t.http.post('/v1/invitations/accept').send({ token, name: 'New Comer', password: 'a-long-password-1' });
     expect(accept.status).toBe(200);
-    expect(accept.body).toEqual({ email, role: 'engineer' });
+    expect(accept.body).toMatchObject({ email, role: 'engineer', session: { user: { email, role: 'engineer' } } });
     const again = await t.http.post('/v1/invitations/accept').send({ token, name: 'Someone Else', password: 'another-password-2' });
     expect(again.status).toBe(410);
     const s = await signIn(t.http, email, 'a-long-password-1');

@@ -25,6 +25,8 @@ export class CsvFileError extends Error {
 
 const TRUE = new Set(['true', '1', 'yes', 'y']);
 const FALSE = new Set(['false', '0', 'no', 'n']);
+// the ids are PostgreSQL uuids: a malformed one is this row's fault, and must never reach a query
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** Header check and row mapping. Throws CsvFileError when the file as a whole cannot be read. */
 export function parseReadingsCsv(text: string): { rows: CsvRow[]; bad: BadRow[] } {
@@ -56,6 +58,10 @@ export function parseReadingsCsv(text: string): { rows: CsvRow[]; bad: BadRow[] 
     const errors: BadRow['errors'] = [];
     if (record.length !== header.length) errors.push({ field: 'row', detail: `has ${record.length} cells; the header has ${header.length}` });
     for (const name of CSV_REQUIRED) if (cell(name) === undefined) errors.push({ field: name, detail: 'is empty' });
+    for (const name of ['batch_id', 'device_id'] as const) {
+      const id = cell(name);
+      if (id !== undefined && !UUID.test(id)) errors.push({ field: name, detail: `"${id.slice(0, 60)}" is not an id (a UUID such as 6f1c2d3e-0000-4000-8000-000000000001)` });
+    }
     const rawValue = cell('value');
     const value = rawValue === undefined ? undefined : Number(rawValue);
     if (rawValue !== undefined && !Number.isFinite(value)) errors.push({ field: 'value', detail: `"${rawValue}" is not a number` });

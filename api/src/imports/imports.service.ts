@@ -146,7 +146,24 @@ export class ImportsService {
    * The job: rows in chunks, each checked with the readings' own rules and the good ones ingested
    * (idempotent per device and client reading id, so a job run again after a crash adds nothing).
    */
-  async run(id: string): Promise<void> {
+  async run(id: string, opts: { lastAttempt?: boolean } = {}): Promise<void> {
+    try {
+      await this.runOnce(id);
+    } catch (e) {
+      // every import ends: a job that fails on its last attempt marks the import failed with the reason
+      // (earlier attempts rethrow so the queue retries what may be passing trouble, a database restart)
+      if (!opts.lastAttempt) throw e;
+      this.log.error(`import ${id} failed: ${(e as Error).message}`);
+      await this.fail(id, `The import stopped before the end (${plainReason(e)}); rows already imported are kept, upload the file again to finish it.`);
+    }
+  }
+
+  /** Marks a queued or running import failed, with a reason a person can act on. */
+  async fail(id: string, reason: string): Promise<void> {
+    await this.db('reading_imports').where({ id }).whereIn('status', ['queued', 'running']).update({ status: 'failed', error: reason.slice(0, 1000), finished_at: this.db.fn.now() });
+  }
+
+  private async runOnce(id: string): Promise<void> {
     const imp = await this.db('reading_imports').where({ id }).first();
     if (!imp || imp.status === 'done' || imp.status === 'failed') return;
     await this.db('reading_imports').where({ id }).update({ status: 'running', started_at: this.db.fn.now(), processed: 0, imported: 0, duplicates: 0, bad_rows: '[]' });
@@ -170,13 +187,15 @@ export class ImportsService {
       chunk.forEach((r, i) => {
         for (const e of registry.validate('reading.create', r.input)) add(i, e.pointer.split('/')[1] || 'row', e.detail);
       });
-      const { rows, errors } = await this.readings.check(c, chunk.map((r) => r.input), (i) => `/${i}`);
+      // only rows the schema accepts go on to the readings' checks (which query by their ids)
+      const valid = chunk.map((_, i) => i).filter((i) => !rowErrors.has(i));
+      const { rows, errors } = await this.readings.check(c, valid.map((i) => chunk[i]!.input), (k) => `/${valid[k]}`);
       for (const e of errors) {
         const [, index, field] = e.pointer.split('/');
         const i = Number(index);
         if (!rowErrors.get(i)?.some((x) => x.field === columnOf(field ?? 'row'))) add(i, field ?? 'row', e.detail);
       }
-      const good = rows.filter((_, i) => !rowErrors.has(i));
+      const good = rows.filter((_, k) => !rowErrors.has(valid[k]!));
       const stored = good.length ? await this.readings.store(good) : [];
       imported += stored.filter((s) => !s.replayed).length;
       duplicates += stored.filter((s) => s.replayed).length;
@@ -194,6 +213,14 @@ export class ImportsService {
     for (const { id } of stale) if (await this.enqueue(id)) n++;
     return n;
   }
+}
+
+/** An error in words for the import's page: no stack, no SQL. */
+function plainReason(e: unknown): string {
+  const code = (e as { code?: string }).code;
+  if (code === 'ECONNREFUSED' || code === '57P01' || code === '57P03') return 'the database was not reachable';
+  if (typeof code === 'string' && /^[0-9A-Z]{5}$/.test(code)) return 'the database refused a row';
+  return 'an unexpected error';
 }
 
 function safeName(name: string | undefined): string | null {

@@ -85,10 +85,19 @@ export class InvitationsController {
     return this.users.revokeInvitation(c, id);
   }
 
+  @Post('lookup')
+  @Public()
+  @HttpCode(200)
+  @ApiOperation({ summary: 'What an invitation link offers', description: 'The shop, the role, the invited address and the name the admin typed, for the acceptance page. The token goes in the body (never in a URL, so it stays out of logs); a used, revoked or expired link answers 410.' })
+  @Responds(200, 'invitation.preview')
+  lookup(@SchemaBody('invitation.lookup') body: { token: string }) {
+    return this.users.lookupInvitation(body.token);
+  }
+
   @Post('accept')
   @Public()
   @HttpCode(200)
-  @ApiOperation({ summary: 'Accept an invitation: set name and password', description: 'Works once; a used, revoked or expired link answers 410.' })
+  @ApiOperation({ summary: 'Accept an invitation: set name and password', description: 'Works once; a used, revoked or expired link answers 410. The answer carries a session: the person is signed in.' })
   @Responds(200, 'invitation.accepted')
   accept(@SchemaBody('invitation.accept') body: { token: string; name: string; password: string }, @Origin() origin: { ip: string; userAgent?: string }) {
     return this.users.acceptInvitation(body, origin);

@@ -2,6 +2,7 @@ import http from 'node:http';
 import https from 'node:https';
 import { Webhook } from 'standardwebhooks';
 import net from 'node:net';
+import { plainSendError } from './plain-reason.js';
 import { addressRange, AllowList, guardedLookup, isPublicAddress, SsrfError } from './ssrf-guard.js';
 
 export interface SendResult {
@@ -57,7 +58,10 @@ export function sendWebhook(opts: { url: string; id: string; body: string; secre
       res.on('error', (e) => done({ statusCode: res.statusCode ?? null, error: e.message }));
     });
     req.on('timeout', () => req.destroy(new Error(`no answer within ${opts.timeoutMs} ms`)));
-    req.on('error', (e) => done({ statusCode: null, error: e.message, ssrf: e instanceof SsrfError || (e as { cause?: unknown }).cause instanceof SsrfError }));
+    req.on('error', (e) => {
+      const ssrf = e instanceof SsrfError || (e as { cause?: unknown }).cause instanceof SsrfError;
+      done({ statusCode: null, error: ssrf ? e.message : plainSendError(e, url), ssrf });
+    });
     req.end(opts.body);
   });
 }
