@@ -7,7 +7,7 @@ import { refreshTokenLapsed, storageTokenStore } from './dataProvider/session';
 export const API_BASE = '/v1';
 
 const store = storageTokenStore(window.sessionStorage);
-const http = createHttpClient({ store, refreshUrl: `${API_BASE}/auth/refresh` });
+export const http = createHttpClient({ store, refreshUrl: `${API_BASE}/auth/refresh` });
 
 export const dataProvider = createDataProvider(http, API_BASE);
 export const authProvider = createAuthProvider({ http, store, apiBase: API_BASE });

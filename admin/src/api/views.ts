@@ -3,7 +3,8 @@
  * declares no response shape of its own: when a view changes, the typecheck shows every screen it
  * touches.
  */
-import type { components, operations } from '@pourgate/sdk';
+// the generated file alone: the SDK's runtime client is not the console's concern
+import type { components, operations } from '@pourgate/sdk/src/schema';
 
 type Schemas = components['schemas'];
 

@@ -27,6 +27,32 @@ export function useBatchTargets(id: string | undefined) {
   return useGetOne<TargetsView & { id: string }>(`batches/${id}`, { id: 'targets' }, { enabled: !!id });
 }
 
+/** What the batch still needs before release, as the API decides it (GET /v1/batches/{id}/release-check). */
+interface ReleaseCheck {
+  ready: boolean;
+  missing: { item: string; problem: string; message: string }[];
+  openRejections: number;
+}
+function useReleaseCheck(id: string | undefined, enabled: boolean) {
+  return useGetOne<ReleaseCheck & { id: string }>(`batches/${id}`, { id: 'release-check' }, { enabled: !!id && enabled });
+}
+
+/** The missing items, listed before the release button is pressed. */
+function MissingBeforeRelease({ check }: { check: ReleaseCheck | undefined }) {
+  if (!check || check.ready) return null;
+  return (
+    <Alert severity="info" sx={{ mb: 2 }} data-testid="release-missing">
+      <Typography variant="body2" sx={{ fontWeight: 600 }}>Before this batch can be released:</Typography>
+      <Box component="ul" sx={{ m: 0, pl: 2.5 }}>
+        {check.missing.map((m) => (
+          <li key={m.item}>{m.message}</li>
+        ))}
+        {check.openRejections > 0 ? <li>{check.openRejections} rejected reading(s) to waive.</li> : null}
+      </Box>
+    </Alert>
+  );
+}
+
 export function useBatchReadings(id: string | undefined) {
   return useGetList<Reading>('readings', { filter: { batchId: id }, pagination: { page: 1, perPage: 500 }, sort: { field: 'receivedAt', order: 'ASC' } }, { enabled: !!id });
 }
@@ -146,7 +172,7 @@ function ReviewList({ readings }: { readings: Reading[] }) {
   );
 }
 
-function ReleaseButton({ batch, openRejections, onDone }: { batch: Batch; openRejections: number; onDone: () => void }) {
+function ReleaseButton({ batch, openRejections, ready, onDone }: { batch: Batch; openRejections: number; ready: boolean; onDone: () => void }) {
   const dataProvider = useDataProvider();
   const notify = useNotify();
   const [confirming, setConfirming] = useState(false);
@@ -171,8 +197,8 @@ function ReleaseButton({ batch, openRejections, onDone }: { batch: Batch; openRe
         color="success"
         startIcon={<TaskAltOutlined />}
         onClick={() => setConfirming(true)}
-        disabled={openRejections > 0}
-        title={openRejections > 0 ? 'Every rejected reading must be waived first' : undefined}
+        disabled={openRejections > 0 || !ready}
+        title={openRejections > 0 ? 'Every rejected reading must be waived first' : !ready ? 'Something is still missing: see the list above' : undefined}
         data-testid="release-batch"
       >
         Release batch
@@ -205,6 +231,8 @@ function BatchShow() {
   const { data: transitions = [] } = useGetList<Transition>(`batches/${batch?.id}/transitions`, { pagination: { page: 1, perPage: 200 }, sort: { field: 'at', order: 'ASC' } }, { enabled: !!batch });
   const canReview = useHolds('readings:review');
   const refresh = useRefresh();
+  const inReview = !!batch && ['weighing', 'mixed', 'curing', 'on_hold'].includes(batch.state);
+  const { data: releaseCheck } = useReleaseCheck(batch?.id, inReview);
 
   if (error) return <Alert severity="error">{(error as Error).message}</Alert>;
   if (isPending || !batch) return <Skeleton variant="rounded" height={320} sx={{ mt: 2 }} />;
@@ -242,9 +270,10 @@ function BatchShow() {
           <Button component={Link} to={`/batches/${batch.id}/pour-sheet`} variant="outlined" startIcon={<PrintOutlined />} data-testid="open-pour-sheet">
             Pour sheet
           </Button>
-          {releasable ? <ReleaseButton batch={batch} openRejections={open.length} onDone={refresh} /> : null}
+          {releasable ? <ReleaseButton batch={batch} openRejections={open.length} ready={releaseCheck?.ready ?? false} onDone={refresh} /> : null}
         </Box>
       </Box>
+      {releasable ? <MissingBeforeRelease check={releaseCheck} /> : null}
 
       <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', lg: 'minmax(0, 1.75fr) minmax(300px, 1fr)' }, gap: 2, alignItems: 'start' }}>
         <Box sx={{ display: 'grid', gap: 2 }}>

@@ -1,22 +1,9 @@
 import type { Tone } from '../common/StatusChip';
+import type { Device } from '../api/views';
 
-export type DeviceKind = 'scale' | 'thermometer' | 'hygrometer' | 'logger' | 'gateway';
+export type DeviceKind = Device['kind'];
 
-export interface Device {
-  id: string;
-  kind: DeviceKind;
-  serial: string;
-  name: string;
-  station: { id: string; code: string | null; name: string | null } | null;
-  stationCode: string | null;
-  readabilityKg: number | null;
-  capacityKg: number | null;
-  calibrationDue: string | null;
-  calibrationOverdue: boolean;
-  retired: boolean;
-  createdAt: string;
-  updatedAt: string;
-}
+export type { Device };
 
 export const KIND_CHOICES: readonly { id: DeviceKind; name: string }[] = [
   { id: 'scale', name: 'Bench scale' },

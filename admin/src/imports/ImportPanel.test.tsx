@@ -4,7 +4,10 @@ import { ImportPanel } from './ImportPanel';
 import { pollImport, progressOf, type ImportJob } from './upload';
 
 function job(over: Partial<ImportJob>): ImportJob {
-  return { id: 'imp-1', status: 'running', total: 4, processed: 0, percent: 0, accepted: 0, rejectedRows: 0, badRows: [], statusUrl: '/v1/imports/imp-1', ...over };
+  return {
+    id: 'imp-1', fileName: 'logger-7.csv', sha256: 'ab', sizeBytes: 20, status: 'running', total: 4, processed: 0, percent: 0, accepted: 0, duplicates: 0, rejectedRows: 0, badRows: [],
+    error: null, uploadedBy: null, createdAt: '2026-12-02T08:00:00Z', startedAt: null, finishedAt: null, statusUrl: '/v1/imports/imp-1', ...over,
+  };
 }
 
 const csv = () => new File(['batchId,deviceId\n'], 'logger-7.csv', { type: 'text/csv' });

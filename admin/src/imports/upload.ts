@@ -5,33 +5,13 @@
  */
 import { problemToHttpError } from '../dataProvider/problem';
 import { accessTokenLapsing, type TokenStore } from '../dataProvider/session';
+import type { ImportJob } from '../api/views';
 
-export type ImportStatus = 'queued' | 'running' | 'done' | 'failed' | (string & {});
+export type ImportStatus = ImportJob['status'];
 
-export interface BadRow {
-  line: number;
-  errors: { field: string; detail: string }[];
-}
+export type BadRow = ImportJob['badRows'][number];
 
-export interface ImportJob {
-  id: string;
-  status: ImportStatus;
-  total: number;
-  processed: number;
-  percent: number;
-  /** Rows that became readings. */
-  accepted: number;
-  /** Rows whose reading was already received (same device and reading id). */
-  duplicates?: number;
-  /** Rows that could not become readings (listed in `badRows`). */
-  rejectedRows: number;
-  badRows: BadRow[];
-  statusUrl?: string;
-  fileName?: string;
-  error?: string | null;
-  uploadedBy?: string | null;
-  createdAt?: string;
-}
+export type { ImportJob };
 
 export function isFinished(job: Pick<ImportJob, 'status'>): boolean {
   return job.status === 'done' || job.status === 'failed';

@@ -1,9 +1,10 @@
 import OpenInNew from '@mui/icons-material/OpenInNew';
 import { Box, Divider, ListItemIcon, ListItemText, ListSubheader, MenuItem } from '@mui/material';
-import type { ReactElement } from 'react';
+import type { MouseEvent, ReactElement } from 'react';
 import { Menu as RaMenu, usePermissions, useSidebarState } from 'react-admin';
 import { menuIcons } from './icons';
 import { menuFor } from './menuModel';
+import { openQueueDashboard } from './queueDashboard';
 
 /** The side menu: only the entries the person's role allows, grouped under quiet headings. */
 export function Menu() {
@@ -51,6 +52,14 @@ export function Menu() {
             href={link.to}
             target="_blank"
             rel="noopener"
+            onClick={
+              link.pass
+                ? (e: MouseEvent) => {
+                    e.preventDefault();
+                    void openQueueDashboard(link.pass!);
+                  }
+                : undefined
+            }
             title={open ? undefined : link.label}
             data-menu-entry={link.id}
             sx={{ color: 'text.secondary' }}

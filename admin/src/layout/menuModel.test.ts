@@ -7,7 +7,7 @@ describe('menuFor', () => {
 
   it('gives the IT admin people, invitations, the audit log, and the integration pages', () => {
     const admin = actionsOf('admin');
-    expect(section(admin, 'access')).toEqual(['People', 'Invitations', 'Audit log']);
+    expect(section(admin, 'access')).toEqual(['People', 'Invitations', 'Audit log', 'Job queues']);
     expect(section(admin, 'integration')).toEqual(['API keys', 'Devices', 'Webhooks', 'Delivery log', 'API reference']);
     expect(menuFor(admin).map((s) => s.id)).toContain('home');
   });
@@ -34,7 +34,7 @@ describe('menuFor', () => {
   it('follows the actions the API sent, not the role name', () => {
     // an admin whose organization withheld audit access still sees the rest of their menu
     const actions = actionsOf('admin').filter((a) => a !== 'audit:read');
-    expect(section(actions, 'access')).toEqual(['People', 'Invitations']);
+    expect(section(actions, 'access')).toEqual(['People', 'Invitations', 'Job queues']);
     expect(menuLabels(actions)).not.toContain('Audit log');
   });
 

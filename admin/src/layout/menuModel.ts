@@ -8,6 +8,8 @@ export interface MenuLink {
   to: string;
   requires: Action;
   external?: boolean;
+  /** An external page that needs a pass first: POST here, then open `to` (the queue dashboard). */
+  pass?: string;
 }
 
 export interface MenuSection {
@@ -57,6 +59,7 @@ export const MENU: readonly MenuSection[] = [
       { id: 'users', label: 'People', to: '/users', requires: 'people:read' },
       { id: 'invitations', label: 'Invitations', to: '/invitations', requires: 'people:read' },
       { id: 'audit-events', label: 'Audit log', to: '/audit-events', requires: 'audit:read' },
+      { id: 'queues', label: 'Job queues', to: '/v1/admin/queues/', requires: 'queues:read', external: true, pass: '/v1/admin/queue-sessions' },
     ],
   },
   {

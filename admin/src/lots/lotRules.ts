@@ -1,20 +1,8 @@
 import type { Tone } from '../common/StatusChip';
 import { daysUntil } from '../devices/deviceRules';
+import type { Lot } from '../api/views';
 
-export interface Lot {
-  id: string;
-  part: 'A' | 'B' | 'pigment';
-  materialSystemId: string | null;
-  materialSystemName: string | null;
-  lotNumber: string;
-  receivedOn: string;
-  expiresOn: string;
-  openedOn: string | null;
-  expired: boolean;
-  notes: string | null;
-  createdAt: string;
-  updatedAt: string;
-}
+export type { Lot };
 
 /** How many days ahead a lot counts as expiring soon. */
 export const EXPIRING_SOON_DAYS = 30;

@@ -1,13 +1,13 @@
 import { Box, Typography } from '@mui/material';
 import type { ReactNode } from 'react';
 import { useMemo } from 'react';
-import { Create, Edit, NumberInput, RadioButtonGroupInput, required, SaveButton, SelectInput, SimpleForm, TextInput, Toolbar, useRecordContext } from 'react-admin';
+import { CheckboxGroupInput, Create, Edit, NumberInput, RadioButtonGroupInput, required, SaveButton, SelectInput, SimpleForm, TextInput, Toolbar, useRecordContext } from 'react-admin';
 import { Guarded } from '../common/Guarded';
 import { PageHeader } from '../common/PageHeader';
 import { QuantityInput } from '../shop/QuantityInput';
 import { SdsCaution } from '../shop/SdsCaution';
 import { useSaved } from '../shop/useSaved';
-import { KIND_CHOICES, NEW_SYSTEM, systemFormValues, type MaterialSystem } from './systemRules';
+import { DOSE_BASIS_CHOICES, KIND_CHOICES, NEW_SYSTEM, PLACEMENT_CHOICES, RELEASE_CHOICES, systemFormValues, type MaterialSystem } from './systemRules';
 
 function Group({ title, hint, children }: { title: string; hint?: string; children: ReactNode }) {
   return (
@@ -25,11 +25,11 @@ function Group({ title, hint, children }: { title: string; hint?: string; childr
   );
 }
 
-function Window({ source, label }: { source: string; label: string }) {
+function Window({ source, label, dimension = 'temperature' }: { source: string; label: string; dimension?: 'temperature' | 'time' | 'density' }) {
   return (
     <>
-      <QuantityInput source={`${source}.min`} label={`${label}, lowest`} dimension="temperature" />
-      <QuantityInput source={`${source}.max`} label={`${label}, highest`} dimension="temperature" />
+      <QuantityInput source={`${source}.min`} label={`${label}, lowest`} dimension={dimension} />
+      <QuantityInput source={`${source}.max`} label={`${label}, highest`} dimension={dimension} />
       <span />
     </>
   );
@@ -51,6 +51,21 @@ function Fields({ revising }: { revising: boolean }) {
         <NumberInput source="specificGravityB" label="Specific gravity of B" validate={required()} step={0.01} min={0} />
         <RadioButtonGroupInput source="isocyanatePart" label="Isocyanate side" choices={[{ id: 'A', name: 'Part A' }, { id: 'B', name: 'Part B' }]} validate={required()} />
         <NumberInput source="ratioTolerancePercent" label="Ratio tolerance ± %" helperText="5 % is common practice" min={0} />
+        <NumberInput source="ratioTolerancePbw" label="Or ± parts by weight of B" helperText="As data sheets write 100 : 45 ± 2; replaces the percent" min={0} />
+      </Group>
+      <Group title="Pigment" hint="Pastes are dosed as a share of A+B, of the polyol side, or of the total; a paste may come pre-blended in one part.">
+        <SelectInput source="pigmentDoseBasis" label="A pigment percent is of" choices={DOSE_BASIS_CHOICES} />
+        <SelectInput source="pigmentPlacement" label="The pigment is" choices={PLACEMENT_CHOICES} helperText="Pre-blended: that part's target includes it" />
+        <NumberInput source="pigmentCarrierHydroxylNumber" label="Carrier OH number (mg KOH/g)" helperText="Counted in the isocyanate index" min={0} />
+      </Group>
+      <Group title="Cup-test reactivity (ASTM D7487 terms)" hint="A cup test outside these holds its lots for new batches until an engineer releases them. The density band is at the reference temperature.">
+        <Window source="creamTimeWindow" label="Cream time" dimension="time" />
+        <Window source="riseTimeWindow" label="Rise (top of cup) time" dimension="time" />
+        <Window source="tackFreeTimeWindow" label="Tack-free time" dimension="time" />
+        <Window source="freeRiseDensityBand" label="Free-rise density" dimension="density" />
+      </Group>
+      <Group title="Before release" hint="Part A, part B and a separately weighed pigment are always needed; tick what else a batch must record.">
+        <CheckboxGroupInput source="releaseRequires" label="Also required" choices={RELEASE_CHOICES} />
       </Group>
       <Group title="Free-rise density" hint="From the supplier's data or your own cup tests, at a stated component temperature.">
         <QuantityInput source="freeRiseDensity" label="Free-rise density" dimension="density" required />
@@ -75,10 +90,10 @@ function Fields({ revising }: { revising: boolean }) {
         <Window source="moldTemperatureWindow" label="Mold" />
         <Window source="ambientTemperatureWindow" label="Room" />
         <NumberInput source="maxRelativeHumidity" label="Highest relative humidity %" min={0} max={100} />
-        <NumberInput source="massTolerancePercent" label="Total mass tolerance ± %" min={0} />
+        <NumberInput source="massTolerancePercent" label="Mass tolerance ± % (each part and the shot)" min={0} />
       </Group>
       <Group title="Limits and chemistry">
-        <NumberInput source="maxPigmentPercent" label="Highest pigment, % of A+B" min={0} />
+        <NumberInput source="maxPigmentPercent" label="Highest pigment, % of its dose basis" min={0} />
         <NumberInput source="maxPackFactor" label="Highest pack factor" min={1} />
         <QuantityInput source="exothermMassLimit" label="Largest single pour (exotherm)" dimension="mass" helperText="From the SDS/TDS; 2 kg when empty" />
         <NumberInput source="ncoPercent" label="%NCO of the isocyanate side" min={0} />

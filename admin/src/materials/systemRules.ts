@@ -37,6 +37,19 @@ export interface MaterialSystem {
   hydroxylNumberMgKohG: number | null;
   waterPbw: number | null;
   cautionsText: string | null;
+  ratioTolerancePbw?: number | null;
+  pigmentDoseBasis?: 'ab' | 'polyol' | 'total';
+  pigmentPlacement?: 'separate' | 'A' | 'B';
+  pigmentCarrierHydroxylNumber?: number | null;
+  creamTimeMinS?: number | null;
+  creamTimeMaxS?: number | null;
+  riseTimeMinS?: number | null;
+  riseTimeMaxS?: number | null;
+  tackFreeTimeMinS?: number | null;
+  tackFreeTimeMaxS?: number | null;
+  freeRiseDensityMinKgM3?: number | null;
+  freeRiseDensityMaxKgM3?: number | null;
+  releaseRequires?: string[];
   derived: { weightRatio: { a: number; b: number }; volumeRatio: { a: number; b: number }; isocyanateIndex: number | null };
   documents: { sds: number; tds: number };
   createdAt: string;
@@ -48,6 +61,33 @@ export const KIND_CHOICES: { id: SystemKind; name: string }[] = [
   { id: 'integral-skin', name: 'Integral skin' },
   { id: 'other', name: 'Other' },
 ];
+
+export const DOSE_BASIS_CHOICES = [
+  { id: 'ab', name: 'A + B' },
+  { id: 'polyol', name: 'The polyol side' },
+  { id: 'total', name: 'The total, pigment included' },
+];
+
+export const PLACEMENT_CHOICES = [
+  { id: 'separate', name: 'Weighed on its own' },
+  { id: 'A', name: 'Pre-blended in part A' },
+  { id: 'B', name: 'Pre-blended in part B' },
+];
+
+export const RELEASE_CHOICES = [
+  { id: 'component_temperature', name: 'Component temperature' },
+  { id: 'mold_temperature', name: 'Mold temperature' },
+  { id: 'ambient_temperature', name: 'Shop air temperature' },
+  { id: 'humidity', name: 'Relative humidity' },
+  { id: 'mix_start', name: 'Mix start' },
+  { id: 'pour', name: 'Pour' },
+  { id: 'demold', name: 'Demold' },
+];
+
+/** A window of the API's SI view as a form's `{ min, max }` quantities; undefined (not sent) when unset. */
+function siWindow(min: number | null | undefined, max: number | null | undefined, unit: string) {
+  return min === null || min === undefined || max === null || max === undefined ? undefined : { min: { value: min, unit }, max: { value: max, unit } };
+}
 
 export const kindLabel = (k: string) => KIND_CHOICES.find((c) => c.id === k)?.name ?? k;
 
@@ -77,6 +117,15 @@ export function systemFormValues(record: MaterialSystem): Record<string, unknown
     componentTemperatureWindow: body.componentTemperatureWindow ?? emptyWindow,
     moldTemperatureWindow: body.moldTemperatureWindow ?? emptyWindow,
     ambientTemperatureWindow: body.ambientTemperatureWindow ?? emptyWindow,
+    ratioTolerancePbw: record.ratioTolerancePbw ?? null,
+    pigmentDoseBasis: record.pigmentDoseBasis ?? 'ab',
+    pigmentPlacement: record.pigmentPlacement ?? 'separate',
+    pigmentCarrierHydroxylNumber: record.pigmentCarrierHydroxylNumber ?? null,
+    creamTimeWindow: siWindow(record.creamTimeMinS, record.creamTimeMaxS, 's'),
+    riseTimeWindow: siWindow(record.riseTimeMinS, record.riseTimeMaxS, 's'),
+    tackFreeTimeWindow: siWindow(record.tackFreeTimeMinS, record.tackFreeTimeMaxS, 's'),
+    freeRiseDensityBand: siWindow(record.freeRiseDensityMinKgM3, record.freeRiseDensityMaxKgM3, 'kg/m3'),
+    releaseRequires: record.releaseRequires ?? [],
     changeNote: '',
   };
 }
@@ -97,4 +146,7 @@ export const NEW_SYSTEM = {
   demoldTime: { value: null, unit: 'min' },
   fullCureTime: { value: null, unit: 'h' },
   exothermMassLimit: { value: null, unit: 'kg' },
+  pigmentDoseBasis: 'ab',
+  pigmentPlacement: 'separate',
+  releaseRequires: [],
 };

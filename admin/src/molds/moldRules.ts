@@ -1,27 +1,13 @@
 import { formatNumber } from '../format/quantities';
 import { MEASUREMENT_FIELDS, MEASUREMENT_KINDS, type MeasurementKind } from './volumeHelper';
+import type { Mold } from '../api/views';
 
 export interface MeasurementRecord {
   kind: MeasurementKind;
   [field: string]: { value: number; unit: string } | MeasurementKind;
 }
 
-export interface Mold {
-  id: string;
-  name: string;
-  code: string | null;
-  cavity: MeasurementRecord;
-  inserts: MeasurementRecord[];
-  cavities: number;
-  grossCavityVolumeM3: number;
-  insertVolumeM3: number;
-  cavityVolumeM3: number;
-  totalVolumeM3: number;
-  defaultPackFactor: number | null;
-  notes: string | null;
-  createdAt: string;
-  updatedAt: string;
-}
+export type { Mold };
 
 const UNIT_TEXT: Record<string, string> = { cm3: 'cm³', m3: 'm³', in3: 'in³', ft3: 'ft³', degC: '°C', degF: '°F', gal: 'US gal' };
 

@@ -28,25 +28,9 @@ import { SdsCaution } from '../shop/SdsCaution';
 import { formatSiAs, formatSeconds } from '../format/quantities';
 import { useDisplayUnits } from '../shop/useDisplayUnits';
 import { useSaved } from '../shop/useSaved';
+import type { CupTest } from '../api/views';
 
-export interface CupTest {
-  id: string;
-  materialSystemId: string;
-  materialSystemName: string;
-  materialSystemRevision: number | null;
-  lotAId: string | null;
-  lotBId: string | null;
-  componentTemperatureAC: number;
-  componentTemperatureBC: number;
-  creamTimeS: number | null;
-  topOfCupTimeS: number | null;
-  tackFreeTimeS: number | null;
-  freeRiseDensityKgM3: number;
-  testedAt: string;
-  notes: string | null;
-  createdBy: string | null;
-  createdAt: string;
-}
+export type { CupTest };
 
 function NewCupButton() {
   const { canAccess } = useCanAccess({ resource: 'qc-cup-tests', action: 'create' });

@@ -5,14 +5,9 @@
  */
 import type { UnitSystem } from '../auth/me';
 import { formatNumber, formatSeconds, formatSi } from '../format/quantities';
+import type { ReadingReason } from '../api/views';
 
-export interface Reason {
-  code: string;
-  message: string;
-  measured: number | null;
-  limit: number | null;
-  unit: string | null;
-}
+export type Reason = ReadingReason;
 
 export interface ReasonView {
   code: string;

@@ -30,23 +30,9 @@ import { localToday } from '../devices/deviceRules';
 import { formatDate } from '../format/dates';
 import { useSaved } from '../shop/useSaved';
 import { monoFont } from '../theme';
+import type { WorkOrder } from '../api/views';
 
-export interface WorkOrder {
-  id: string;
-  externalRef: string;
-  partNumber: string | null;
-  moldId: string | null;
-  moldName: string | null;
-  materialSystemId: string | null;
-  materialSystemName: string | null;
-  quantity: number;
-  dueOn: string | null;
-  notes: string | null;
-  state: 'open' | 'in_progress' | 'done' | 'cancelled';
-  createdBy: string | null;
-  createdAt: string;
-  updatedAt: string;
-}
+export type { WorkOrder };
 
 export const STATE_CHOICES = [
   { id: 'open', name: 'Open' },
