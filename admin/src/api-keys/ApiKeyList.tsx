@@ -1,13 +1,14 @@
 import Autorenew from '@mui/icons-material/Autorenew';
 import Block from '@mui/icons-material/BlockOutlined';
 import KeyOutlined from '@mui/icons-material/KeyOutlined';
-import { Box, Button, Chip, IconButton, Tooltip, Typography } from '@mui/material';
-import { useState } from 'react';
+import { Box, Button, Chip, FormControlLabel, IconButton, Switch, Tooltip, Typography } from '@mui/material';
+import { useMemo, useState, type ReactNode } from 'react';
 import {
   Confirm,
   DataTable,
   FunctionField,
   List,
+  ListContextProvider,
   ReferenceField,
   SearchInput,
   SelectInput,
@@ -15,6 +16,7 @@ import {
   useCanAccess,
   useDataProvider,
   useGetIdentity,
+  useListContext,
   useNotify,
   useRecordContext,
   useRefresh,
@@ -27,16 +29,37 @@ import { RelativeTime } from '../common/RelativeTime';
 import { StatusChip } from '../common/StatusChip';
 import { useNow } from '../common/useNow';
 import type { PourgateDataProvider } from '../dataProvider';
-import { expiryLabel, formatDate, formatDateTime } from '../format/dates';
+import { formatDate, formatDateTime } from '../format/dates';
 import { monoFont } from '../theme';
 import type { ApiKey } from '../api/views';
 import { KeyDialogsProvider, useKeyDialogs } from './KeyDialogs';
-import { canManageKey, keyStateView, KIND_LABEL, kindsAllowed } from './keyRules';
+import { canManageKey, expiryText, keyRows, keyStateView, KIND_LABEL, kindsAllowed } from './keyRules';
+
+/** A list row: the key and, after a rotation, the predecessor whose secret may still work. */
+type KeyRecord = ApiKey & { previous: ApiKey | null };
 
 const filters = [
   <SearchInput key="q" source="q" alwaysOn placeholder="Key name" />,
-  <SelectInput key="kind" source="kind" label="Kind" choices={[{ id: 'device', name: 'Device' }, { id: 'integration', name: 'Integration' }]} emptyText="Any kind" />,
-  <SelectInput key="environment" source="environment" label="Environment" choices={[{ id: 'live', name: 'Live' }, { id: 'test', name: 'Test' }]} emptyText="Any" />,
+  <SelectInput
+    key="kind"
+    source="kind"
+    label="Kind"
+    choices={[
+      { id: 'device', name: 'Device' },
+      { id: 'integration', name: 'Integration' },
+    ]}
+    emptyText="Any kind"
+  />,
+  <SelectInput
+    key="environment"
+    source="environment"
+    label="Environment"
+    choices={[
+      { id: 'live', name: 'Live' },
+      { id: 'test', name: 'Test' },
+    ]}
+    emptyText="Any"
+  />,
 ];
 
 function useRole() {
@@ -68,8 +91,7 @@ function Actions() {
 function NoKeys() {
   return (
     <EmptyState icon={KeyOutlined} title="No API keys yet" action={<IssueKeyButton />}>
-      Bench scales and temperature loggers post readings with a device key; the ERP posts work orders and fetches
-      targets with an integration key. Each key carries only the scopes you give it.
+      Bench scales and temperature loggers post readings with a device key; the ERP posts work orders and fetches targets with an integration key. Each key carries only the scopes you give it.
     </EmptyState>
   );
 }
@@ -94,7 +116,10 @@ function KindCell() {
   if (!k) return null;
   return (
     <Box>
-      <Typography variant="body2">{KIND_LABEL[k.kind] ?? k.kind}</Typography>
+      <Box sx={{ display: 'flex', alignItems: 'center', gap: 0.75 }}>
+        <Typography variant="body2">{KIND_LABEL[k.kind] ?? k.kind}</Typography>
+        {k.environment === 'live' ? <StatusChip tone="info" label="Live" /> : <StatusChip tone="quiet" label="Test" />}
+      </Box>
       {k.deviceId ? (
         <Typography variant="caption" color="text.secondary" component="div">
           <ReferenceField source="deviceId" reference="devices" link={false} emptyText="">
@@ -110,7 +135,7 @@ function ScopesCell() {
   const k = useRecordContext<ApiKey>();
   if (!k) return null;
   return (
-    <Box sx={{ display: 'flex', flexWrap: 'wrap', gap: 0.5, minWidth: 200, maxWidth: 300 }}>
+    <Box sx={{ display: 'flex', flexWrap: 'wrap', gap: 0.5, minWidth: 160, maxWidth: 240 }}>
       {k.scopes.map((s) => (
         <Chip key={s} label={s} size="small" variant="outlined" sx={{ fontFamily: monoFont, fontSize: '0.7rem', height: 20, borderRadius: '4px' }} />
       ))}
@@ -119,15 +144,25 @@ function ScopesCell() {
 }
 
 function StateCell() {
-  const k = useRecordContext<ApiKey>();
+  const k = useRecordContext<KeyRecord>();
   if (!k) return null;
   const v = keyStateView(k);
+  const prev = k.previous;
   return (
     <Box>
       <StatusChip label={v.label} tone={v.tone} />
       {v.note && k.state === 'grace' ? (
         <Typography variant="caption" component="div" color="text.secondary" sx={{ mt: 0.25, whiteSpace: 'nowrap' }}>
           {v.note}
+        </Typography>
+      ) : null}
+      {prev && prev.state === 'grace' ? (
+        <Typography variant="caption" component="div" color="text.secondary" sx={{ mt: 0.25 }} data-testid="grace-secret">
+          Previous secret <span style={{ fontFamily: monoFont }}>{prev.prefix}…</span> still accepted{prev.graceUntil ? ` until ${formatDateTime(prev.graceUntil)}` : ''}
+        </Typography>
+      ) : prev ? (
+        <Typography variant="caption" component="div" color="text.secondary" sx={{ mt: 0.25 }}>
+          Rotated from <span style={{ fontFamily: monoFont }}>{prev.prefix}…</span>
         </Typography>
       ) : null}
     </Box>
@@ -153,9 +188,14 @@ function ExpiryCell() {
   const k = useRecordContext<ApiKey>();
   const now = useNow();
   if (!k) return null;
-  if (k.state === 'revoked') return <Typography variant="body2" color="text.secondary">—</Typography>;
-  const label = expiryLabel(k.expiresAt, now);
-  return k.expiresAt ? (
+  const label = expiryText(k, now);
+  if (k.state === 'revoked')
+    return (
+      <Typography variant="body2" color="text.secondary">
+        {label}
+      </Typography>
+    );
+  return k.expiresAt && k.state === 'active' ? (
     <Tooltip title={formatDateTime(k.expiresAt)}>
       <span style={{ whiteSpace: 'nowrap' }}>{label}</span>
     </Tooltip>
@@ -233,9 +273,8 @@ function RowActions() {
         title={`Revoke “${k.name}”?`}
         content={
           <>
-            Every secret of this key is refused from the moment you confirm: <code style={{ fontFamily: monoFont }}>{k.prefix}…</code>,
-            the secret it replaced if that one is still in its rotation grace period, and the secret that replaced it if it was
-            rotated. This cannot be undone; issue a new key to reconnect.
+            Every secret of this key is refused from the moment you confirm: <code style={{ fontFamily: monoFont }}>{k.prefix}…</code>, the secret it replaced if that one is still in its rotation
+            grace period, and the secret that replaced it if it was rotated. This cannot be undone; issue a new key to reconnect.
           </>
         }
         confirm="Revoke key"
@@ -255,7 +294,15 @@ export default function ApiKeyListPage() {
   );
 }
 
+/** The page's keys folded into one row per key (rotations), revoked ones only on request. */
+function CurrentKeys({ showRevoked, children }: { showRevoked: boolean; children: ReactNode }) {
+  const ctx = useListContext<ApiKey>();
+  const data = useMemo(() => keyRows(ctx.data ?? [], showRevoked).map(({ key, previous }): KeyRecord => ({ ...key, previous })), [ctx.data, showRevoked]);
+  return <ListContextProvider value={{ ...ctx, data } as unknown as typeof ctx}>{children}</ListContextProvider>;
+}
+
 function ApiKeyList() {
+  const [showRevoked, setShowRevoked] = useState(false);
   const role = useRole();
   const lead =
     role === 'integrator'
@@ -263,24 +310,26 @@ function ApiKeyList() {
       : 'Keys for machines: bench scales and loggers (device keys) and the ERP or other systems (integration keys). Secrets are shown once; rotate with a grace period, revoke at once.';
   return (
     <KeyDialogsProvider kinds={kindsAllowed(role)}>
-      <PageHeader title="API keys" lead={lead} />
+      <PageHeader
+        title="API keys"
+        lead={lead}
+        actions={<FormControlLabel control={<Switch size="small" checked={showRevoked} onChange={(e) => setShowRevoked(e.target.checked)} data-testid="show-revoked" />} label="Show revoked keys" />}
+      />
       <List resource="api-keys" title="API keys" filters={filters} actions={<Actions />} empty={<NoKeys />} sort={{ field: 'createdAt', order: 'DESC' }} perPage={25} storeKey="api-keys.list">
-        <DataTable bulkActionButtons={false} rowClick={false} rowSx={(k: ApiKey) => (k.state === 'revoked' || k.state === 'expired' ? { opacity: 0.72 } : {})}>
-          <DataTable.Col source="name" label="Key" field={KeyCell} />
-          <DataTable.Col source="kind" label="Kind" disableSort field={KindCell} />
-          <DataTable.Col
-            source="environment"
-            label="Env"
-            disableSort
-            render={(k: ApiKey) => (k.environment === 'live' ? <StatusChip tone="info" label="Live" /> : <StatusChip tone="quiet" label="Test" />)}
-          />
-          <DataTable.Col label="Scopes" disableSort field={ScopesCell} />
-          <DataTable.Col source="state" label="State" disableSort field={StateCell} />
-          <DataTable.Col source="lastUsedAt" label="Last used" field={LastUsedCell} />
-          <DataTable.Col source="expiresAt" label="Expiry" field={ExpiryCell} />
-          <DataTable.Col source="createdAt" label="Issued" field={CreatedCell} />
-          <DataTable.Col label={<span className="visually-hidden">Actions</span>} disableSort align="right" field={RowActions} />
-        </DataTable>
+        <CurrentKeys showRevoked={showRevoked}>
+          <Box sx={{ overflowX: 'auto' }} tabIndex={0} role="region" aria-label="API keys table">
+            <DataTable bulkActionButtons={false} rowClick={false} rowSx={(k: ApiKey) => (k.state === 'revoked' || k.state === 'expired' ? { opacity: 0.72 } : {})}>
+              <DataTable.Col source="name" label="Key" field={KeyCell} />
+              <DataTable.Col source="kind" label="Kind" disableSort field={KindCell} />
+              <DataTable.Col label="Scopes" disableSort field={ScopesCell} />
+              <DataTable.Col source="state" label="State" disableSort field={StateCell} />
+              <DataTable.Col source="lastUsedAt" label="Last used" field={LastUsedCell} />
+              <DataTable.Col source="expiresAt" label="Expiry" field={ExpiryCell} />
+              <DataTable.Col source="createdAt" label="Issued" field={CreatedCell} />
+              <DataTable.Col label={<span className="visually-hidden">Actions</span>} disableSort align="right" field={RowActions} />
+            </DataTable>
+          </Box>
+        </CurrentKeys>
       </List>
     </KeyDialogsProvider>
   );

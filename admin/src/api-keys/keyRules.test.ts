@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { buildKeyPayload, canManageKey, DEFAULT_SCOPES, keyFormErrors, keyStateView, kindsAllowed } from './keyRules';
+import { buildKeyPayload, canManageKey, DEFAULT_SCOPES, expiryText, keyFormErrors, keyRows, keyStateView, kindsAllowed } from './keyRules';
 
 const NOW = Date.parse('2025-06-02T12:00:00Z');
 
@@ -67,5 +67,32 @@ describe('keyStateView', () => {
     expect(DEFAULT_SCOPES.device).toContain('readings:write');
     expect(DEFAULT_SCOPES.integration).toContain('work-orders:write');
     expect(DEFAULT_SCOPES.device).not.toContain('work-orders:write');
+  });
+});
+
+describe('keyRows', () => {
+  const k = (id: string, state: 'active' | 'grace' | 'expired' | 'revoked', rotatedFrom: string | null = null) => ({ id, state, rotatedFrom });
+
+  it('folds a rotated-out key into the row of the key that replaced it', () => {
+    const rows = keyRows([k('new', 'active', 'old'), k('old', 'grace'), k('other', 'active')], false);
+    expect(rows.map((r) => r.key.id)).toEqual(['new', 'other']);
+    expect(rows[0]!.previous?.id).toBe('old');
+    expect(rows[1]!.previous).toBeNull();
+  });
+
+  it('hides revoked keys unless asked, and keeps a predecessor from another page as a row of its own', () => {
+    const keys = [k('a', 'revoked'), k('b', 'active', 'gone'), k('c', 'expired')];
+    expect(keyRows(keys, false).map((r) => r.key.id)).toEqual(['b', 'c']);
+    expect(keyRows(keys, true).map((r) => r.key.id)).toEqual(['a', 'b', 'c']);
+  });
+});
+
+describe('expiryText', () => {
+  const now = Date.parse('2026-12-02T12:00:00Z');
+  it('never says "Expired" beside "No expiry": a key past its grace period expired when the grace ended', () => {
+    expect(expiryText({ state: 'expired', expiresAt: null, graceUntil: '2026-11-29T12:00:00Z', revokedAt: null }, now)).toBe('Expired 3 days ago');
+    expect(expiryText({ state: 'active', expiresAt: null, graceUntil: null, revokedAt: null }, now)).toBe('No expiry');
+    expect(expiryText({ state: 'grace', expiresAt: null, graceUntil: '2026-12-03T12:00:00Z', revokedAt: null }, now)).toBe('Retires tomorrow');
+    expect(expiryText({ state: 'revoked', expiresAt: null, graceUntil: null, revokedAt: '2026-12-01T12:00:00Z' }, now)).toBe('Revoked');
   });
 });

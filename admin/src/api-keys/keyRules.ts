@@ -1,6 +1,6 @@
 import type { ApiKeyScope, Role } from '@pourgate/permissions';
 import type { Tone } from '../common/StatusChip';
-import { addDaysIso, formatDateTime } from '../format/dates';
+import { addDaysIso, expiryLabel, formatDateTime, formatRelative } from '../format/dates';
 import type { ApiKey, ApiKeyEnvironment, ApiKeyKind } from '../api/views';
 
 export const SCOPE_INFO: Readonly<Record<ApiKeyScope, string>> = {
@@ -43,7 +43,7 @@ export function keyStateView(key: Pick<ApiKey, 'state' | 'graceUntil' | 'revoked
     case 'grace':
       return { label: 'Retiring', tone: 'caution', note: key.graceUntil ? `Works until ${formatDateTime(key.graceUntil)}` : undefined };
     case 'expired':
-      return { label: 'Expired', tone: 'quiet', note: key.expiresAt ? `Since ${formatDateTime(key.expiresAt)}` : undefined };
+      return { label: 'Expired', tone: 'quiet', note: (key.expiresAt ?? key.graceUntil) ? `Since ${formatDateTime(key.expiresAt ?? key.graceUntil)}` : undefined };
     case 'revoked':
       return { label: 'Revoked', tone: 'bad', note: key.revokedAt ? `Since ${formatDateTime(key.revokedAt)}` : undefined };
     default:
@@ -102,4 +102,39 @@ export function keyFormErrors(errors: Record<string, string>): Record<string, st
   const out: Record<string, string> = {};
   for (const [k, v] of Object.entries(errors)) out[k === 'expiresAt' ? 'expiresAfter' : k.startsWith('scopes.') ? 'scopes' : k] = v;
   return out;
+}
+
+/** A key as the list shows it: the current secret, with the one it replaced while that still works. */
+export interface KeyRow<K extends Pick<ApiKey, 'id' | 'state' | 'rotatedFrom'> = ApiKey> {
+  key: K;
+  /** The rotated-out predecessor on the same page, if any. */
+  previous: K | null;
+}
+
+/**
+ * One row per key: a rotation makes a new key row that names its predecessor (`rotatedFrom`); the
+ * predecessor (retiring or expired) folds into its successor's row instead of showing as a second
+ * key of the same name. Revoked keys are left out unless asked for.
+ */
+export function keyRows<K extends Pick<ApiKey, 'id' | 'state' | 'rotatedFrom'>>(keys: readonly K[], showRevoked: boolean): KeyRow<K>[] {
+  const byId = new Map(keys.map((k) => [k.id, k]));
+  const replaced = new Set(keys.map((k) => k.rotatedFrom).filter((id): id is string => !!id && byId.has(id)));
+  return keys
+    .filter((k) => !replaced.has(k.id))
+    .filter((k) => showRevoked || k.state !== 'revoked')
+    .map((k) => ({ key: k, previous: k.rotatedFrom ? (byId.get(k.rotatedFrom) ?? null) : null }));
+}
+
+/**
+ * The expiry cell. A key in its rotation grace period or past it is judged by its grace end, not
+ * by its own expiry: "Expired" never sits beside "No expiry".
+ */
+export function expiryText(key: Pick<ApiKey, 'state' | 'expiresAt' | 'graceUntil' | 'revokedAt'>, now: number = Date.now()): string {
+  if (key.state === 'revoked') return 'Revoked';
+  if (key.state === 'grace' && key.graceUntil) return `Retires ${formatRelative(key.graceUntil, now)}`;
+  if (key.state === 'expired') {
+    const at = key.expiresAt && Date.parse(key.expiresAt) <= now ? key.expiresAt : key.graceUntil;
+    return at ? `Expired ${formatRelative(at, now)}` : 'Expired';
+  }
+  return expiryLabel(key.expiresAt, now);
 }
