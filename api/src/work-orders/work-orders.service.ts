@@ -1,26 +1,17 @@
-import { Inject, Injectable } from '@nestjs/common';
-import type { Knex } from 'knex';
+import { Injectable } from '@nestjs/common';
 import { createHash } from 'node:crypto';
 import { EventsService } from '../events/events.service.js';
 import { AuditService } from '../audit/audit.service.js';
 import { actorOf, type RequestContext } from '../auth/principal.js';
-import { listPage } from '../common/lists/knex-list.js';
-import type { ListQuery, ListSpec } from '../common/lists/list-query.js';
+import type { ListQuery } from '../common/lists/list-query.js';
 import { type FieldError, ProblemException, validationProblem } from '../common/problems.js';
-import { KNEX } from '../database/database.module.js';
 import { isoDay } from '@pourgate/batching';
+import { MaterialSystemsService } from '../materials/material-systems.service.js';
+import { MoldsService } from '../molds/molds.service.js';
 import { notFound } from '../shop/errors.js';
+import { WorkOrdersRepository } from './work-orders.repository.js';
 
-export const workOrdersListSpec: ListSpec = {
-  resource: 'work-orders',
-  sortable: ['externalRef', 'dueOn', 'state', 'quantity', 'createdAt', 'updatedAt'],
-  filters: { q: 'text', externalRef: 'eq', state: 'eq', moldId: 'eq', materialSystemId: 'eq', dueBefore: 'lte', dueAfter: 'gte', id: 'in' },
-  defaultSort: ['dueOn', 'ASC'],
-};
-const columns = {
-  externalRef: 'work_orders.external_ref', dueOn: 'work_orders.due_on', state: 'work_orders.state', quantity: 'work_orders.quantity', createdAt: 'work_orders.created_at', updatedAt: 'work_orders.updated_at',
-  q: 'work_orders.external_ref', moldId: 'work_orders.mold_id', materialSystemId: 'work_orders.material_system_id', dueBefore: 'work_orders.due_on', dueAfter: 'work_orders.due_on', id: 'work_orders.id',
-};
+export { workOrdersListSpec } from './work-orders.repository.js';
 
 export const WORK_ORDER_STATES = ['open', 'in_progress', 'done', 'cancelled'] as const;
 export type WorkOrderState = (typeof WORK_ORDER_STATES)[number];
@@ -98,23 +89,21 @@ export function requestHash(body: WorkOrderInput): string {
 
 @Injectable()
 export class WorkOrdersService {
-  constructor(@Inject(KNEX) private readonly db: Knex, private readonly audit: AuditService, private readonly events: EventsService) {}
-
-  base(orgId: string, db: Knex | Knex.Transaction = this.db) {
-    return db('work_orders')
-      .leftJoin('molds', 'molds.id', 'work_orders.mold_id')
-      .leftJoin('material_systems', 'material_systems.id', 'work_orders.material_system_id')
-      .where('work_orders.organization_id', orgId)
-      .select('work_orders.*', 'molds.name as mold_name', 'material_systems.name as material_system_name');
-  }
+  constructor(
+    private readonly repo: WorkOrdersRepository,
+    private readonly molds: MoldsService,
+    private readonly systems: MaterialSystemsService,
+    private readonly audit: AuditService,
+    private readonly events: EventsService,
+  ) {}
 
   async list(c: RequestContext, q: ListQuery) {
-    const { rows, total } = await listPage<WorkOrderRow>(this.base(c.principal.organizationId), q, workOrdersListSpec, columns);
+    const { rows, total } = await this.repo.list(c.principal.organizationId, q);
     return { rows: rows.map(workOrderView), total };
   }
 
-  async row(orgId: string, id: string, db: Knex | Knex.Transaction = this.db): Promise<WorkOrderRow | undefined> {
-    return this.base(orgId, db).where('work_orders.id', id).first();
+  row(orgId: string, id: string): Promise<WorkOrderRow | undefined> {
+    return this.repo.row(orgId, id);
   }
 
   async get(c: RequestContext, id: string) {
@@ -125,10 +114,10 @@ export class WorkOrdersService {
 
   private async checkReferences(orgId: string, body: WorkOrderInput): Promise<FieldError[]> {
     const errors: FieldError[] = [];
-    if (body.moldId && !(await this.db('molds').where({ id: body.moldId, organization_id: orgId }).first('id'))) {
+    if (body.moldId && !(await this.molds.row(orgId, body.moldId))) {
       errors.push({ pointer: '/moldId', detail: 'no mold with that id in your organization', code: 'reference' });
     }
-    if (body.materialSystemId && !(await this.db('material_systems').where({ id: body.materialSystemId, organization_id: orgId }).first('id'))) {
+    if (body.materialSystemId && !(await this.systems.revision(orgId, body.materialSystemId))) {
       errors.push({ pointer: '/materialSystemId', detail: 'no material system with that id in your organization', code: 'reference' });
     }
     return errors;
@@ -145,30 +134,44 @@ export class WorkOrdersService {
     if (errors.length) throw validationProblem(errors);
     const hash = requestHash(body);
     const actor = actorOf(c.principal);
-    const result = await this.db.transaction(async (trx) => {
-      const [row] = await trx('work_orders')
-        .insert({
-          organization_id: orgId,
-          external_ref: body.externalRef,
-          part_number: body.partNumber ?? null,
-          mold_id: body.moldId ?? null,
-          material_system_id: body.materialSystemId ?? null,
-          quantity: body.quantity,
-          due_on: body.dueOn ?? null,
-          notes: body.notes ?? null,
-          state: body.state ?? 'open',
-          request_hash: hash,
-          created_by_label: actor.actorLabel,
-        })
-        .onConflict(['organization_id', 'external_ref'])
-        .ignore()
-        .returning('id');
-      if (row) {
-        await this.audit.record({ organizationId: orgId, ...actor, action: 'work_order.posted', targetType: 'work_order', targetId: row.id, details: { externalRef: body.externalRef, quantity: body.quantity }, ip: c.ip, userAgent: c.userAgent }, trx);
-        await this.events.emit(trx, { organizationId: orgId, type: 'work_order.created', subjectType: 'work_order', subjectId: row.id, data: { workOrderId: row.id, externalRef: body.externalRef, quantity: body.quantity, state: body.state ?? 'open' } });
-        return { id: row.id as string, created: true };
+    const result = await this.repo.transaction(async (trx) => {
+      const id = await this.repo.insertOnce(trx, {
+        organization_id: orgId,
+        external_ref: body.externalRef,
+        part_number: body.partNumber ?? null,
+        mold_id: body.moldId ?? null,
+        material_system_id: body.materialSystemId ?? null,
+        quantity: body.quantity,
+        due_on: body.dueOn ?? null,
+        notes: body.notes ?? null,
+        state: body.state ?? 'open',
+        request_hash: hash,
+        created_by_label: actor.actorLabel,
+      });
+      if (id) {
+        await this.audit.record(
+          {
+            organizationId: orgId,
+            ...actor,
+            action: 'work_order.posted',
+            targetType: 'work_order',
+            targetId: id,
+            details: { externalRef: body.externalRef, quantity: body.quantity },
+            ip: c.ip,
+            userAgent: c.userAgent,
+          },
+          trx,
+        );
+        await this.events.emit(trx, {
+          organizationId: orgId,
+          type: 'work_order.created',
+          subjectType: 'work_order',
+          subjectId: id,
+          data: { workOrderId: id, externalRef: body.externalRef, quantity: body.quantity, state: body.state ?? 'open' },
+        });
+        return { id, created: true };
       }
-      const existing = await trx('work_orders').where({ organization_id: orgId, external_ref: body.externalRef }).first('id', 'request_hash');
+      const existing = await this.repo.byExternalRef(trx, orgId, body.externalRef);
       if (existing.request_hash !== hash) {
         throw new ProblemException(409, {
           slug: 'conflict',
@@ -192,13 +195,39 @@ export class WorkOrdersService {
     }
     if (errors.length) throw validationProblem(errors);
     const patch: Record<string, unknown> = {};
-    const map: [keyof WorkOrderInput, string][] = [['partNumber', 'part_number'], ['moldId', 'mold_id'], ['materialSystemId', 'material_system_id'], ['quantity', 'quantity'], ['dueOn', 'due_on'], ['notes', 'notes'], ['state', 'state']];
+    const map: [keyof WorkOrderInput, string][] = [
+      ['partNumber', 'part_number'],
+      ['moldId', 'mold_id'],
+      ['materialSystemId', 'material_system_id'],
+      ['quantity', 'quantity'],
+      ['dueOn', 'due_on'],
+      ['notes', 'notes'],
+      ['state', 'state'],
+    ];
     for (const [field, col] of map) if (body[field] !== undefined) patch[col] = body[field];
     if (Object.keys(patch).length) {
-      await this.db.transaction(async (trx) => {
-        await trx('work_orders').where({ id, organization_id: orgId }).update(patch);
-        await this.audit.record({ organizationId: orgId, ...actorOf(c.principal), action: 'work_order.changed', targetType: 'work_order', targetId: id, details: { fields: Object.keys(patch), state: body.state }, ip: c.ip, userAgent: c.userAgent }, trx);
-        await this.events.emit(trx, { organizationId: orgId, type: 'work_order.changed', subjectType: 'work_order', subjectId: id, data: { workOrderId: id, externalRef: current.external_ref, changed: Object.keys(body).filter((k) => body[k as keyof WorkOrderInput] !== undefined) } });
+      await this.repo.transaction(async (trx) => {
+        await this.repo.update(trx, orgId, id, patch);
+        await this.audit.record(
+          {
+            organizationId: orgId,
+            ...actorOf(c.principal),
+            action: 'work_order.changed',
+            targetType: 'work_order',
+            targetId: id,
+            details: { fields: Object.keys(patch), state: body.state },
+            ip: c.ip,
+            userAgent: c.userAgent,
+          },
+          trx,
+        );
+        await this.events.emit(trx, {
+          organizationId: orgId,
+          type: 'work_order.changed',
+          subjectType: 'work_order',
+          subjectId: id,
+          data: { workOrderId: id, externalRef: current.external_ref, changed: Object.keys(body).filter((k) => body[k as keyof WorkOrderInput] !== undefined) },
+        });
       });
     }
     return this.get(c, id);
