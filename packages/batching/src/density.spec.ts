@@ -95,12 +95,27 @@ describe('fitFreeRiseDensity', () => {
 describe('expectedFreeRiseDensity', () => {
   const reference = { density: 48, temperature: 22, slope: -0.4 };
 
-  it('prefers the cup-test fit when there are enough cups', () => {
-    const cups = [18, 22, 26].map((t) => ({ temperature: t, density: 70 - t }));
+  it('prefers the cup-test fit when there are enough cups over a real span', () => {
+    const cups = [18, 20, 22, 24, 26].map((t) => ({ temperature: t, density: 70 - t }));
     const expected = expectedFreeRiseDensity(reference, 25, cups);
     expect(expected.method).toBe('cup_test_fit');
     expect(expected.density).toBeCloseTo(45, 10);
-    expect(expected.fit?.count).toBe(3);
+    expect(expected.fit?.count).toBe(5);
+  });
+
+  it('does not trust three cups, a narrow span, a poor fit, a rising line, or extrapolation', () => {
+    const line = (ts: number[], f = (t: number) => 70 - t) => ts.map((t) => ({ temperature: t, density: f(t) }));
+    expect(expectedFreeRiseDensity(reference, 25, line([18, 22, 26])).fitRejected).toBe('too_few_points');
+    // 22.0, 22.1, 22.2 °C fitting +15 kg/m³/°C: at 30 °C that line would say 164 kg/m³
+    const narrow = expectedFreeRiseDensity(reference, 30, [...line([22.0, 22.1, 22.2], (t) => 48 + 15 * (t - 22)), ...line([22.1, 22.0], (t) => 48 + 15 * (t - 22))]);
+    expect(narrow).toMatchObject({ method: 'system_slope', fitRejected: 'narrow_span' });
+    expect(narrow.density).toBeCloseTo(48 - 0.4 * 8, 10);
+    expect(expectedFreeRiseDensity(reference, 22, line([18, 20, 22, 24, 26], (t) => (t % 4 === 0 ? 60 : 40))).fitRejected).toBe('poor_fit');
+    expect(expectedFreeRiseDensity(reference, 22, line([18, 20, 22, 24, 26], (t) => 30 + t)).fitRejected).toBe('unexpected_sign');
+    const far = expectedFreeRiseDensity(reference, 29, line([18, 20, 22, 24, 26]));
+    expect(far).toMatchObject({ method: 'system_slope', fitRejected: 'outside_tested_span' });
+    expect(far.methodReason).toMatch(/more than 2 °C outside the span/);
+    expect(expectedFreeRiseDensity(reference, 28, line([18, 20, 22, 24, 26])).method).toBe('cup_test_fit');
   });
 
   it('falls back to the system slope with fewer than three cups', () => {
@@ -112,6 +127,6 @@ describe('expectedFreeRiseDensity', () => {
 
   it('says reference only when there is no slope', () => {
     const expected = expectedFreeRiseDensity({ density: 48, temperature: 22 }, 25);
-    expect(expected).toEqual({ density: 48, temperature: 25, method: 'reference_only', fit: null });
+    expect(expected).toMatchObject({ density: 48, temperature: 25, method: 'reference_only', fit: null, fitRejected: null });
   });
 });

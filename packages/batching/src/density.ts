@@ -3,6 +3,7 @@
  * expected to give at the components' temperature.
  */
 import { linearRegression, rSquared } from 'simple-statistics';
+import { MAX_SLOPE_SHARE_PER_C } from './bounds.js';
 
 function requirePositive(name: string, value: number): void {
   if (!Number.isFinite(value) || value <= 0) throw new RangeError(`${name} must be a finite number greater than 0; got ${value}.`);
@@ -110,6 +111,25 @@ export function fitFreeRiseDensity(points: readonly CupTestPoint[]): FreeRiseFit
 
 export type ExpectedDensityMethod = 'cup_test_fit' | 'system_slope' | 'reference_only';
 
+/**
+ * When a line through the system's cup tests is trusted over the system's own slope (common
+ * practice for a calibration line: enough points, spread over a real range, a good fit, and no
+ * extrapolation beyond the tested span plus a small margin; the thresholds are conservative
+ * defaults, not from a standard).
+ */
+export const FIT_TRUST = {
+  minimumPoints: 5,
+  /** °C between the coldest and the warmest cup. */
+  minimumSpanC: 4,
+  minimumRSquared: 0.8,
+  /** °C beyond the tested span the line may still be used. */
+  extrapolationMarginC: 2,
+  /** Steepest believable slope, as a share of the density per °C (bounds.ts). */
+  maxSlopeShare: MAX_SLOPE_SHARE_PER_C,
+} as const;
+
+export type FitRejection = 'too_few_points' | 'narrow_span' | 'poor_fit' | 'unexpected_sign' | 'outside_tested_span';
+
 export interface ExpectedFreeRiseDensity {
   /** kg/m³. */
   readonly density: number;
@@ -120,13 +140,40 @@ export interface ExpectedFreeRiseDensity {
    * neither exists (or the temperature is the reference), so the reference density is taken as is.
    */
   readonly method: ExpectedDensityMethod;
+  /** Why the cup tests' line was not used (null when it was, or when there were no cups). */
+  readonly fitRejected: FitRejection | null;
+  /** One sentence: which estimate was used and why. */
+  readonly methodReason: string;
   readonly fit: FreeRiseFit | null;
 }
 
+/** Whether a fit may stand for the system at `temperature`; the reason when not. */
+export function fitRejection(fit: FreeRiseFit | null, points: readonly CupTestPoint[], temperature: number): FitRejection | null {
+  if (!fit || fit.count < FIT_TRUST.minimumPoints) return 'too_few_points';
+  const temperatures = points.map((p) => p.temperature).filter(Number.isFinite);
+  const low = Math.min(...temperatures);
+  const high = Math.max(...temperatures);
+  if (high - low < FIT_TRUST.minimumSpanC) return 'narrow_span';
+  if (fit.rSquared === null || fit.rSquared < FIT_TRUST.minimumRSquared) return 'poor_fit';
+  const density = fit.intercept + fit.slope * temperature;
+  // warmer components rise lighter: a rising or implausibly steep line is noise, not the system
+  if (!(fit.slope < 0) || !(density > 0) || -fit.slope > FIT_TRUST.maxSlopeShare * density) return 'unexpected_sign';
+  if (temperature < low - FIT_TRUST.extrapolationMarginC || temperature > high + FIT_TRUST.extrapolationMarginC) return 'outside_tested_span';
+  return null;
+}
+
+const REJECTION_WORDS: Readonly<Record<FitRejection, string>> = {
+  too_few_points: `fewer than ${FIT_TRUST.minimumPoints} cup tests`,
+  narrow_span: `the cup tests span less than ${FIT_TRUST.minimumSpanC} °C`,
+  poor_fit: `the cup tests fit a line poorly (R² under ${FIT_TRUST.minimumRSquared})`,
+  unexpected_sign: 'the cup tests give a line that does not fall with temperature as free-rise density does',
+  outside_tested_span: `the temperature is more than ${FIT_TRUST.extrapolationMarginC} °C outside the span of the cup tests`,
+};
+
 /**
  * Expected free-rise density at a component temperature: from a fit of the system's QC cup tests
- * when there are at least three at more than one temperature, else from the system's slope, else
- * the reference density itself.
+ * when the fit can be trusted (FIT_TRUST), else from the system's slope, else the reference density
+ * itself; `methodReason` says which and why.
  */
 export function expectedFreeRiseDensity(
   reference: FreeRiseReference,
@@ -134,10 +181,19 @@ export function expectedFreeRiseDensity(
   cupTests: readonly CupTestPoint[] = [],
 ): ExpectedFreeRiseDensity {
   const fit = fitFreeRiseDensity(cupTests);
-  if (fit) {
-    return { density: fit.intercept + fit.slope * temperature, temperature, method: 'cup_test_fit', fit };
+  const rejected = cupTests.length > 0 ? fitRejection(fit, cupTests, temperature) : null;
+  if (fit && cupTests.length > 0 && rejected === null) {
+    return { density: fit.intercept + fit.slope * temperature, temperature, method: 'cup_test_fit', fitRejected: null, methodReason: `From a line through ${fit.count} cup tests (R² ${Number((fit.rSquared ?? 0).toFixed(3))}).`, fit };
   }
   const method: ExpectedDensityMethod =
     reference.slope !== undefined && temperature !== reference.temperature ? 'system_slope' : 'reference_only';
-  return { density: freeRiseDensityFromSlope(reference, temperature), temperature, method, fit: null };
+  const own = method === 'system_slope' ? "From the system's own slope" : "The system's reference density";
+  return {
+    density: freeRiseDensityFromSlope(reference, temperature),
+    temperature,
+    method,
+    fitRejected: rejected,
+    methodReason: rejected ? `${own}: the cup tests were not used because ${REJECTION_WORDS[rejected]}.` : `${own}${cupTests.length === 0 ? ' (no cup tests on record)' : ''}.`,
+    fit,
+  };
 }

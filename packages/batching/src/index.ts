@@ -21,3 +21,7 @@ export * from './inputs/dates.js';
 export * from './inputs/system-parameters.js';
 export * from './inputs/mold-geometry.js';
 export * from './spc/index.js';
+export * from './findings.js';
+export * from './bounds.js';
+export * from './cup-test.js';
+export * from './release.js';

@@ -14,7 +14,7 @@ describe('judgeReading', () => {
     const r = judgeReading({ ...base, valueSi: 1.051, otherPartMassKg: 1 });
     expect(r.status).toBe('rejected');
     expect(r.reasons[0]!.code).toBe('RATIO_POLYOL_HEAVY');
-    expect(r.reasons[0]!.message).toMatch(/softer and tackier/);
+    expect(r.reasons[0]!.message).toMatch(/Part A \(the polyol side\) is heavy by 5\.1 %.*softer and tackier/);
     expect(r.reasons[0]!.measured).toBeCloseTo(5.1, 9);
   });
   it('names the isocyanate side as heavy when B is over (harder)', () => {
@@ -42,8 +42,43 @@ describe('judgeReading', () => {
 describe('judgeReading: masses against the targets', () => {
   const targets = { a: 1, b: 1, pigment: 0.04, total: 2.04 };
   const withTargets: JudgeInput = { ...base, targets, system: { ...system, maxPigmentPercent: 3 } };
-  it('does not judge a single part against its target mass (the ratio and the mixed shot do that)', () => {
-    expect(judgeReading({ ...withTargets, subject: 'part_b', valueSi: 0.5, otherPartMassKg: 0.5 }).status).toBe('accepted');
+  it('judges each part against its own band even when the ratio holds: both parts 30 % short is a short shot', () => {
+    const b = judgeReading({ ...withTargets, subject: 'part_b', valueSi: 0.7, otherPartMassKg: 0.7 });
+    expect(b.status).toBe('rejected');
+    expect(b.reasons.map((x) => x.code)).toEqual(['SHORT_SHOT']);
+    expect(b.reasons[0]!.message).toMatch(/^Short shot: part B is 700 g, 30 % under its target of 1 kg/);
+    // 6 % under: not far enough to be a short shot, but outside ±5 %
+    expect(judgeReading({ ...withTargets, subject: 'part_a', valueSi: 0.94, otherPartMassKg: 0.94 }).reasons.map((x) => x.code)).toEqual(['PART_A_MASS_LOW']);
+    expect(judgeReading({ ...withTargets, subject: 'part_a', valueSi: 1.05, otherPartMassKg: 1 }).status).toBe('accepted');
+    expect(judgeReading({ ...withTargets, subject: 'part_a', valueSi: 1.06, otherPartMassKg: 1 }).reasons.map((x) => x.code)).toEqual(['RATIO_POLYOL_HEAVY', 'PART_A_MASS_HIGH']);
+  });
+  it('judges the ratio only with both parts above zero; a zero part is its own reason', () => {
+    expect(judgeReading({ ...base, subject: 'part_b', valueSi: 1, otherPartMassKg: 0 }).status).toBe('accepted');
+    const zero = judgeReading({ ...base, subject: 'part_b', valueSi: 0, otherPartMassKg: 1 });
+    expect(zero.reasons.map((x) => x.code)).toEqual(['PART_NOT_WEIGHED']);
+    expect(zero.reasons[0]!.message).toMatch(/Part B weighed 0/);
+    const mixed = judgeReading({ ...withTargets, subject: 'mixed', valueSi: 2.04, partMassesKg: { a: 1, b: null } });
+    expect(mixed.reasons.map((x) => x.code)).toEqual(['PART_NOT_WEIGHED']);
+  });
+  it('says the heavy side in words, for the kind of foam', () => {
+    // e = (1 / 1.06) − 1 = −5.66 %: B heavy by 5.66 % (wording of the effects: common practice)
+    const r = judgeReading({ ...base, system: { ...system, kind: 'flexible' }, subject: 'part_b', valueSi: 1.06, otherPartMassKg: 1 });
+    expect(r.reasons[0]!.message).toBe('Part B (the isocyanate side) is heavy by 5.66 %, outside ±5 %: the foam will be firmer and harsher to the touch, weaker in tear and elongation.');
+    const skin = judgeReading({ ...base, system: { ...system, kind: 'integral-skin' }, subject: 'part_b', valueSi: 0.9, otherPartMassKg: 1 });
+    expect(skin.reasons[0]!.message).toMatch(/Part A \(the polyol side\) is heavy by 11\.1 %.*skin will be softer/);
+  });
+  it('holds the ratio to ± parts by weight when the system states it so (100 : 100 ± 3 pbw)', () => {
+    const pbw = { ...base, system: { ...system, ratioTolerancePbw: 3 } };
+    expect(judgeReading({ ...pbw, subject: 'part_b', valueSi: 1.03, otherPartMassKg: 1 }).status).toBe('accepted');
+    const r = judgeReading({ ...pbw, subject: 'part_b', valueSi: 1.031, otherPartMassKg: 1 });
+    expect(r.reasons[0]).toMatchObject({ code: 'RATIO_ISOCYANATE_HEAVY', unit: 'pbw', limit: 3 });
+    expect(r.reasons[0]!.measured).toBeCloseTo(3.1, 9);
+  });
+  it('judges the ratio against the targets when the pigment is pre-blended in B (B heavier by design)', () => {
+    // 100:100 with 4 % of A+B pre-blended in B: targets 1 : 1.08, so B at 1.08 is on ratio
+    const blended = { ...base, targets: { a: 1, b: 1.08, pigment: 0, total: 2.08 } };
+    expect(judgeReading({ ...blended, subject: 'part_b', valueSi: 1.08, otherPartMassKg: 1 }).status).toBe('accepted');
+    expect(judgeReading({ ...base, subject: 'part_b', valueSi: 1.08, otherPartMassKg: 1 }).reasons[0]!.code).toBe('RATIO_ISOCYANATE_HEAVY');
   });
   it('judges the mixed shot against the total, exactly 5 % under passing, and says what a short or heavy shot does', () => {
     expect(judgeReading({ ...withTargets, subject: 'mixed', valueSi: 2.04 * 0.95 }).status).toBe('accepted');

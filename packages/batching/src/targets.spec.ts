@@ -147,21 +147,22 @@ describe('computeBatchTargets: ratio', () => {
 
 describe('computeBatchTargets: index', () => {
   it('computes the index at the target ratio and over the tolerance band', () => {
-    // Per 100 g of B: OH 56.1 → 0.1 eq, 0.9 g water → 0.1 eq; 100 g of A at 42.02 %NCO → 1 eq → index 500.
-    const result = computeBatchTargets(base({ system: { ...system, ncoPercent: 42.02, hydroxylNumber: 56.1, waterPbw: 0.9 } }));
-    expect(result.isocyanateIndex!.value).toBeCloseTo(500, 9);
-    expect(result.isocyanateIndex!.atToleranceLimits.low).toBeCloseTo(475, 9);
-    expect(result.isocyanateIndex!.atToleranceLimits.high).toBeCloseTo(525, 9);
+    // Equivalent-weight method. Per 100 g of B: OH 56.1 → 0.1 eq, 0.9 g water → 0.1 eq; 100 g of A at
+    // 8.404 %NCO → 0.2 eq → index 100.
+    const result = computeBatchTargets(base({ system: { ...system, ncoPercent: 8.404, hydroxylNumber: 56.1, waterPbw: 0.9 } }));
+    expect(result.isocyanateIndex!.value).toBeCloseTo(100, 9);
+    expect(result.isocyanateIndex!.atToleranceLimits.low).toBeCloseTo(95, 9);
+    expect(result.isocyanateIndex!.atToleranceLimits.high).toBeCloseTo(105, 9);
   });
 
   it('divides by (1 ± t) when B is the isocyanate', () => {
     const result = computeBatchTargets(
-      base({ system: { ...system, isocyanatePart: 'B', ncoPercent: 42.02, hydroxylNumber: 56.1 } }),
+      base({ system: { ...system, isocyanatePart: 'B', ncoPercent: 8.404, hydroxylNumber: 56.1 } }),
     );
     const index = result.isocyanateIndex!;
-    expect(index.value).toBeCloseTo(1000, 9);
-    expect(index.atToleranceLimits.low).toBeCloseTo(1000 / 1.05, 9);
-    expect(index.atToleranceLimits.high).toBeCloseTo(1000 / 0.95, 9);
+    expect(index.value).toBeCloseTo(200, 9);
+    expect(index.atToleranceLimits.low).toBeCloseTo(200 / 1.05, 9);
+    expect(index.atToleranceLimits.high).toBeCloseTo(200 / 0.95, 9);
   });
 
   it('is null without %NCO and OH data', () => {
@@ -182,12 +183,21 @@ describe('computeBatchTargets: free-rise density', () => {
     expect(result.warnings.map((w) => w.code)).toContain('PACK_FACTOR_BELOW_ONE');
   });
 
-  it('prefers a fit of three or more cup tests', () => {
-    const cupTests = [18, 22, 26].map((temperature) => ({ temperature, density: 62 - temperature }));
+  it('prefers a fit of five or more cup tests over a real span', () => {
+    const cupTests = [18, 20, 22, 24, 26].map((temperature) => ({ temperature, density: 62 - temperature }));
     const result = computeBatchTargets(base({ system: sloped, options: { packFactor: 1.2, componentTemperature: 24 }, cupTests }));
     expect(result.expectedFreeRiseDensity.method).toBe('cup_test_fit');
     expect(result.expectedFreeRiseDensity.density.value).toBeCloseTo(38, 10);
-    expect(result.expectedFreeRiseDensity.fit!.count).toBe(3);
+    expect(result.expectedFreeRiseDensity.fit!.count).toBe(5);
+  });
+
+  it('falls back to the system slope, saying why, when the cups span 0.2 °C (a +15 kg/m³/°C line)', () => {
+    const cupTests = [{ temperature: 22.0, density: 40 }, { temperature: 22.1, density: 41.5 }, { temperature: 22.2, density: 43 }, { temperature: 22.1, density: 41.5 }, { temperature: 22.0, density: 40 }];
+    const result = computeBatchTargets(base({ system: sloped, options: { packFactor: 1.2, componentTemperature: 30 }, cupTests }));
+    expect(result.expectedFreeRiseDensity.method).toBe('system_slope');
+    expect(result.expectedFreeRiseDensity.fitRejected).toBe('narrow_span');
+    expect(result.expectedFreeRiseDensity.methodReason).toMatch(/span less than 4 °C/);
+    expect(result.expectedFreeRiseDensity.density.value).toBeCloseTo(40 - 0.5 * 8, 10);
   });
 
   it('uses the reference temperature when none is measured', () => {
@@ -215,11 +225,21 @@ describe('computeBatchTargets: warnings', () => {
     expect(codes(base({ options: { targetDensity: 3 * PCF, scale: { readability: 0.0001, capacity: 5 } } }))).toEqual([]);
   });
 
-  it('warns when the batch is too small for the scale', () => {
-    const tiny = base({ mold: { volume: 0.00005 }, options: { packFactor: 1.5, scale: { readability: 0.001 } } });
+  it('warns when the tolerance band is too narrow for the scale', () => {
+    const tiny = base({ mold: { volume: 0.00005 }, options: { packFactor: 1.5, scale: { readability: 0.00005 } } });
     const warning = computeBatchTargets(tiny).warnings.find((w) => w.code === 'TOLERANCE_BELOW_SCALE_RESOLUTION');
     expect(warning).toBeDefined();
-    expect(warning!.limit).toBeCloseTo(0.005, 15);
+    expect(warning!.limit).toBeCloseTo(0.00025, 15);
+  });
+
+  it('refuses a scale on which a target rounds to zero or spans under 20 divisions', () => {
+    const tiny = base({ mold: { volume: 0.00005 }, options: { packFactor: 1.5, scale: { readability: 0.001 } } });
+    expect(() => computeBatchTargets(tiny)).toThrow(BatchingInputError);
+    try {
+      computeBatchTargets(tiny);
+    } catch (e) {
+      expect((e as BatchingInputError).issues[0]).toMatchObject({ pointer: '/options/scale/readability', code: 'below_minimum_load' });
+    }
   });
 
   it('uses the narrower side of the B band when B is the smaller part', () => {
@@ -249,12 +269,12 @@ describe('computeBatchTargets: warnings', () => {
     });
     expect(found).toEqual([
       'PACK_FACTOR_ABOVE_LIMIT',
-      'PIGMENT_ABOVE_LIMIT',
-      'COMPONENT_TEMPERATURE_OUTSIDE_WINDOW',
+      'PIGMENT_OVER_LIMIT',
+      'TEMPERATURE_ABOVE_WINDOW',
       'EXOTHERM_RISK_MASS',
-      'SCALE_CAPACITY_EXCEEDED',
+      'OVER_CAPACITY',
       'LOT_EXPIRED',
-      'SCALE_CALIBRATION_OVERDUE',
+      'CALIBRATION_OVERDUE',
     ]);
   });
 

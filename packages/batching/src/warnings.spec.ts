@@ -17,7 +17,7 @@ import {
 describe('checkPackFactor', () => {
   it('flags a pack factor below 1 as a short fill', () => {
     const [found] = checkPackFactor(0.9, 3);
-    expect(found).toMatchObject({ code: 'PACK_FACTOR_BELOW_ONE', severity: 'warning', measured: 0.9, limit: 1, unit: '1' });
+    expect(found).toMatchObject({ code: 'PACK_FACTOR_BELOW_ONE', severity: 'danger', measured: 0.9, limit: 1, unit: '1' });
     expect(found!.message).toMatch(/short fill/);
   });
 
@@ -26,7 +26,9 @@ describe('checkPackFactor', () => {
   });
 
   it('is quiet at exactly 1 and at exactly the limit', () => {
-    expect(checkPackFactor(1, 3)).toEqual([]);
+    expect(checkPackFactor(1.1, 3)).toEqual([]);
+    // from 1 up to 1.1 the fill is marginal: a caution, not a danger
+    expect(checkPackFactor(1, 3).map((w) => [w.code, w.severity])).toEqual([['PACK_FACTOR_MARGINAL', 'caution']]);
     expect(checkPackFactor(3, 3)).toEqual([]);
     expect(checkPackFactor(0.1 * 3 * 10, 3)).toEqual([]);
   });
@@ -60,7 +62,7 @@ describe('checkToleranceResolution', () => {
 
 describe('checkPigment', () => {
   it('flags pigment above the maximum, not at it', () => {
-    expect(checkPigment(5.5, 5)).toMatchObject({ code: 'PIGMENT_ABOVE_LIMIT', measured: 5.5, limit: 5, unit: '%' });
+    expect(checkPigment(5.5, 5)).toMatchObject({ code: 'PIGMENT_OVER_LIMIT', measured: 5.5, limit: 5, unit: '%' });
     expect(checkPigment(5, 5)).toBeNull();
     expect(checkPigment(9, undefined)).toBeNull();
   });
@@ -100,7 +102,7 @@ describe('dates', () => {
   });
 
   it('flags a scale past its calibration due date, not on it', () => {
-    expect(checkScaleCalibration('2026-01-31', '2026-02-01')).toMatchObject({ code: 'SCALE_CALIBRATION_OVERDUE', measured: 1, unit: 'd' });
+    expect(checkScaleCalibration('2026-01-31', '2026-02-01')).toMatchObject({ code: 'CALIBRATION_OVERDUE', measured: 1, unit: 'd' });
     expect(checkScaleCalibration('2026-01-31', '2026-01-31')).toBeNull();
   });
 
@@ -111,7 +113,7 @@ describe('dates', () => {
 
 describe('checkScaleCapacity', () => {
   it('flags a pour heavier than the scale can weigh', () => {
-    expect(checkScaleCapacity(2.2, 2)).toMatchObject({ code: 'SCALE_CAPACITY_EXCEEDED', severity: 'danger', measured: 2.2, limit: 2 });
+    expect(checkScaleCapacity(2.2, 2)).toMatchObject({ code: 'OVER_CAPACITY', severity: 'danger', measured: 2.2, limit: 2 });
     expect(checkScaleCapacity(2, 2)).toBeNull();
   });
 });
@@ -126,8 +128,8 @@ describe('checkComponentTemperature', () => {
 
 describe('messages and severities', () => {
   it('gives every code a severity', () => {
-    expect(Object.values(WARNING_SEVERITY).every((s) => s === 'warning' || s === 'danger')).toBe(true);
-    expect(Object.keys(WARNING_SEVERITY)).toHaveLength(9);
+    expect(Object.values(WARNING_SEVERITY).every((s) => s === 'caution' || s === 'warning' || s === 'danger')).toBe(true);
+    expect(Object.keys(WARNING_SEVERITY)).toHaveLength(11);
   });
 
   it('writes masses in grams below 1 kg and kilograms above', () => {

@@ -5,20 +5,25 @@
  * Severity: `danger` where going ahead can hurt someone or is likely to scrap the batch or damage a
  * mold; `warning` where an engineer should look before pouring.
  */
+import { finding, type FindingCode, type FindingFacts, type FindingSeverity } from './findings.js';
 import { isoDateToDayNumber } from './validation.js';
 
-export type WarningSeverity = 'warning' | 'danger';
+export type WarningSeverity = FindingSeverity;
 
-export type WarningCode =
+export type WarningCode = Extract<
+  FindingCode,
   | 'PACK_FACTOR_BELOW_ONE'
+  | 'PACK_FACTOR_MARGINAL'
   | 'PACK_FACTOR_ABOVE_LIMIT'
   | 'TOLERANCE_BELOW_SCALE_RESOLUTION'
-  | 'PIGMENT_ABOVE_LIMIT'
+  | 'PIGMENT_OVER_LIMIT'
   | 'EXOTHERM_RISK_MASS'
   | 'LOT_EXPIRED'
-  | 'SCALE_CALIBRATION_OVERDUE'
-  | 'SCALE_CAPACITY_EXCEEDED'
-  | 'COMPONENT_TEMPERATURE_OUTSIDE_WINDOW';
+  | 'CALIBRATION_OVERDUE'
+  | 'OVER_CAPACITY'
+  | 'TEMPERATURE_BELOW_WINDOW'
+  | 'TEMPERATURE_ABOVE_WINDOW'
+>;
 
 export interface BatchWarning {
   readonly code: WarningCode;
@@ -28,20 +33,32 @@ export interface BatchWarning {
   readonly limit?: number;
   /** Unit of `measured` and `limit`: SI (kg, degC, '1' for a pure number, '%' for percents, 'd' for days). */
   readonly unit?: string;
+  /** What the sentence needs besides the figures (to write it again in another unit system). */
+  readonly facts?: FindingFacts;
 }
 
 export const WARNING_SEVERITY: Readonly<Record<WarningCode, WarningSeverity>> = {
-  PACK_FACTOR_BELOW_ONE: 'warning',
+  // the foam cannot fill the cavity: a short part is certain, so the batch should not be poured as planned
+  PACK_FACTOR_BELOW_ONE: 'danger',
+  // just above 1 a slightly cold or aged component leaves the part short
+  PACK_FACTOR_MARGINAL: 'caution',
   // Over-packing past the system's limit raises mold pressure: molds open, flash or crack.
   PACK_FACTOR_ABOVE_LIMIT: 'danger',
   TOLERANCE_BELOW_SCALE_RESOLUTION: 'warning',
-  PIGMENT_ABOVE_LIMIT: 'warning',
+  PIGMENT_OVER_LIMIT: 'warning',
   EXOTHERM_RISK_MASS: 'danger',
   LOT_EXPIRED: 'danger',
-  SCALE_CALIBRATION_OVERDUE: 'warning',
-  SCALE_CAPACITY_EXCEEDED: 'danger',
-  COMPONENT_TEMPERATURE_OUTSIDE_WINDOW: 'warning',
+  CALIBRATION_OVERDUE: 'warning',
+  OVER_CAPACITY: 'danger',
+  TEMPERATURE_BELOW_WINDOW: 'warning',
+  TEMPERATURE_ABOVE_WINDOW: 'warning',
 };
+
+/**
+ * Pack factors from 1 up to this are marginal: a caution. Common practice: molders pack flexible
+ * foam by 10–20 % at least, so a fill that barely reaches the walls is not left to chance.
+ */
+export const MARGINAL_PACK_FACTOR = 1.1;
 
 /**
  * The ± tolerance band on the smaller component should span at least this many scale divisions.
@@ -67,8 +84,17 @@ function exceeds(measured: number, limit: number): boolean {
   return measured > limit + EPSILON * Math.max(1, Math.abs(limit));
 }
 
-function warning(code: WarningCode, message: string, numbers: Pick<BatchWarning, 'measured' | 'limit' | 'unit'> = {}): BatchWarning {
-  return { code, severity: WARNING_SEVERITY[code], message, ...numbers };
+function warning(code: WarningCode, numbers: { measured?: number; limit?: number; unit?: string } = {}, facts: FindingFacts = {}): BatchWarning {
+  const f = finding(code, numbers, facts);
+  return {
+    code,
+    severity: WARNING_SEVERITY[code],
+    message: f.message,
+    ...(numbers.measured !== undefined ? { measured: numbers.measured } : {}),
+    ...(numbers.limit !== undefined ? { limit: numbers.limit } : {}),
+    ...(numbers.unit !== undefined ? { unit: numbers.unit } : {}),
+    facts,
+  };
 }
 
 /** A mass for a sentence: grams below 1 kg, kilograms above. */
@@ -82,28 +108,19 @@ function round4(x: number): number {
 }
 
 /**
- * Pack factor below 1 (the foam cannot fill the cavity: short fill, voids) or above the system's
- * limit. `basis` says which free-rise density the pack factor is against, for the message.
+ * Pack factor below 1 (the foam cannot fill the cavity: short fill, voids: a danger), barely above 1
+ * (a caution), or above the system's limit. `basis` says which free-rise density the pack factor is
+ * against, for the message.
  */
 export function checkPackFactor(packFactor: number, limit: number | undefined, basis = 'the free-rise density'): BatchWarning[] {
   const found: BatchWarning[] = [];
   if (packFactor < 1 - EPSILON) {
-    found.push(
-      warning(
-        'PACK_FACTOR_BELOW_ONE',
-        `Pack factor ${round4(packFactor)} against ${basis} is below 1: the foam will not fill the cavity (short fill, voids).`,
-        { measured: packFactor, limit: 1, unit: '1' },
-      ),
-    );
+    found.push(warning('PACK_FACTOR_BELOW_ONE', { measured: packFactor, limit: 1, unit: '1' }, { basis }));
+  } else if (packFactor < MARGINAL_PACK_FACTOR - EPSILON) {
+    found.push(warning('PACK_FACTOR_MARGINAL', { measured: packFactor, limit: MARGINAL_PACK_FACTOR, unit: '1' }, { basis }));
   }
   if (limit !== undefined && exceeds(packFactor, limit)) {
-    found.push(
-      warning(
-        'PACK_FACTOR_ABOVE_LIMIT',
-        `Pack factor ${round4(packFactor)} against ${basis} is above the system's limit of ${limit}: expect high mold pressure, flash or a mold that opens.`,
-        { measured: packFactor, limit, unit: '1' },
-      ),
-    );
+    found.push(warning('PACK_FACTOR_ABOVE_LIMIT', { measured: packFactor, limit, unit: '1' }, { basis }));
   }
   return found;
 }
@@ -124,31 +141,19 @@ export function checkToleranceResolution(input: ToleranceResolutionInput): Batch
   const limit = minimum * input.readability;
   if (!(input.bandHalfWidth < limit * (1 - EPSILON))) return null;
   const divisions = input.bandHalfWidth / input.readability;
-  return warning(
-    'TOLERANCE_BELOW_SCALE_RESOLUTION',
-    `The ratio tolerance on part ${input.part} is ±${describeMass(input.bandHalfWidth)}, only ${round4(divisions)} divisions of a ${describeMass(input.readability)} scale (at least ${minimum} needed): the scale cannot resolve the band. Mix a larger batch or use a finer scale.`,
-    { measured: input.bandHalfWidth, limit, unit: 'kg' },
-  );
+  return warning('TOLERANCE_BELOW_SCALE_RESOLUTION', { measured: input.bandHalfWidth, limit, unit: 'kg' }, { part: input.part, readability: input.readability, divisions: round4(divisions), minimum });
 }
 
-/** Pigment above the system's maximum percent of A+B. */
-export function checkPigment(pigmentPercent: number, maxPigmentPercent: number | undefined): BatchWarning | null {
+/** Pigment above the system's maximum percent (of `basis`: A+B unless the system doses otherwise). */
+export function checkPigment(pigmentPercent: number, maxPigmentPercent: number | undefined, basis = 'A + B'): BatchWarning | null {
   if (maxPigmentPercent === undefined || !exceeds(pigmentPercent, maxPigmentPercent)) return null;
-  return warning(
-    'PIGMENT_ABOVE_LIMIT',
-    `Pigment at ${pigmentPercent} % of A+B is above the system's maximum of ${maxPigmentPercent} %: excess pigment can upset the cure and the cell structure.`,
-    { measured: pigmentPercent, limit: maxPigmentPercent, unit: '%' },
-  );
+  return warning('PIGMENT_OVER_LIMIT', { measured: pigmentPercent, limit: maxPigmentPercent, unit: '%' }, { basis });
 }
 
 /** A mixed mass large enough for a dangerous exotherm in a single pour. */
 export function checkExothermMass(mixedMass: number, limit = DEFAULT_EXOTHERM_MASS_LIMIT): BatchWarning | null {
   if (!exceeds(mixedMass, limit)) return null;
-  return warning(
-    'EXOTHERM_RISK_MASS',
-    `A single pour of ${describeMass(mixedMass)} is above ${describeMass(limit)}: a large mass of mixed foam can overheat from its own exotherm (scorch, smoke, fire). Pour in layers or smaller shots and keep within the supplier's guidance (TDS/SDS).`,
-    { measured: mixedMass, limit, unit: 'kg' },
-  );
+  return warning('EXOTHERM_RISK_MASS', { measured: mixedMass, limit, unit: 'kg' });
 }
 
 export interface LotExpiry {
@@ -170,15 +175,7 @@ export function checkLotExpiry(lots: readonly LotExpiry[], today: string): Batch
   return lots.flatMap((lot) => {
     const daysPast = daysBetween(lot.expiresOn, today);
     if (daysPast <= 0) return [];
-    const name = lot.lotCode ? `lot ${lot.lotCode}` : 'the lot';
-    const what = lot.part === 'pigment' ? 'pigment' : `part ${lot.part}`;
-    return [
-      warning('LOT_EXPIRED', `The ${what} ${name} expired on ${lot.expiresOn}, ${daysPast} day${daysPast === 1 ? '' : 's'} ago.`, {
-        measured: daysPast,
-        limit: 0,
-        unit: 'd',
-      }),
-    ];
+    return [warning('LOT_EXPIRED', { measured: daysPast, limit: 0, unit: 'd' }, { part: lot.part, date: lot.expiresOn, ...(lot.lotCode ? { lot: lot.lotCode } : {}) })];
   });
 }
 
@@ -186,21 +183,13 @@ export function checkLotExpiry(lots: readonly LotExpiry[], today: string): Batch
 export function checkScaleCalibration(calibrationDueOn: string, today: string): BatchWarning | null {
   const daysOver = daysBetween(calibrationDueOn, today);
   if (daysOver <= 0) return null;
-  return warning(
-    'SCALE_CALIBRATION_OVERDUE',
-    `The scale was due for calibration on ${calibrationDueOn}, ${daysOver} day${daysOver === 1 ? '' : 's'} ago: its readings cannot be trusted for the ratio.`,
-    { measured: daysOver, limit: 0, unit: 'd' },
-  );
+  return warning('CALIBRATION_OVERDUE', { measured: daysOver, limit: 0, unit: 'd' }, { date: calibrationDueOn });
 }
 
 /** The pour (all parts weighed into one container, tare not included) exceeds the scale's capacity. */
 export function checkScaleCapacity(mass: number, capacity: number): BatchWarning | null {
   if (!exceeds(mass, capacity)) return null;
-  return warning(
-    'SCALE_CAPACITY_EXCEEDED',
-    `The pour of ${describeMass(mass)} is above the scale's capacity of ${describeMass(capacity)} (before the container's tare): split the batch or use a larger scale.`,
-    { measured: mass, limit: capacity, unit: 'kg' },
-  );
+  return warning('OVER_CAPACITY', { measured: mass, limit: capacity, unit: 'kg' });
 }
 
 /** The component temperature (°C) is outside the system's window. */
@@ -208,9 +197,5 @@ export function checkComponentTemperature(temperature: number, window: { readonl
   const below = temperature < window.min - EPSILON;
   const above = temperature > window.max + EPSILON;
   if (!below && !above) return null;
-  return warning(
-    'COMPONENT_TEMPERATURE_OUTSIDE_WINDOW',
-    `Components at ${round4(temperature)} °C are ${below ? 'below' : 'above'} the system's window of ${window.min}–${window.max} °C: rise, density and cure will differ from the data sheet.`,
-    { measured: temperature, limit: below ? window.min : window.max, unit: 'degC' },
-  );
+  return warning(below ? 'TEMPERATURE_BELOW_WINDOW' : 'TEMPERATURE_ABOVE_WINDOW', { measured: temperature, limit: below ? window.min : window.max, unit: 'degC' }, { otherEdge: below ? window.max : window.min });
 }

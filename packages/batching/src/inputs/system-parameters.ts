@@ -3,7 +3,8 @@
  * with their unit), and as the computation needs it (MaterialSystemParameters). The computation's
  * own input checks decide what makes physical sense, so a system that can be stored can be computed.
  */
-import { computeBatchTargets, validateBatchTargetsInput, DEFAULT_RATIO_TOLERANCE_PERCENT, type MaterialSystemParameters } from '../targets.js';
+import { computeBatchTargets, validateBatchTargetsInput, DEFAULT_RATIO_TOLERANCE_PERCENT, type MaterialSystemParameters, type PigmentDoseBasis, type PigmentPlacement, type ReleaseRequirement } from '../targets.js';
+import type { SystemKind } from '../findings.js';
 import { BatchingInputError } from '../errors.js';
 import type { FieldError } from './field-errors.js';
 import { QuantityReader, opt, type Quantity } from './quantities.js';
@@ -37,6 +38,15 @@ export interface MaterialSystemInput {
   waterPbw?: number | null;
   cautionsText?: string | null;
   changeNote?: string | null;
+  ratioTolerancePbw?: number | null;
+  pigmentDoseBasis?: PigmentDoseBasis;
+  pigmentPlacement?: PigmentPlacement;
+  pigmentCarrierHydroxylNumber?: number | null;
+  creamTimeWindow?: { min: Quantity; max: Quantity } | null;
+  riseTimeWindow?: { min: Quantity; max: Quantity } | null;
+  tackFreeTimeWindow?: { min: Quantity; max: Quantity } | null;
+  freeRiseDensityBand?: { min: Quantity; max: Quantity } | null;
+  releaseRequires?: ReleaseRequirement[];
 }
 
 /** The parameter columns of material_system_revisions (everything a revision pins down). */
@@ -69,6 +79,20 @@ export interface RevisionColumns {
   ambient_temperature_max_c: number | null;
   max_relative_humidity_percent: number | null;
   mass_tolerance_percent: number | null;
+  ratio_tolerance_pbw: number | null;
+  pigment_dose_basis: PigmentDoseBasis;
+  pigment_placement: PigmentPlacement;
+  pigment_carrier_oh_number: number | null;
+  cream_time_min_s: number | null;
+  cream_time_max_s: number | null;
+  rise_time_min_s: number | null;
+  rise_time_max_s: number | null;
+  tack_free_time_min_s: number | null;
+  tack_free_time_max_s: number | null;
+  free_rise_density_min_kg_m3: number | null;
+  free_rise_density_max_kg_m3: number | null;
+  /** Comma-separated ReleaseRequirement values (text, so revisions compare with ===); '' for none. */
+  release_requires: string;
 }
 
 export const REVISION_COLUMNS: readonly (keyof RevisionColumns)[] = [
@@ -79,12 +103,15 @@ export const REVISION_COLUMNS: readonly (keyof RevisionColumns)[] = [
   'nco_percent', 'hydroxyl_number_mg_koh_g', 'water_pbw', 'cautions_text',
   'mold_temperature_min_c', 'mold_temperature_max_c', 'ambient_temperature_min_c', 'ambient_temperature_max_c',
   'max_relative_humidity_percent', 'mass_tolerance_percent',
+  'ratio_tolerance_pbw', 'pigment_dose_basis', 'pigment_placement', 'pigment_carrier_oh_number',
+  'cream_time_min_s', 'cream_time_max_s', 'rise_time_min_s', 'rise_time_max_s', 'tack_free_time_min_s', 'tack_free_time_max_s',
+  'free_rise_density_min_kg_m3', 'free_rise_density_max_kg_m3', 'release_requires',
 ];
-const WINDOWS = new Set(['componentTemperatureWindow', 'moldTemperatureWindow', 'ambientTemperatureWindow']);
+const WINDOWS = new Set(['componentTemperatureWindow', 'moldTemperatureWindow', 'ambientTemperatureWindow', 'creamTimeWindow', 'riseTimeWindow', 'tackFreeTimeWindow', 'freeRiseDensityBand']);
 
 /** API fields given as `{ value, unit }`: a pointer at one of them names its value. */
 const QUANTITY_FIELDS = new Set(['freeRiseDensity', 'freeRiseReferenceTemperature', 'freeRiseDensitySlope', 'potLife', 'demoldTime', 'fullCureTime', 'exothermMassLimit']);
-const API_NAME: Record<string, string> = { packFactorLimit: 'maxPackFactor' };
+const API_NAME: Record<string, string> = { packFactorLimit: 'maxPackFactor', hydroxylNumber: 'hydroxylNumber' };
 
 /**
  * A pointer of the computation (`/system/packFactorLimit`, `/system/componentTemperatureWindow/min`)
@@ -106,6 +133,11 @@ export function readSystemInput(body: MaterialSystemInput, base = ''): { cols: R
   const window = body.componentTemperatureWindow ?? null;
   const mold = body.moldTemperatureWindow ?? null;
   const air = body.ambientTemperatureWindow ?? null;
+  const win = (field: 'creamTimeWindow' | 'riseTimeWindow' | 'tackFreeTimeWindow', edge: 'min' | 'max') => {
+    const w = body[field];
+    return w ? (q.read('time', w[edge], at(`${field}/${edge}`), { nonNegative: true }) ?? null) : null;
+  };
+  const band = body.freeRiseDensityBand ?? null;
   const cols: RevisionColumns = {
     ratio_basis: body.ratioBasis,
     ratio_a: body.ratio?.a,
@@ -135,11 +167,24 @@ export function readSystemInput(body: MaterialSystemInput, base = ''): { cols: R
     ambient_temperature_max_c: air ? (q.read('temperature', air.max, at('ambientTemperatureWindow/max')) ?? null) : null,
     max_relative_humidity_percent: body.maxRelativeHumidity ?? null,
     mass_tolerance_percent: body.massTolerancePercent ?? null,
+    ratio_tolerance_pbw: body.ratioTolerancePbw ?? null,
+    pigment_dose_basis: body.pigmentDoseBasis ?? 'ab',
+    pigment_placement: body.pigmentPlacement ?? 'separate',
+    pigment_carrier_oh_number: body.pigmentCarrierHydroxylNumber ?? null,
+    cream_time_min_s: win('creamTimeWindow', 'min'),
+    cream_time_max_s: win('creamTimeWindow', 'max'),
+    rise_time_min_s: win('riseTimeWindow', 'min'),
+    rise_time_max_s: win('riseTimeWindow', 'max'),
+    tack_free_time_min_s: win('tackFreeTimeWindow', 'min'),
+    tack_free_time_max_s: win('tackFreeTimeWindow', 'max'),
+    free_rise_density_min_kg_m3: band ? (q.read('density', band.min, at('freeRiseDensityBand/min'), { positive: true }) ?? null) : null,
+    free_rise_density_max_kg_m3: band ? (q.read('density', band.max, at('freeRiseDensityBand/max'), { positive: true }) ?? null) : null,
+    release_requires: [...new Set(body.releaseRequires ?? [])].join(','),
   };
   const errors = [...q.errors];
   if (errors.length === 0) {
     try {
-      validateBatchTargetsInput({ system: parametersOf(cols), freeRiseCup: { volume: 1 } });
+      validateBatchTargetsInput({ system: parametersOf(cols, body.kind), freeRiseCup: { volume: 0.001 } });
     } catch (e) {
       if (!(e instanceof BatchingInputError)) throw e;
       errors.push(...translate(e, (p) => (p.startsWith('/system') ? systemPointer(p, base) : p)));
@@ -148,10 +193,12 @@ export function readSystemInput(body: MaterialSystemInput, base = ''): { cols: R
   return { cols, errors };
 }
 
-/** SI revision columns → the computation's parameters. */
-export function parametersOf(r: RevisionColumns): MaterialSystemParameters {
+/** SI revision columns → the computation's parameters (`kind` from the system, when known). */
+export function parametersOf(r: RevisionColumns, kind?: SystemKind | string): MaterialSystemParameters {
   const window = windowOf(r.component_temperature_min_c, r.component_temperature_max_c);
+  const requires = (r.release_requires ?? '').split(',').filter(Boolean) as ReleaseRequirement[];
   return {
+    ...(kind === 'flexible' || kind === 'integral-skin' || kind === 'other' ? { kind } : {}),
     ratioBasis: r.ratio_basis,
     ratio: { a: r.ratio_a, b: r.ratio_b },
     specificGravityA: r.specific_gravity_a,
@@ -176,11 +223,20 @@ export function parametersOf(r: RevisionColumns): MaterialSystemParameters {
     packFactorLimit: opt(r.max_pack_factor),
     exothermMassLimit: opt(r.exotherm_mass_limit_kg),
     cautionsText: opt(r.cautions_text),
+    ratioTolerancePbw: opt(r.ratio_tolerance_pbw ?? null),
+    pigmentDoseBasis: r.pigment_dose_basis ?? 'ab',
+    pigmentPlacement: r.pigment_placement ?? 'separate',
+    pigmentCarrierHydroxylNumber: opt(r.pigment_carrier_oh_number ?? null),
+    creamTimeWindow: windowOf(r.cream_time_min_s ?? null, r.cream_time_max_s ?? null),
+    riseTimeWindow: windowOf(r.rise_time_min_s ?? null, r.rise_time_max_s ?? null),
+    tackFreeTimeWindow: windowOf(r.tack_free_time_min_s ?? null, r.tack_free_time_max_s ?? null),
+    freeRiseDensityBand: windowOf(r.free_rise_density_min_kg_m3 ?? null, r.free_rise_density_max_kg_m3 ?? null),
+    ...(requires.length ? { releaseRequires: requires } : {}),
   };
 }
 
 function windowOf(min: number | null, max: number | null): { min: number; max: number } | undefined {
-  return min !== null && max !== null ? { min, max } : undefined;
+  return min !== null && max !== null && min !== undefined && max !== undefined ? { min, max } : undefined;
 }
 
 /** True when two revisions pin down the same parameters (a PUT that changes none writes no revision). */
@@ -190,7 +246,13 @@ export function sameParameters(a: RevisionColumns, b: RevisionColumns): boolean 
 
 /** The parameters as the API shows them: SI, each field named with its unit. */
 export function parametersView(r: RevisionColumns) {
-  const derived = computeBatchTargets({ system: parametersOf(r), freeRiseCup: { volume: 0.001 } });
+  let derived: { weightRatio: unknown; volumeRatio: unknown; isocyanateIndex: { value: number } | null } = { weightRatio: null, volumeRatio: null, isocyanateIndex: null };
+  try {
+    derived = computeBatchTargets({ system: parametersOf(r), freeRiseCup: { volume: 0.001 } });
+  } catch (e) {
+    // a revision stored before the physical bounds were checked still shows; batches refuse it with a 422
+    if (!(e instanceof BatchingInputError)) throw e;
+  }
   return {
     ratioBasis: r.ratio_basis,
     ratio: { a: r.ratio_a, b: r.ratio_b },
@@ -209,6 +271,19 @@ export function parametersView(r: RevisionColumns) {
     ambientTemperatureMaxC: r.ambient_temperature_max_c ?? null,
     maxRelativeHumidityPercent: r.max_relative_humidity_percent ?? null,
     massTolerancePercent: r.mass_tolerance_percent ?? null,
+    ratioTolerancePbw: r.ratio_tolerance_pbw ?? null,
+    pigmentDoseBasis: r.pigment_dose_basis ?? 'ab',
+    pigmentPlacement: r.pigment_placement ?? 'separate',
+    pigmentCarrierHydroxylNumber: r.pigment_carrier_oh_number ?? null,
+    creamTimeMinS: r.cream_time_min_s ?? null,
+    creamTimeMaxS: r.cream_time_max_s ?? null,
+    riseTimeMinS: r.rise_time_min_s ?? null,
+    riseTimeMaxS: r.rise_time_max_s ?? null,
+    tackFreeTimeMinS: r.tack_free_time_min_s ?? null,
+    tackFreeTimeMaxS: r.tack_free_time_max_s ?? null,
+    freeRiseDensityMinKgM3: r.free_rise_density_min_kg_m3 ?? null,
+    freeRiseDensityMaxKgM3: r.free_rise_density_max_kg_m3 ?? null,
+    releaseRequires: (r.release_requires ?? '').split(',').filter(Boolean),
     potLifeS: r.pot_life_s,
     demoldTimeS: r.demold_time_s,
     fullCureTimeS: r.full_cure_time_s,
