@@ -10,6 +10,7 @@ import { validateEnv } from './config/env.js';
 import { workerEnabled } from './config/process-role.js';
 import { DevicesModule } from './devices/devices.module.js';
 import { BatchesModule } from './batches/batches.module.js';
+import { ControlModule } from './control/control.module.js';
 import { DocumentsModule } from './documents/documents.module.js';
 import { ImportsModule } from './imports/imports.module.js';
 import { LotsModule } from './lots/lots.module.js';
@@ -58,6 +59,7 @@ export class AppModule {
         TargetsModule,
         BatchesModule,
         ReadingsModule,
+        ControlModule,
         ImportsModule,
         QcCupTestsModule,
         EventsModule,

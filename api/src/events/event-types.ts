@@ -15,6 +15,8 @@ export const EVENT_TYPES = {
   'batch.scrapped': 'A batch was scrapped',
   'work_order.created': 'A work order arrived (from the ERP or an engineer)',
   'work_order.changed': 'A work order was changed',
+  'drift.detected': 'A run rule of a control chart fired: the process is moving before readings leave tolerance',
+  'drift.acknowledged': 'An engineer acknowledged a drift signal with a note',
 } as const;
 
 export type EventType = keyof typeof EVENT_TYPES;

@@ -61,6 +61,8 @@ export const ACTIONS = {
   'readings:review': { roles: ['engineer'], description: 'Waive or uphold rejected readings' },
   'imports:write': { roles: ['engineer', 'integrator'], scope: 'readings:write', description: 'Upload logger CSV files' },
   'overview:read': { roles: everyone, description: 'See the shop-floor overview: pours, open rejections, rejection rate, ratio error per batch' },
+  'control:read': { roles: everyone, description: 'See control charts, their limits, capability and run-rule signals' },
+  'control:manage': { roles: ['engineer'], description: 'Define control charts, freeze baselines, acknowledge signals' },
   'events:read': { roles: ['admin', 'engineer', 'integrator'], scope: 'events:read', description: 'Poll the event feed' },
 } as const satisfies Record<string, ActionRule>;
 
