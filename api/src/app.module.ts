@@ -19,6 +19,7 @@ import { MoldsModule } from './molds/molds.module.js';
 import { OverviewModule } from './overview/overview.module.js';
 import { QcCupTestsModule } from './qc-cup-tests/qc-cup-tests.module.js';
 import { ReadingsModule } from './readings/readings.module.js';
+import { LiveModule } from './live/live.module.js';
 import { TargetsModule } from './targets/targets.module.js';
 import { WorkOrdersModule } from './work-orders/work-orders.module.js';
 import { EventsModule } from './events/events.module.js';
@@ -59,6 +60,7 @@ export class AppModule {
         TargetsModule,
         BatchesModule,
         ReadingsModule,
+        LiveModule,
         ControlModule,
         ImportsModule,
         QcCupTestsModule,

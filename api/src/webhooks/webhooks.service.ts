@@ -15,6 +15,7 @@ import { MailService } from '../mail/mail.service.js';
 import { SecretBox, newWebhookSecret } from './secret-box.js';
 import { secretsKeysPrevious } from '../config/env.js';
 import { AllowList, checkWebhookUrl } from './ssrf-guard.js';
+import { plainStatus } from './plain-reason.js';
 import { sendWebhook, type SendResult } from './webhook-sender.js';
 import { deliveryJobId, WEBHOOK_QUEUE } from './webhooks.constants.js';
 import { type DeliveryRow, deliveryView, type EndpointRow, endpointView, WebhooksRepository } from './webhooks.repository.js';
@@ -143,15 +144,31 @@ export class WebhooksService {
     return out;
   }
 
-  /** Sends a `webhook.test` event at once and reports what the receiver answered. */
-  async test(c: RequestContext, id: string): Promise<SendResult & { eventId: string; verdict: 'delivered' | 'failed' }> {
+  /**
+   * Sends a `webhook.test` event at once and reports what the receiver answered, in plain words when
+   * it failed. The send is kept like any delivery (event, delivery, attempt) so it shows in the
+   * delivery log; the event is marked relayed, so the relay never sends it to other endpoints.
+   */
+  async test(c: RequestContext, id: string): Promise<SendResult & { eventId: string; deliveryId: string; verdict: 'delivered' | 'failed'; reason?: string }> {
     const e = await this.repo.endpoint(c.principal.organizationId, id);
     if (!e) throw notFound('webhook endpoint');
     const eventId = randomUUID();
-    const body = JSON.stringify({ id: eventId, type: 'webhook.test', occurredAt: new Date().toISOString(), subject: { type: 'webhook_endpoint', id: e.id }, data: { message: 'A test event from Pourgate', endpointId: e.id } });
-    const r = await sendWebhook({ url: e.url, id: eventId, body, secrets: this.signingSecrets(e), timeoutMs: this.config.get('WEBHOOK_TIMEOUT_MS', { infer: true }), allow: this.allow });
+    const occurredAt = new Date();
+    const subject = { type: 'webhook_endpoint', id: e.id };
+    const data = { message: 'A test event from Pourgate', endpointId: e.id };
+    const body = JSON.stringify({ id: eventId, type: 'webhook.test', occurredAt: occurredAt.toISOString(), subject, data });
+    const r = await sendWebhook({ url: e.url, id: eventId, body, secrets: this.signingSecrets(e), timeoutMs: this.config.get('WEBHOOK_TIMEOUT_MS', { infer: true }), allow: this.allow, now: occurredAt });
     const ok = r.statusCode !== null && r.statusCode >= 200 && r.statusCode < 300;
-    return { ...r, eventId, verdict: ok ? 'delivered' : 'failed' };
+    const reason = ok ? undefined : (r.error ?? plainStatus(r.statusCode!));
+    const deliveryId = await this.db.transaction(async (trx) => {
+      await trx('events').insert({ id: eventId, organization_id: e.organization_id, type: 'webhook.test', subject_type: subject.type, subject_id: subject.id, payload: JSON.stringify(data), occurred_at: occurredAt, relayed_at: trx.fn.now() });
+      const [d] = await trx('webhook_deliveries')
+        .insert({ organization_id: e.organization_id, endpoint_id: e.id, event_id: eventId, event_type: 'webhook.test', status: ok ? 'succeeded' : 'dead', attempts: 1, last_status_code: r.statusCode, last_error: reason ?? null, last_duration_ms: r.durationMs, delivered_at: ok ? trx.fn.now() : null })
+        .returning('id');
+      await trx('webhook_attempts').insert({ delivery_id: d.id, attempt: 1, started_at: occurredAt, duration_ms: r.durationMs, status_code: r.statusCode, error: reason ?? null, response_snippet: r.responseSnippet ?? null });
+      return d.id as string;
+    });
+    return { ...r, eventId, deliveryId, verdict: ok ? 'delivered' : 'failed', ...(reason ? { reason } : {}) };
   }
 
   async listDeliveries(c: RequestContext, q: ListQuery) {
