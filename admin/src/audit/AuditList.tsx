@@ -2,9 +2,9 @@ import ComputerOutlined from '@mui/icons-material/DnsOutlined';
 import KeyOutlined from '@mui/icons-material/KeyOutlined';
 import PersonOutline from '@mui/icons-material/PersonOutline';
 import HelpOutline from '@mui/icons-material/HelpOutline';
-import { Box, Typography } from '@mui/material';
-import { useMemo } from 'react';
-import { DataTable, DateInput, List, SelectInput, TextInput, useGetList, useRecordContext } from 'react-admin';
+import { Box, Button, Dialog, DialogActions, DialogContent, DialogTitle, Typography } from '@mui/material';
+import { useMemo, useState } from 'react';
+import { DataTable, DateInput, List, ReferenceField, SelectInput, useGetList, useRecordContext } from 'react-admin';
 import ReceiptLongOutlined from '@mui/icons-material/ReceiptLongOutlined';
 import { EmptyState } from '../common/EmptyState';
 import { Guarded } from '../common/Guarded';
@@ -13,7 +13,7 @@ import { RelativeTime } from '../common/RelativeTime';
 import { dayEndIso, dayStartIso, formatDateTime, isoToDay } from '../format/dates';
 import { monoFont } from '../theme';
 import type { ActorType, AuditEntry, User } from '../api/views';
-import { ACTOR_LABEL, detailRows } from './auditFormat';
+import { ACTION_CHOICES, actionLabel, ACTOR_LABEL, detailRows, TARGET_LABEL, TARGET_RESOURCE } from './auditFormat';
 
 const ACTOR_ICON: Record<ActorType, typeof PersonOutline> = {
   user: PersonOutline,
@@ -30,7 +30,7 @@ function ActorFilter(props: { source: string; label: string; alwaysOn?: boolean 
 }
 
 const filters = [
-  <TextInput key="action" source="action" label="Action" alwaysOn placeholder="e.g. api_key.revoked" resettable />,
+  <SelectInput key="action" source="action" label="Action" alwaysOn choices={ACTION_CHOICES} emptyText="Any action" />,
   <ActorFilter key="actorId" source="actorId" label="Person" alwaysOn />,
   <DateInput key="from" source="createdAt_gte" label="From" alwaysOn parse={dayStartIso} format={isoToDay} />,
   <DateInput key="to" source="createdAt_lte" label="To" alwaysOn parse={dayEndIso} format={isoToDay} />,
@@ -57,24 +57,63 @@ function ActionCell() {
   const e = useRecordContext<AuditEntry>();
   if (!e) return null;
   return (
-    <Box component="code" sx={{ fontFamily: monoFont, fontSize: '0.8rem', bgcolor: '#eef3f3', color: '#0b4a53', px: 0.75, py: 0.25, borderRadius: 0.5 }}>
-      {e.action}
-    </Box>
+    <Typography variant="body2" title={e.action}>
+      {actionLabel(e.action)}
+    </Typography>
   );
 }
 
 function TargetCell() {
   const e = useRecordContext<AuditEntry>();
   if (!e || !e.targetType) return <span>—</span>;
+  const reference = TARGET_RESOURCE[e.targetType];
+  const short = e.targetId ? (e.targetId.length > 14 ? `${e.targetId.slice(0, 8)}…` : e.targetId) : null;
   return (
     <Box>
-      <Typography variant="body2">{e.targetType}</Typography>
-      {e.targetId ? (
-        <Typography variant="caption" color="text.secondary" sx={{ fontFamily: monoFont }} title={e.targetId}>
-          {e.targetId.length > 14 ? `${e.targetId.slice(0, 13)}…` : e.targetId}
+      <Typography variant="caption" color="text.secondary" component="div">
+        {TARGET_LABEL[e.targetType] ?? actionLabel(e.targetType)}
+      </Typography>
+      {e.targetId && reference ? (
+        // the name as the target's own list shows it; the short id only when it cannot be read (removed, or not yours to see)
+        <ReferenceField source="targetId" reference={reference} link={false} emptyText={short ?? ''}>
+          <RecordName fallback={short ?? ''} />
+        </ReferenceField>
+      ) : short ? (
+        <Typography variant="body2" sx={{ fontFamily: monoFont, fontSize: '0.8rem' }} title={e.targetId ?? undefined}>
+          {short}
         </Typography>
       ) : null}
     </Box>
+  );
+}
+
+/** A referenced record by the name people know it by. */
+function RecordName({ fallback }: { fallback: string }) {
+  const r = useRecordContext<Record<string, unknown>>();
+  const name = r ? (r.name ?? r.email ?? r.lotNumber ?? r.externalRef ?? r.url ?? r.materialSystemName) : undefined;
+  return <Typography variant="body2">{typeof name === 'string' && name ? name : fallback}</Typography>;
+}
+
+/** The full entry, on request: ids, address, every detail the API recorded. */
+function DetailsButton() {
+  const e = useRecordContext<AuditEntry>();
+  const [open, setOpen] = useState(false);
+  if (!e) return null;
+  return (
+    <>
+      <Button size="small" onClick={() => setOpen(true)} aria-label={`Details of ${actionLabel(e.action)} at ${formatDateTime(e.createdAt)}`}>
+        Details
+      </Button>
+      <Dialog open={open} onClose={() => setOpen(false)} maxWidth="sm" fullWidth>
+        <DialogTitle>{actionLabel(e.action)}</DialogTitle>
+        <DialogContent>
+          <EventDetails />
+        </DialogContent>
+        <DialogActions>
+          <Button onClick={() => setOpen(false)}>Close</Button>
+        </DialogActions>
+      </Dialog>
+    </>
   );
 }
 
@@ -82,6 +121,7 @@ function EventDetails() {
   const e = useRecordContext<AuditEntry>();
   if (!e) return null;
   const rows = [
+    { key: 'action code', value: e.action },
     { key: 'event id', value: e.id },
     { key: 'at', value: `${formatDateTime(e.createdAt)} (${e.createdAt})` },
     { key: 'actor id', value: e.actorId ?? '—' },
@@ -127,7 +167,7 @@ function AuditList() {
     <>
       <PageHeader title="Audit log" lead="Every sign-in, key, role and setting change, with who did it and from where. Entries cannot be edited or removed." />
       <List resource="audit-events" title="Audit log" filters={filters} actions={false} empty={<NoEvents />} sort={{ field: 'createdAt', order: 'DESC' }} perPage={50} storeKey="audit.list">
-        <DataTable bulkActionButtons={false} rowClick="expand" expand={<EventDetails />}>
+        <DataTable bulkActionButtons={false} rowClick={false}>
           <DataTable.Col
             source="createdAt"
             label="When"
@@ -146,6 +186,7 @@ function AuditList() {
           <DataTable.Col source="action" label="Action" field={ActionCell} />
           <DataTable.Col label="Target" disableSort field={TargetCell} />
           <DataTable.Col source="ip" label="From" disableSort render={(e: AuditEntry) => <span style={{ fontFamily: monoFont, fontSize: '0.8rem' }}>{e.ip ?? '—'}</span>} />
+          <DataTable.Col label="Details" disableSort align="right" field={DetailsButton} />
         </DataTable>
       </List>
     </>
