@@ -113,6 +113,26 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/v1/invitations/lookup": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * What an invitation link offers
+         * @description The shop, the role, the invited address and the name the admin typed, for the acceptance page. The token goes in the body (never in a URL, so it stays out of logs); a used, revoked or expired link answers 410.
+         */
+        post: operations["Invitations_lookup"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/v1/invitations/accept": {
         parameters: {
             query?: never;
@@ -124,7 +144,7 @@ export interface paths {
         put?: never;
         /**
          * Accept an invitation: set name and password
-         * @description Works once; a used, revoked or expired link answers 410.
+         * @description Works once; a used, revoked or expired link answers 410. The answer carries a session: the person is signed in.
          */
         post: operations["Invitations_accept"];
         delete?: never;
@@ -461,6 +481,26 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/v1/lots/{id}/release-hold": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Release a lot held by a failed cup test
+         * @description An engineer decides the lot may be used again, with a note saying why (audited; emits lot.hold_released). 409 when the lot is not on hold.
+         */
+        post: operations["Lots_releaseHold"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/v1/molds": {
         parameters: {
             query?: never;
@@ -634,26 +674,6 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
-    "/v1/batches/{id}/release": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /**
-         * Release a batch
-         * @description When every rejected reading of the batch was waived (or none was rejected); 409 otherwise.
-         */
-        post: operations["Batches_release"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
-    };
     "/v1/readings": {
         parameters: {
             query?: never;
@@ -726,6 +746,230 @@ export interface paths {
          * @description A waiver needs a note; upholding holds the batch, or scraps it with scrap: true.
          */
         post: operations["Readings_review"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/batches/{id}/release-check": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * What a batch still needs before release
+         * @description Every component its targets name (A, B, the pigment when weighed separately) and what its system asks for (milestones, temperatures), each recorded and accepted or waived; and rejections still open.
+         */
+        get: operations["BatchRelease_check"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/batches/{id}/release": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Release a batch
+         * @description When the batch is complete (see release-check) and every rejected reading was waived (or none was rejected); 409 with what is missing otherwise.
+         */
+        post: operations["BatchRelease_release"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/live/tickets": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A ticket for the live station stream
+         * @description EventSource cannot send an Authorization header: this authenticated call hands out a ticket (valid 60 s) for GET /v1/live/stream?ticket=…. Name a station or a device to watch, or neither for every device.
+         */
+        post: operations["Live_ticket"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/live/stream": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Live readings as Server-Sent Events
+         * @description Authenticated by the ticket in the query string (not a header: EventSource cannot set one). The stream opens with an event `ready` (live.ready: the devices watched), then sends an event `reading` (live.event) each time a watched scale posts a reading, when it is judged (with its reasons), and when it is reviewed. A comment line every 15 s keeps it open. Readings written while the stream was closed are not replayed: read them from GET /v1/readings.
+         */
+        get: operations["Live_stream"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/control/charts": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Control charts: a metric of a material system, optionally of one station, device or lot */
+        get: operations["Control_listCharts"];
+        put?: never;
+        /**
+         * Define a control chart and the run rules it watches
+         * @description Limits are trial until a baseline is frozen; signals are raised against frozen limits only.
+         */
+        post: operations["Control_createChart"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/control/charts/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One control chart with its baseline */
+        get: operations["Control_getChart"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        /** Rename a chart or change its run rules */
+        patch: operations["Control_updateChart"];
+        trace?: never;
+    };
+    "/v1/control/charts/{id}/baseline": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Freeze the limits from the first N points or from a period
+         * @description Fewer points than the chart’s rules need is a 422 and nothing changes.
+         */
+        post: operations["Control_freeze"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/control/charts/{id}/data": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The chart: points with moving ranges, centre line, limits, zones, signals and capability (computed in PostgreSQL) */
+        get: operations["Control_data"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/control/charts/{id}/data.csv": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The chart’s points as CSV */
+        get: operations["Control_csv"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/control/signals": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Run-rule signals (filter acknowledged=false for the open ones) */
+        get: operations["Control_listSignals"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/control/signals/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One signal with the points of its pattern */
+        get: operations["Control_getSignal"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/control/signals/{id}/acknowledge": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Acknowledge a signal with a note saying what was found */
+        post: operations["Control_acknowledge"];
         delete?: never;
         options?: never;
         head?: never;
@@ -837,7 +1081,7 @@ export interface paths {
         };
         /**
          * The event feed, for systems that poll instead of receiving webhooks
-         * @description Pass the `next` cursor of one page as `after` to get the following page; every event appears once, in order. Types: webhook.test, reading.accepted, reading.rejected, reading.waived, reading.upheld, batch.created, batch.state_changed, batch.released, batch.on_hold, batch.scrapped, work_order.created, work_order.changed.
+         * @description Pass the `next` cursor of one page as `after` to get the following page; every event appears once, in order. Types: webhook.test, reading.accepted, reading.rejected, reading.waived, reading.upheld, batch.created, batch.state_changed, batch.released, batch.on_hold, batch.scrapped, lot.held, lot.hold_released, work_order.created, work_order.changed, drift.detected, drift.acknowledged.
          */
         get: operations["Events_feed"];
         put?: never;
@@ -987,6 +1231,26 @@ export interface paths {
         put?: never;
         /** Replay every dead-lettered delivery since a time (optionally of one endpoint) */
         post: operations["WebhookDeliveries_replayAll"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/admin/queue-sessions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A pass to the queue dashboard (admins)
+         * @description Sets an HttpOnly cookie, valid 15 minutes on /queues only, that lets this browser open the queue dashboard (waiting, active, delayed and failed jobs of every queue, read-only).
+         */
+        post: operations["QueueDashboard_open"];
         delete?: never;
         options?: never;
         head?: never;
@@ -1572,6 +1836,110 @@ export interface webhooks {
         patch?: never;
         trace?: never;
     };
+    "lot.held": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A lot was put on hold for new batches: a cup test of it failed the system's reactivity window or density band
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "lot.held";
+                        data?: components["schemas"]["event.lot.held"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "lot.hold_released": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * An engineer released a held lot, with a note saying why
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "lot.hold_released";
+                        data?: components["schemas"]["event.lot.hold_released"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "work_order.created": {
         parameters: {
             query?: never;
@@ -1650,6 +2018,110 @@ export interface webhooks {
                         /** @constant */
                         type?: "work_order.changed";
                         data?: components["schemas"]["event.work_order.changed"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "drift.detected": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A run rule of a control chart fired: the process is moving before readings leave tolerance
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "drift.detected";
+                        data?: components["schemas"]["event.drift.detected"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "drift.acknowledged": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * An engineer acknowledged a drift signal with a note
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "drift.acknowledged";
+                        data?: components["schemas"]["event.drift.acknowledged"];
                     };
                 };
             };
@@ -1846,6 +2318,28 @@ export interface components {
             /** @description Scale divisions the ratio band on the smaller part must span (5 when not given) */
             minimumToleranceDivisions?: number;
         };
+        /** What a batch still needs before release */
+        "batch-release-check.view": {
+            /** Format: uuid */
+            batchId: string;
+            state: string;
+            /** @description True when the release button may be pressed */
+            ready: boolean;
+            /** @description What this batch must have recorded: A, B, the pigment when weighed separately, and what its system asks for */
+            required: components["schemas"]["batch-release-check.view"]["$defs"]["item"][];
+            missing: {
+                item: components["schemas"]["batch-release-check.view"]["$defs"]["item"];
+                /** @enum {unknown} */
+                problem: "not_recorded" | "rejected" | "pending";
+                message: string;
+            }[];
+            /** @description Rejected readings not waived (upheld ones included) */
+            openRejections: number;
+            $defs: {
+                /** @enum {unknown} */
+                item: "part_a" | "part_b" | "pigment" | "component_temperature" | "mold_temperature" | "ambient_temperature" | "humidity" | "mix_start" | "pour" | "demold";
+            };
+        };
         /** The targets stored with a batch */
         "batch-targets.view": {
             /** Format: uuid */
@@ -1985,6 +2479,208 @@ export interface components {
             code: string;
             text: string;
         };
+        /** A control chart’s points, limits, signals and capability */
+        "control-chart-data.view": {
+            chart: components["schemas"]["control-chart.view"];
+            /** @enum {unknown} */
+            limitsKind: "frozen" | "trial";
+            limits: null | {
+                centre: number;
+                mrBar: number;
+                sigma: number;
+                ucl: number;
+                lcl: number;
+                mrUcl: number;
+                zones: {
+                    oneSigma: number[];
+                    twoSigma: number[];
+                };
+            };
+            points: {
+                id: string;
+                value: number;
+                movingRange: number | null;
+                /** Format: date-time */
+                at: string;
+                /** Format: uuid */
+                readingId: string | null;
+                /** Format: uuid */
+                batchId: string | null;
+                /** Format: uuid */
+                cupTestId: string | null;
+                signals: {
+                    /** Format: uuid */
+                    id: string;
+                    /** @enum {unknown} */
+                    rule: "WE1" | "WE2" | "WE3" | "WE4" | "N1" | "N2" | "N3" | "N4" | "N5" | "N6" | "N7" | "N8";
+                    acknowledged: boolean;
+                }[];
+            }[];
+            summary: {
+                n: number;
+                mean: number | null;
+                mrBar: number | null;
+                sdOverall: number | null;
+            };
+            specification: {
+                lsl: number | null;
+                usl: number | null;
+            };
+            capability: null | {
+                n: number;
+                mean: number;
+                sigmaWithin: number;
+                sigmaOverall: number | null;
+                cp: number | null;
+                cpk: number | null;
+                pp: number | null;
+                ppk: number | null;
+                warnings: string[];
+            };
+            warnings: string[];
+        };
+        /**
+         * Freeze a chart’s limits
+         * @description Either firstN, or from and to. The baseline must hold at least 20 points, and at least as many as the longest pattern of the chart’s rules.
+         */
+        "control-chart.baseline": {
+            /** @description the first N points of the chart */
+            firstN?: number;
+            /**
+             * Format: date-time
+             * @description or the points of a period: at or after from
+             */
+            from?: string;
+            /**
+             * Format: date-time
+             * @description and before to
+             */
+            to?: string;
+        };
+        /**
+         * Define a control chart
+         * @description At most one of stationId, deviceId, lotId narrows the chart. Rules default to WE1–WE4.
+         */
+        "control-chart.create": {
+            name?: string;
+            /** Format: uuid */
+            materialSystemId: string;
+            /** @enum {unknown} */
+            metric: "ratio_error_percent" | "shot_mass_error_percent" | "component_temperature_a_c" | "component_temperature_b_c" | "free_rise_density_kg_m3";
+            /** Format: uuid */
+            stationId?: string | null;
+            /** Format: uuid */
+            deviceId?: string | null;
+            /** Format: uuid */
+            lotId?: string | null;
+            /** @description WE1–WE4: Western Electric (1956); N1–N8: Nelson (1984) */
+            rules?: ("WE1" | "WE2" | "WE3" | "WE4" | "N1" | "N2" | "N3" | "N4" | "N5" | "N6" | "N7" | "N8")[];
+        };
+        /** Rename a control chart or change its rules */
+        "control-chart.update": {
+            name?: string;
+            /** @description WE1–WE4: Western Electric (1956); N1–N8: Nelson (1984) */
+            rules?: ("WE1" | "WE2" | "WE3" | "WE4" | "N1" | "N2" | "N3" | "N4" | "N5" | "N6" | "N7" | "N8")[];
+        };
+        /** A control chart */
+        "control-chart.view": {
+            /** Format: uuid */
+            id: string;
+            name: string;
+            /** Format: uuid */
+            materialSystemId: string;
+            /** @enum {unknown} */
+            metric: "ratio_error_percent" | "shot_mass_error_percent" | "component_temperature_a_c" | "component_temperature_b_c" | "free_rise_density_kg_m3";
+            metricLabel: string;
+            unit: string;
+            /** Format: uuid */
+            stationId: string | null;
+            /** Format: uuid */
+            deviceId: string | null;
+            /** Format: uuid */
+            lotId: string | null;
+            rules: ("WE1" | "WE2" | "WE3" | "WE4" | "N1" | "N2" | "N3" | "N4" | "N5" | "N6" | "N7" | "N8")[];
+            /**
+             * @description trial: no baseline frozen yet, limits move with the data and no signals are raised
+             * @enum {unknown}
+             */
+            limitsKind: "frozen" | "trial";
+            baseline: null | {
+                centre: number;
+                mrBar: number;
+                sigma: number;
+                ucl: number;
+                lcl: number;
+                mrUcl: number;
+                zones: {
+                    oneSigma: number[];
+                    twoSigma: number[];
+                };
+                /** @enum {unknown} */
+                method: "first_n" | "period";
+                firstN: number | null;
+                /** Format: date-time */
+                from: string | null;
+                /** Format: date-time */
+                to: string | null;
+                n: number;
+                sdOverall: number | null;
+                /** Format: date-time */
+                firstPointAt: string;
+                /** Format: date-time */
+                lastPointAt: string;
+                /** Format: date-time */
+                frozenAt: string;
+                frozenBy: string | null;
+            };
+            /** Format: date-time */
+            createdAt: string;
+            createdBy: string | null;
+        };
+        /** Acknowledge a run-rule signal */
+        "control-signal.acknowledge": {
+            note: string;
+        };
+        /** A run-rule signal */
+        "control-signal.view": {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            chartId: string;
+            chartName: string;
+            /** Format: uuid */
+            materialSystemId: string;
+            /** @enum {unknown} */
+            metric: "ratio_error_percent" | "shot_mass_error_percent" | "component_temperature_a_c" | "component_temperature_b_c" | "free_rise_density_kg_m3";
+            /** @enum {unknown} */
+            rule: "WE1" | "WE2" | "WE3" | "WE4" | "N1" | "N2" | "N3" | "N4" | "N5" | "N6" | "N7" | "N8";
+            ruleDescription: string;
+            value: number;
+            /** Format: uuid */
+            readingId: string | null;
+            /** Format: uuid */
+            batchId: string | null;
+            /** @description the points of the pattern, oldest first; the last one raised the signal */
+            points: {
+                id: string;
+                value: number;
+                /** Format: date-time */
+                at: string;
+                /** Format: uuid */
+                readingId: string | null;
+                /** Format: uuid */
+                batchId: string | null;
+            }[];
+            /** Format: date-time */
+            raisedAt: string;
+            acknowledged: boolean;
+            acknowledgement: null | {
+                /** Format: date-time */
+                at: string;
+                by: string | null;
+                note: string | null;
+            };
+        };
         /** Register a device */
         "device.create": {
             /** @enum {unknown} */
@@ -2046,8 +2742,7 @@ export interface components {
         "displayed-quantity": {
             value: number;
             unit: string;
-            /** @description Absent for dimensionless figures */
-            si?: {
+            si: {
                 value: number;
                 unit: string;
             };
@@ -2140,6 +2835,50 @@ export interface components {
             to: "planned" | "weighing" | "mixed" | "curing" | "on_hold" | "released" | "scrapped";
             reason: string;
         };
+        /**
+         * The data of a drift.acknowledged event
+         * @description An engineer acknowledged a drift signal with a note
+         */
+        "event.drift.acknowledged": {
+            /** Format: uuid */
+            signalId: string;
+            /** Format: uuid */
+            chartId: string;
+            /** Format: uuid */
+            materialSystemId: string;
+            /** @enum {unknown} */
+            metric: "ratio_error_percent" | "shot_mass_error_percent" | "component_temperature_a_c" | "component_temperature_b_c" | "free_rise_density_kg_m3";
+            /** @enum {unknown} */
+            rule: "WE1" | "WE2" | "WE3" | "WE4" | "N1" | "N2" | "N3" | "N4" | "N5" | "N6" | "N7" | "N8";
+            note: string;
+            acknowledgedBy: string | null;
+        };
+        /**
+         * The data of a drift.detected event
+         * @description A run rule of a control chart fired on a new value: the process is moving before readings leave tolerance
+         */
+        "event.drift.detected": {
+            /** Format: uuid */
+            signalId: string;
+            /** Format: uuid */
+            chartId: string;
+            chartName: string;
+            /** Format: uuid */
+            materialSystemId: string;
+            /** @enum {unknown} */
+            metric: "ratio_error_percent" | "shot_mass_error_percent" | "component_temperature_a_c" | "component_temperature_b_c" | "free_rise_density_kg_m3";
+            /** @enum {unknown} */
+            rule: "WE1" | "WE2" | "WE3" | "WE4" | "N1" | "N2" | "N3" | "N4" | "N5" | "N6" | "N7" | "N8";
+            ruleDescription: string;
+            /** Format: uuid */
+            readingId: string | null;
+            /** Format: uuid */
+            batchId: string | null;
+            value: number;
+            centre: number;
+            ucl: number;
+            lcl: number;
+        };
         /** Event feed query */
         "event.feed-query": {
             /** @description The next cursor of the previous page; omit for the oldest events */
@@ -2147,7 +2886,7 @@ export interface components {
             /** @default 100 */
             limit?: number;
             /** @description Only these event types (repeat the parameter) */
-            type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
+            type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed")[];
         };
         /** A page of the event feed */
         "event.feed": {
@@ -2155,6 +2894,39 @@ export interface components {
             /** @description Pass as after= for the next page (also when empty: poll again later with it) */
             next: string | null;
             hasMore: boolean;
+        };
+        /**
+         * The data of a lot.held event
+         * @description A lot was put on hold for new batches: a cup test of it failed (ASTM D7487 terms)
+         */
+        "event.lot.held": {
+            /** Format: uuid */
+            lotId: string;
+            lotNumber: string;
+            /** @enum {unknown} */
+            part: "A" | "B" | "pigment";
+            /** Format: uuid */
+            cupTestId: string;
+            /** @description The codes of the cup test's failed checks */
+            reasons: components["schemas"]["finding-code"][];
+        };
+        /**
+         * The data of a lot.hold_released event
+         * @description An engineer released a held lot, with a note saying why
+         */
+        "event.lot.hold_released": {
+            /** Format: uuid */
+            lotId: string;
+            lotNumber: string;
+            /** @enum {unknown} */
+            part: "A" | "B" | "pigment";
+            /**
+             * Format: uuid
+             * @description The cup test that held it
+             */
+            cupTestId: string | null;
+            note: string;
+            releasedBy: string | null;
         };
         /**
          * The data of a reading.accepted event
@@ -2230,7 +3002,7 @@ export interface components {
             /** Format: uuid */
             id: string;
             /** @enum {unknown} */
-            type: "webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed";
+            type: "webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed" | "drift.detected" | "drift.acknowledged";
             /** Format: date-time */
             occurredAt: string;
             subject: {
@@ -2270,6 +3042,12 @@ export interface components {
             quantity: number;
             state: string;
         };
+        /**
+         * A finding code
+         * @description One vocabulary for batch warnings, reading reasons and cup-test verdicts: the same fact has the same code wherever it is found.
+         * @enum {unknown}
+         */
+        "finding-code": "SCALE_NOT_STABLE" | "CALIBRATION_OVERDUE" | "OVER_CAPACITY" | "RATIO_ISOCYANATE_HEAVY" | "RATIO_POLYOL_HEAVY" | "PART_A_MASS_LOW" | "PART_A_MASS_HIGH" | "PART_B_MASS_LOW" | "PART_B_MASS_HIGH" | "PART_NOT_WEIGHED" | "SHORT_SHOT" | "TOTAL_MASS_LOW" | "TOTAL_MASS_HIGH" | "PIGMENT_MASS_LOW" | "PIGMENT_MASS_HIGH" | "PIGMENT_OVER_LIMIT" | "TEMPERATURE_BELOW_WINDOW" | "TEMPERATURE_ABOVE_WINDOW" | "MOLD_TEMPERATURE_BELOW_WINDOW" | "MOLD_TEMPERATURE_ABOVE_WINDOW" | "AMBIENT_TEMPERATURE_BELOW_WINDOW" | "AMBIENT_TEMPERATURE_ABOVE_WINDOW" | "HUMIDITY_ABOVE_LIMIT" | "POT_LIFE_EXCEEDED" | "DEMOLDED_EARLY" | "PACK_FACTOR_BELOW_ONE" | "PACK_FACTOR_MARGINAL" | "PACK_FACTOR_ABOVE_LIMIT" | "TOLERANCE_BELOW_SCALE_RESOLUTION" | "EXOTHERM_RISK_MASS" | "LOT_EXPIRED" | "CREAM_TIME_BELOW_WINDOW" | "CREAM_TIME_ABOVE_WINDOW" | "RISE_TIME_BELOW_WINDOW" | "RISE_TIME_ABOVE_WINDOW" | "TACK_FREE_TIME_BELOW_WINDOW" | "TACK_FREE_TIME_ABOVE_WINDOW" | "FREE_RISE_DENSITY_BELOW_BAND" | "FREE_RISE_DENSITY_ABOVE_BAND";
         /** The least-squares line of a system’s cup tests: free-rise density against component temperature */
         "free-rise-fit.view": {
             /** Format: uuid */
@@ -2342,11 +3120,12 @@ export interface components {
             /** @description At least 10 characters */
             password: string;
         };
-        /** The account an accepted invitation created: sign in with it */
+        /** The account an accepted invitation created, and its first session (the person is signed in) */
         "invitation.accepted": {
             email: string;
             /** @enum {unknown} */
             role: "admin" | "engineer" | "integrator" | "viewer";
+            session: components["schemas"]["auth.session"];
         };
         /** Invite a person */
         "invitation.create": {
@@ -2356,6 +3135,29 @@ export interface components {
             role: "admin" | "engineer" | "integrator" | "viewer";
             /** @description Optional; the person can change it when accepting */
             name?: string;
+        };
+        /**
+         * Look up an invitation by the token of its link
+         * @description Sent in a body rather than the URL, so the token stays out of access logs.
+         */
+        "invitation.lookup": {
+            token: string;
+        };
+        /** What an invitation link offers, for the acceptance page */
+        "invitation.preview": {
+            organization: {
+                name: string;
+            };
+            /** @enum {unknown} */
+            role: "admin" | "engineer" | "integrator" | "viewer";
+            /** @description The address invited: the account's sign-in e-mail */
+            email: string;
+            /** @description The name the admin typed, to prefill; null when none was given */
+            name: string | null;
+            /** @description Who sent the invitation (their name) */
+            invitedBy: string | null;
+            /** Format: date-time */
+            expiresAt: string;
         };
         /** An invitation sent by e-mail */
         "invitation.view": {
@@ -2380,6 +3182,46 @@ export interface components {
             /** @enum {unknown} */
             state: "pending" | "accepted" | "revoked" | "expired";
         };
+        /** A device as the live stream names it */
+        "live.device": {
+            /** Format: uuid */
+            id: string;
+            name: string;
+            stationCode: string | null;
+        };
+        /**
+         * One message of the live station stream (the JSON of an SSE `data:` line)
+         * @description SSE event names: `reading` (this payload) and `ready` (sent once when the stream opens: `{ "devices": [...] }`, the devices watched). `kind` says what happened: received (the scale posted it, verdict pending), judged (its verdict and reasons), reviewed (an engineer waived or upheld it).
+         */
+        "live.event": {
+            /** @enum {unknown} */
+            kind: "received" | "judged" | "reviewed";
+            reading: components["schemas"]["reading.view"];
+            device: components["schemas"]["live.device"];
+        };
+        /** The first message of a live stream (SSE event `ready`): the devices it watches */
+        "live.ready": {
+            devices: components["schemas"]["live.device"][];
+        };
+        /** What a live stream watches: one station, one device, or (neither) every device */
+        "live.ticket.create": {
+            /** Format: uuid */
+            stationId?: string;
+            /** Format: uuid */
+            deviceId?: string;
+        };
+        /**
+         * A short-lived ticket that opens one live stream
+         * @description EventSource cannot send an Authorization header: an authenticated POST /v1/live/tickets hands out this ticket, and GET /v1/live/stream?ticket=… opens the stream with it. It names the person, the organization and what to watch, and expires after `expiresInSeconds`; a stream already open stays open. To reconnect, ask for a new ticket.
+         */
+        "live.ticket": {
+            ticket: string;
+            /** Format: date-time */
+            expiresAt: string;
+            expiresInSeconds: number;
+            /** @description Path of the stream with the ticket, for new EventSource(streamUrl) */
+            streamUrl: string;
+        };
         /** Record (POST) or change (PUT) a component lot */
         "lot.create": {
             /** @enum {unknown} */
@@ -2401,6 +3243,11 @@ export interface components {
             /** Format: date */
             openedOn?: string | null;
             notes?: string | null;
+        };
+        /** Release a lot held by a failed cup test */
+        "lot.release-hold": {
+            /** @description Why the lot may be used again (e.g. a repeat cup test passed, the supplier confirmed the lot) */
+            note: string;
         };
         /** A lot of part A, part B or pigment */
         "lot.view": {
@@ -2554,7 +3401,7 @@ export interface components {
             demoldTime?: components["schemas"]["quantity"] | null;
             /** @description Time */
             fullCureTime?: components["schemas"]["quantity"] | null;
-            /** @description Highest pigment, percent of A+B */
+            /** @description Highest pigment, percent of the dose basis (A+B unless pigmentDoseBasis says otherwise) */
             maxPigmentPercent?: number | null;
             /** @description Highest pack factor the system is made for (at least 1) */
             maxPackFactor?: number | null;
@@ -2570,6 +3417,44 @@ export interface components {
             cautionsText?: string | null;
             /** @description Why this revision was made (PUT) */
             changeNote?: string | null;
+            /** @description ± tolerance as data sheets state it: parts by weight of B per the system's A parts (100 : 45 ± 2 is 2). Replaces ratioTolerancePercent; weight ratios only */
+            ratioTolerancePbw?: number | null;
+            /**
+             * @description What a pigment percent is of: A+B, the polyol side, or the total with the pigment (pastes are dosed all three ways)
+             * @default ab
+             * @enum {unknown}
+             */
+            pigmentDoseBasis?: "ab" | "polyol" | "total";
+            /**
+             * @description Pigment weighed on its own, or pre-blended in part A or B (that part's target and the ratio check then include it)
+             * @default separate
+             * @enum {unknown}
+             */
+            pigmentPlacement?: "separate" | "A" | "B";
+            /** @description OH number of the pigment paste's carrier, mg KOH/g: counted in the isocyanate index */
+            pigmentCarrierHydroxylNumber?: number | null;
+            /** @description Cup-test cream time window (time), ASTM D7487 terms */
+            creamTimeWindow?: {
+                min: components["schemas"]["quantity"];
+                max: components["schemas"]["quantity"];
+            } | null;
+            /** @description Cup-test rise (top-of-cup) time window (time), ASTM D7487 terms */
+            riseTimeWindow?: {
+                min: components["schemas"]["quantity"];
+                max: components["schemas"]["quantity"];
+            } | null;
+            /** @description Cup-test tack-free time window (time), ASTM D7487 terms */
+            tackFreeTimeWindow?: {
+                min: components["schemas"]["quantity"];
+                max: components["schemas"]["quantity"];
+            } | null;
+            /** @description Free-rise density band at the reference temperature (density) for judging cup tests; a cup's density is corrected to the reference temperature with the system's slope */
+            freeRiseDensityBand?: {
+                min: components["schemas"]["quantity"];
+                max: components["schemas"]["quantity"];
+            } | null;
+            /** @description What a batch must also have recorded (and accepted or waived) before release, besides A, B and the pigment */
+            releaseRequires?: ("component_temperature" | "mold_temperature" | "ambient_temperature" | "humidity" | "mix_start" | "pour" | "demold")[];
         };
         /** A material system at its current revision (SI) */
         "material-system.view": {
@@ -2885,6 +3770,22 @@ export interface components {
              */
             unit: string;
         };
+        /**
+         * Queue dashboard session
+         * @description A short-lived pass to the queue dashboard, carried by an HttpOnly cookie limited to the dashboard's path; open `url` in the same browser.
+         */
+        "queue-dashboard.session": {
+            /**
+             * @description Where the dashboard is (same origin)
+             * @example /queues/
+             */
+            url: string;
+            /**
+             * Format: date-time
+             * @description When the pass lapses; ask for a new one from the console
+             */
+            expiresAt: string;
+        };
         /** Readiness: PostgreSQL and Redis are reachable */
         "readiness.view": {
             /** @constant */
@@ -3036,8 +3937,7 @@ export interface components {
          * @description Why a reading was rejected (or set aside): what was measured against which limit, in which unit
          */
         "reading.reason": {
-            /** @example RATIO_ISOCYANATE_HEAVY */
-            code: string;
+            code: components["schemas"]["finding-code"];
             message: string;
             measured: number | null;
             limit: number | null;
@@ -3048,6 +3948,8 @@ export interface components {
              * @example s
              */
             unit: string | null;
+            /** @description What the sentence needs besides the figures (part, side, target, readability, ...), so it can be written for another unit system */
+            facts?: Record<string, never>;
         };
         /** A reading posted again: the first one, as stored */
         "reading.replayed": {
@@ -3078,7 +3980,8 @@ export interface components {
             cavities: number;
             totalVolume: components["schemas"]["displayed-quantity"];
             targetDensity: components["schemas"]["displayed-quantity"];
-            packFactor: components["schemas"]["displayed-quantity"];
+            /** @description Dimensionless (unit 1) */
+            packFactor: components["schemas"]["quantity"];
             /** @enum {unknown} */
             densityBasis: "target_density" | "pack_factor" | "mold_default_pack_factor" | "free_rise_cup";
             expectedFreeRiseDensity: {
@@ -3095,7 +3998,8 @@ export interface components {
                     count: number;
                 } | null;
             };
-            expectedPackFactor: components["schemas"]["displayed-quantity"];
+            /** @description Dimensionless (unit 1) */
+            expectedPackFactor: components["schemas"]["quantity"];
             foamMass: components["schemas"]["displayed-quantity"];
             mixedMass: components["schemas"]["displayed-quantity"];
             allowances: {
@@ -3388,7 +4292,7 @@ export interface components {
             url: string;
             description?: string;
             /** @description Empty or omitted: every event type */
-            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
+            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed")[];
             enabled?: boolean;
         };
         /** A webhook endpoint with its signing secret: the only time it is shown */
@@ -3413,7 +4317,7 @@ export interface components {
             url?: string;
             description?: string;
             /** @description Empty or omitted: every event type */
-            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
+            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed")[];
             enabled?: boolean;
         };
         /** A webhook endpoint (never its secret) */
@@ -3430,6 +4334,13 @@ export interface components {
             eventId: string;
             /** @enum {unknown} */
             verdict: "delivered" | "failed";
+            /**
+             * Format: uuid
+             * @description The test send's row in the delivery log (GET /v1/webhook-deliveries/{id})
+             */
+            deliveryId: string;
+            /** @description Why the send failed, in plain words (absent when delivered) */
+            reason?: string;
         };
         /**
          * Post a work order
@@ -3964,6 +4875,41 @@ export interface operations {
             };
         };
     };
+    Invitations_lookup: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["invitation.lookup"];
+            };
+        };
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["invitation.preview"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
     Invitations_accept: {
         parameters: {
             query?: never;
@@ -4307,9 +5253,11 @@ export interface operations {
                     "application/json": components["schemas"]["auth.session"];
                 };
             };
-            /** @description Throttled */
+            /** @description Throttled: too many attempts for this account or from this address */
             429: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5417,6 +6365,66 @@ export interface operations {
             };
         };
     };
+    Lots_releaseHold: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["lot.release-hold"];
+            };
+        };
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["lot.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action readings:review (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
     Molds_list: {
         parameters: {
             query?: {
@@ -6237,62 +7245,6 @@ export interface operations {
             };
         };
     };
-    Batches_release: {
-        parameters: {
-            query?: never;
-            header?: {
-                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
-                "Idempotency-Key"?: string;
-            };
-            path: {
-                id: string;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            /** @description OK */
-            200: {
-                headers: {
-                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
-                    "Idempotent-Replayed"?: "true";
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["batch.view"];
-                };
-            };
-            /** @description No valid credentials */
-            401: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/problem+json": components["schemas"]["problem"];
-                };
-            };
-            /** @description Needs the action readings:review (roles: engineer) */
-            403: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/problem+json": components["schemas"]["problem"];
-                };
-            };
-            /** @description An error, as RFC 9457 problem details */
-            default: {
-                headers: {
-                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
-                    "Retry-After"?: string;
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/problem+json": components["schemas"]["problem"];
-                };
-            };
-        };
-    };
     Readings_list: {
         parameters: {
             query?: {
@@ -6568,6 +7520,778 @@ export interface operations {
                 };
             };
             /** @description Needs the action readings:review (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    BatchRelease_check: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["batch-release-check.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    BatchRelease_release: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["batch.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action readings:review (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Live_ticket: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["live.ticket.create"];
+            };
+        };
+        responses: {
+            /** @description Created */
+            201: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["live.ticket"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action readings:read (roles: admin, engineer, integrator, viewer; key scope readings:write) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Live_stream: {
+        parameters: {
+            query: {
+                /** @description From POST /v1/live/tickets */
+                ticket: unknown;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description An SSE stream: `event: ready` (live.ready), then `event: reading` lines whose data is a live.event */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "text/event-stream": string;
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Control_listCharts: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: createdAt, name, metric */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: materialSystemId, metric, stationId, deviceId, lotId, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description control-charts <start>-<end>/<total>; the total is * beyond the count cap */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["control-chart.view"][];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action control:read (roles: admin, engineer, integrator, viewer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Control_createChart: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["control-chart.create"];
+            };
+        };
+        responses: {
+            /** @description Created */
+            201: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["control-chart.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action control:manage (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Control_getChart: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["control-chart.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action control:read (roles: admin, engineer, integrator, viewer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Control_updateChart: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["control-chart.update"];
+            };
+        };
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["control-chart.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action control:manage (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Control_freeze: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["control-chart.baseline"];
+            };
+        };
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["control-chart.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action control:manage (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Control_data: {
+        parameters: {
+            query?: {
+                /** @description ISO 8601 date-time: points at or after */
+                from?: string;
+                /** @description ISO 8601 date-time: points before */
+                to?: string;
+                /** @description the newest points of the period, 2 to 5000 (default 500) */
+                limit?: number;
+            };
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["control-chart-data.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action control:read (roles: admin, engineer, integrator, viewer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Control_csv: {
+        parameters: {
+            query?: {
+                /** @description ISO 8601 date-time: points at or after */
+                from?: string;
+                /** @description ISO 8601 date-time: points before */
+                to?: string;
+                /** @description the newest points of the period, 2 to 5000 (default 500) */
+                limit?: number;
+            };
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One row per point: at, value, moving_range, centre, lcl, ucl, limits, signals, reading_id, batch_id */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "text/csv": string;
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action control:read (roles: admin, engineer, integrator, viewer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Control_listSignals: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: raisedAt, rule */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: chartId, rule, acknowledged, materialSystemId, metric, batchId, raisedAfter, raisedBefore, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description control-signals <start>-<end>/<total>; the total is * beyond the count cap */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["control-signal.view"][];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action control:read (roles: admin, engineer, integrator, viewer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Control_getSignal: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["control-signal.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action control:read (roles: admin, engineer, integrator, viewer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Control_acknowledge: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["control-signal.acknowledge"];
+            };
+        };
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["control-signal.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action control:manage (roles: engineer) */
             403: {
                 headers: {
                     [name: string]: unknown;
@@ -6995,7 +8719,7 @@ export interface operations {
             query?: {
                 after?: string;
                 limit?: number;
-                type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
+                type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed")[];
             };
             header?: never;
             path?: never;
@@ -7640,6 +9364,62 @@ export interface operations {
                 };
             };
             /** @description Needs the action webhooks:manage (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    QueueDashboard_open: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Created */
+            201: {
+                headers: {
+                    /** @description pourgate_queues=…; Path=/queues; HttpOnly; SameSite=Strict */
+                    "Set-Cookie"?: unknown;
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["queue-dashboard.session"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action queues:read (roles: admin) */
             403: {
                 headers: {
                     [name: string]: unknown;
