@@ -35,7 +35,10 @@ export class WorkOrdersController {
 
   @Post()
   @Requires('work-orders:write')
-  @ApiOperation({ summary: 'Post a work order (the ERP, with a key scoped work-orders:write)', description: 'Idempotent on externalRef: the same reference and body again answers 200 with the existing order; a different body for the same reference answers 409.' })
+  @ApiOperation({
+    summary: 'Post a work order (the ERP, with a key scoped work-orders:write)',
+    description: 'Idempotent on externalRef: the same reference and body again answers 200 with the existing order; a different body for the same reference answers 409.',
+  })
   @ApiResponse({ status: 409, description: 'Already posted with a different body' })
   @Responds(201, 'work-order.view', { description: 'Created', headers: LOCATION_HEADER })
   @Responds(200, 'work-order.view', { description: 'Already posted with this body: the existing order' })

@@ -3,7 +3,9 @@ import type { Knex } from 'knex';
 import { listPage } from '../common/lists/knex-list.js';
 import type { ListQuery, ListSpec } from '../common/lists/list-query.js';
 import { KNEX } from '../database/database.module.js';
-import type { WorkOrderRow } from './work-orders.service.js';
+
+export const WORK_ORDER_STATES = ['open', 'in_progress', 'done', 'cancelled'] as const;
+export type WorkOrderState = (typeof WORK_ORDER_STATES)[number];
 
 export const workOrdersListSpec: ListSpec = {
   resource: 'work-orders',
@@ -25,6 +27,25 @@ const columns = {
   dueAfter: 'work_orders.due_on',
   id: 'work_orders.id',
 };
+
+export interface WorkOrderRow {
+  id: string;
+  organization_id: string;
+  external_ref: string;
+  part_number: string | null;
+  mold_id: string | null;
+  mold_name?: string | null;
+  material_system_id: string | null;
+  material_system_name?: string | null;
+  quantity: number;
+  due_on: Date | string | null;
+  notes: string | null;
+  state: WorkOrderState;
+  request_hash: string;
+  created_by_label: string | null;
+  created_at: Date;
+  updated_at: Date;
+}
 
 /**
  * The work_orders table. Reads join the mold's and the material system's names for display (a read

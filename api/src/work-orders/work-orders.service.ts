@@ -9,12 +9,9 @@ import { isoDay } from '@pourgate/batching';
 import { MaterialSystemsService } from '../materials/material-systems.service.js';
 import { MoldsService } from '../molds/molds.service.js';
 import { notFound } from '../shop/errors.js';
-import { WorkOrdersRepository } from './work-orders.repository.js';
+import { type WorkOrderRow, WorkOrdersRepository, type WorkOrderState } from './work-orders.repository.js';
 
-export { workOrdersListSpec } from './work-orders.repository.js';
-
-export const WORK_ORDER_STATES = ['open', 'in_progress', 'done', 'cancelled'] as const;
-export type WorkOrderState = (typeof WORK_ORDER_STATES)[number];
+export { WORK_ORDER_STATES, workOrdersListSpec, type WorkOrderRow, type WorkOrderState } from './work-orders.repository.js';
 
 export interface WorkOrderInput {
   externalRef?: string;
@@ -25,25 +22,6 @@ export interface WorkOrderInput {
   dueOn?: string | null;
   notes?: string | null;
   state?: WorkOrderState;
-}
-
-export interface WorkOrderRow {
-  id: string;
-  organization_id: string;
-  external_ref: string;
-  part_number: string | null;
-  mold_id: string | null;
-  mold_name?: string | null;
-  material_system_id: string | null;
-  material_system_name?: string | null;
-  quantity: number;
-  due_on: Date | string | null;
-  notes: string | null;
-  state: WorkOrderState;
-  request_hash: string;
-  created_by_label: string | null;
-  created_at: Date;
-  updated_at: Date;
 }
 
 export function workOrderView(r: WorkOrderRow) {
