@@ -20,6 +20,10 @@ import { startErpReceiver } from '../fakes/src/erp-receiver.js';
 import { type ApiProcess, json, makeShop, readingBody, resetDatabase, ROOT, type Shop, sleep, startApi } from '../test/faults/harness.js';
 import { startPostgres, startRedis } from '../scripts/lib/services.mjs';
 
+if (process.argv.includes('--help')) {
+  console.log('usage: npm run bench   (BENCH_ROUNDS, BENCH_SECONDS, BENCH_LARGE_ROWS, BENCH_PIPELINE_READINGS; servers on 55642/56642/3342)');
+  process.exit(0);
+}
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 3);
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 5);
 const LARGE = Number(process.env.BENCH_LARGE_ROWS ?? 1_000_000);

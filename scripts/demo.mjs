@@ -9,6 +9,10 @@ import net from 'node:net';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
+if (process.argv.includes('--help')) {
+  console.log('usage: npm run demo   (npm start, then a shift at the invented demo shop played by the fakes; Ctrl-C stops)');
+  process.exit(0);
+}
 const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const port = Number(process.env.PORT ?? 3000);
 const mailPort = Number(process.env.CATCHER_HTTP_PORT ?? 55080);

@@ -50,7 +50,9 @@ export async function generate(): Promise<{ openapi: string; types: string }> {
   return { openapi: JSON.stringify(doc, null, 2) + '\n', types: await schemaTypes(doc) };
 }
 
-if (process.argv[1] && path.resolve(process.argv[1]) === fileURLToPath(import.meta.url)) {
+if (process.argv[1] && path.resolve(process.argv[1]) === fileURLToPath(import.meta.url) && process.argv.includes('--help')) {
+  console.log('usage: npm run sdk:generate [-- --check | --stdout]   (writes sdk/openapi.json and sdk/src/schema.d.ts; --check: exit 1 when stale)');
+} else if (process.argv[1] && path.resolve(process.argv[1]) === fileURLToPath(import.meta.url)) {
   const out = await generate();
   if (process.argv.includes('--stdout')) {
     // for the drift test: both files as one JSON object, nothing written

@@ -7,6 +7,14 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { ROOT, checkNode, ensureNpmDeps, ensureWorkspacePackages, fail, isStale, log, runTs, startPostgres, startRedis } from './lib/services.mjs';
 
+if (process.argv.includes('--help')) {
+  console.log(`usage: npm start
+  From a fresh clone to a running service: npm dependencies, PostgreSQL and Redis on loopback
+  (.data/), migrations, the demo seed (not in production), builds, then the API + console on
+  http://127.0.0.1:\${PORT:-3000}. DATABASE_URL / REDIS_URL / SMTP_URL use servers of your own;
+  PORT, PGPORT, REDIS_PORT move it; PROCESS_ROLE=api|worker|all (default all). Ctrl-C stops it.`);
+  process.exit(0);
+}
 checkNode();
 ensureNpmDeps();
 ensureWorkspacePackages();

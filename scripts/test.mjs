@@ -5,6 +5,13 @@ import { spawnSync } from 'node:child_process';
 import path from 'node:path';
 import { ROOT, checkNode, ensureNpmDeps, ensureWorkspacePackages, log, startPostgres, startRedis, runTs } from './lib/services.mjs';
 
+if (process.argv.includes('--help')) {
+  console.log(`usage: npm test [-- <jest arguments>]
+  No arguments: every suite (console, typecheck, Jest, faults, multi-process, browser, fresh clone).
+  With arguments: database reset and seed, typechecks, then Jest on what they select
+  (npm test -- test/e2e/auth, npm test -- -t ratio). TEST_PGPORT / TEST_REDIS_PORT pick the servers.`);
+  process.exit(0);
+}
 checkNode();
 ensureNpmDeps();
 ensureWorkspacePackages();

@@ -15,6 +15,7 @@ import { PROJECT_ROOT } from './config/paths.js';
 import { createLogger, genReqId, PinoNestLogger } from './logging/logger.js';
 import { buildOpenApiDocument } from './openapi/openapi.js';
 import { serveConsole } from './static/console-assets.js';
+import { registerQueueDashboard } from './queues/queue-dashboard.js';
 
 export interface CreateAppOptions {
   /** Where log lines go (tests capture them); stdout by default. */
@@ -92,6 +93,7 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
     customSiteTitle: 'Pourgate API',
   });
 
+  if (env.QUEUE_DASHBOARD === 'on') await registerQueueDashboard(app);
   await serveConsole(app, env.ADMIN_DIST || path.join(PROJECT_ROOT, 'admin', 'dist'), path.join(PROJECT_ROOT, 'api', 'placeholder'), logger);
 
   await app.init();

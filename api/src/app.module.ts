@@ -30,6 +30,7 @@ import { HealthModule } from './health/health.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { HeartbeatProcessor } from './queues/heartbeat.processor.js';
 import { QueuesModule } from './queues/queues.module.js';
+import { QueueDashboardModule } from './queues/queue-dashboard.module.js';
 import { UsersModule } from './users/users.module.js';
 
 /**
@@ -67,6 +68,7 @@ export class AppModule {
         EventsModule,
         webhooks,
         ScheduleModule.forRoot(webhooks),
+        QueueDashboardModule,
         OverviewModule,
         HealthModule,
       ],

@@ -13,6 +13,10 @@ import { type ApiProcess, json, makeShop, rawSend, readingBody, resetDatabase, R
 // plain Node module shared with `npm start` / `npm test`
 import { startPostgres, startRedis } from '../../scripts/lib/services.mjs';
 
+if (process.argv.includes('--help')) {
+  console.log('usage: npm run test:faults   (FAULTS_SCALE=small, FAULTS_ONLY=kill-api,stop-redis, FUZZ_CASES, FUZZ_SEED; servers on 55641/56641/3341)');
+  process.exit(0);
+}
 const small = process.env.FAULTS_SCALE === 'small';
 const only = process.env.FAULTS_ONLY?.split(',').map((s) => s.trim());
 const PG_PORT = Number(process.env.FAULTS_PGPORT ?? 55641);

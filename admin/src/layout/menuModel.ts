@@ -59,7 +59,7 @@ export const MENU: readonly MenuSection[] = [
       { id: 'users', label: 'People', to: '/users', requires: 'people:read' },
       { id: 'invitations', label: 'Invitations', to: '/invitations', requires: 'people:read' },
       { id: 'audit-events', label: 'Audit log', to: '/audit-events', requires: 'audit:read' },
-      { id: 'queues', label: 'Job queues', to: '/v1/admin/queues/', requires: 'queues:read', external: true, pass: '/v1/admin/queue-sessions' },
+      { id: 'queues', label: 'Job queues', to: '/queues/', requires: 'queues:read', external: true, pass: '/v1/admin/queue-sessions' },
     ],
   },
   {

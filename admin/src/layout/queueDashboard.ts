@@ -2,7 +2,7 @@ import { http } from '../providers';
 
 /**
  * The queue dashboard is a server page, so the console first asks the API for a short-lived pass
- * (an HttpOnly cookie for /v1/admin/queues only), then opens the page in a new tab. The tab is
+ * (an HttpOnly cookie for /queues only), then opens the page in a new tab. The tab is
  * opened during the click (pop-up blockers allow that) and pointed at the page once the pass is set.
  */
 export async function openQueueDashboard(passUrl: string): Promise<void> {

@@ -44,7 +44,7 @@ export const envSchema = {
     WORKER_HEALTH_PORT: { type: 'integer', minimum: 0, maximum: 65535, default: 3100, description: 'PROCESS_ROLE=worker: port of the health endpoint for orchestrators (0: none)' },
     SHUTDOWN_TIMEOUT_MS: { type: 'integer', minimum: 1000, maximum: 600000, default: 25000, description: 'How long a stopping process waits for running jobs before it exits anyway' },
     LOG_FORMAT: { enum: ['auto', 'json', 'pretty'], default: 'auto', description: 'auto: readable lines at a terminal outside production, JSON otherwise' },
-    QUEUE_DASHBOARD: { enum: ['on', 'off'], default: 'on', description: 'The queue dashboard for admins under /v1/admin/queues' },
+    QUEUE_DASHBOARD: { enum: ['on', 'off'], default: 'on', description: 'The queue dashboard for admins at /queues/' },
     QUEUE_PREFIX: { type: 'string', pattern: '^[A-Za-z0-9:_-]+$', default: 'bull' },
   },
   required: ['DATABASE_URL', 'REDIS_URL'],

@@ -36,8 +36,8 @@ export async function serveConsole(app: NestFastifyApplication, consoleDir: stri
     index: ['index.html'],
     preCompressed: true,
     cacheControl: false,
-    setHeaders: (reply: { setHeader(k: string, v: string): void }, file: string) => {
-      reply.setHeader('cache-control', file.startsWith(assetsDir) ? HASHED_ASSET_CACHE : ENTRY_CACHE);
+    setHeaders: (reply: { header(k: string, v: string): void }, file: string) => {
+      reply.header('cache-control', file.startsWith(assetsDir) ? HASHED_ASSET_CACHE : ENTRY_CACHE);
     },
   });
   return root;

@@ -48,6 +48,7 @@ export const ACTIONS = {
   'api-keys:read': { roles: ['admin', 'integrator'], description: 'List API keys' },
   'api-keys:manage': { roles: ['admin', 'integrator'], description: 'Create, rotate and revoke API keys (integrators: device keys only)' },
   'audit:read': { roles: ['admin'], description: 'Read the audit log' },
+  'queues:read': { roles: ['admin'], description: 'Open the queue dashboard (waiting, active, delayed and failed jobs; read-only)' },
   'devices:read': { roles: everyone, scope: 'devices:read', description: 'List devices and stations' },
   'devices:manage': { roles: ['admin', 'integrator'], description: 'Register and change devices' },
   'webhooks:read': { roles: ['admin', 'integrator'], description: 'List webhook endpoints and deliveries' },
