@@ -752,46 +752,6 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
-    "/v1/batches/{id}/release-check": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /**
-         * What a batch still needs before release
-         * @description Every component its targets name (A, B, the pigment when weighed separately) and what its system asks for (milestones, temperatures), each recorded and accepted or waived; and rejections still open.
-         */
-        get: operations["BatchRelease_check"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
-    };
-    "/v1/batches/{id}/release": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /**
-         * Release a batch
-         * @description When the batch is complete (see release-check) and every rejected reading was waived (or none was rejected); 409 with what is missing otherwise.
-         */
-        post: operations["BatchRelease_release"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
-    };
     "/v1/live/tickets": {
         parameters: {
             query?: never;
@@ -1081,7 +1041,7 @@ export interface paths {
         };
         /**
          * The event feed, for systems that poll instead of receiving webhooks
-         * @description Pass the `next` cursor of one page as `after` to get the following page; every event appears once, in order. Types: webhook.test, reading.accepted, reading.rejected, reading.waived, reading.upheld, batch.created, batch.state_changed, batch.released, batch.on_hold, batch.scrapped, lot.held, lot.hold_released, work_order.created, work_order.changed, drift.detected, drift.acknowledged.
+         * @description Pass the `next` cursor of one page as `after` to get the following page; every event appears once, in order. Types: webhook.test, reading.accepted, reading.rejected, reading.waived, reading.upheld, batch.created, batch.state_changed, batch.released, batch.on_hold, batch.scrapped, work_order.created, work_order.changed, drift.detected, drift.acknowledged.
          */
         get: operations["Events_feed"];
         put?: never;
@@ -1231,26 +1191,6 @@ export interface paths {
         put?: never;
         /** Replay every dead-lettered delivery since a time (optionally of one endpoint) */
         post: operations["WebhookDeliveries_replayAll"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
-    };
-    "/v1/admin/queue-sessions": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /**
-         * A pass to the queue dashboard (admins)
-         * @description Sets an HttpOnly cookie, valid 15 minutes on /queues only, that lets this browser open the queue dashboard (waiting, active, delayed and failed jobs of every queue, read-only).
-         */
-        post: operations["QueueDashboard_open"];
         delete?: never;
         options?: never;
         head?: never;
@@ -1836,110 +1776,6 @@ export interface webhooks {
         patch?: never;
         trace?: never;
     };
-    "lot.held": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /**
-         * A lot was put on hold for new batches: a cup test of it failed the system's reactivity window or density band
-         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
-         */
-        post: {
-            parameters: {
-                query?: never;
-                header?: never;
-                path?: never;
-                cookie?: never;
-            };
-            requestBody: {
-                content: {
-                    "application/json": components["schemas"]["event"] & {
-                        /** @constant */
-                        type?: "lot.held";
-                        data?: components["schemas"]["event.lot.held"];
-                    };
-                };
-            };
-            responses: {
-                /** @description Gone: Pourgate disables the endpoint */
-                410: {
-                    headers: {
-                        [name: string]: unknown;
-                    };
-                    content?: never;
-                };
-                /** @description Received */
-                "2XX": {
-                    headers: {
-                        [name: string]: unknown;
-                    };
-                    content?: never;
-                };
-            };
-        };
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
-    };
-    "lot.hold_released": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /**
-         * An engineer released a held lot, with a note saying why
-         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
-         */
-        post: {
-            parameters: {
-                query?: never;
-                header?: never;
-                path?: never;
-                cookie?: never;
-            };
-            requestBody: {
-                content: {
-                    "application/json": components["schemas"]["event"] & {
-                        /** @constant */
-                        type?: "lot.hold_released";
-                        data?: components["schemas"]["event.lot.hold_released"];
-                    };
-                };
-            };
-            responses: {
-                /** @description Gone: Pourgate disables the endpoint */
-                410: {
-                    headers: {
-                        [name: string]: unknown;
-                    };
-                    content?: never;
-                };
-                /** @description Received */
-                "2XX": {
-                    headers: {
-                        [name: string]: unknown;
-                    };
-                    content?: never;
-                };
-            };
-        };
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
-    };
     "work_order.created": {
         parameters: {
             query?: never;
@@ -2317,28 +2153,6 @@ export interface components {
             plannedFor?: string;
             /** @description Scale divisions the ratio band on the smaller part must span (5 when not given) */
             minimumToleranceDivisions?: number;
-        };
-        /** What a batch still needs before release */
-        "batch-release-check.view": {
-            /** Format: uuid */
-            batchId: string;
-            state: string;
-            /** @description True when the release button may be pressed */
-            ready: boolean;
-            /** @description What this batch must have recorded: A, B, the pigment when weighed separately, and what its system asks for */
-            required: components["schemas"]["batch-release-check.view"]["$defs"]["item"][];
-            missing: {
-                item: components["schemas"]["batch-release-check.view"]["$defs"]["item"];
-                /** @enum {unknown} */
-                problem: "not_recorded" | "rejected" | "pending";
-                message: string;
-            }[];
-            /** @description Rejected readings not waived (upheld ones included) */
-            openRejections: number;
-            $defs: {
-                /** @enum {unknown} */
-                item: "part_a" | "part_b" | "pigment" | "component_temperature" | "mold_temperature" | "ambient_temperature" | "humidity" | "mix_start" | "pour" | "demold";
-            };
         };
         /** The targets stored with a batch */
         "batch-targets.view": {
@@ -2742,7 +2556,8 @@ export interface components {
         "displayed-quantity": {
             value: number;
             unit: string;
-            si: {
+            /** @description Absent for dimensionless figures */
+            si?: {
                 value: number;
                 unit: string;
             };
@@ -2886,7 +2701,7 @@ export interface components {
             /** @default 100 */
             limit?: number;
             /** @description Only these event types (repeat the parameter) */
-            type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed")[];
+            type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
         };
         /** A page of the event feed */
         "event.feed": {
@@ -2894,39 +2709,6 @@ export interface components {
             /** @description Pass as after= for the next page (also when empty: poll again later with it) */
             next: string | null;
             hasMore: boolean;
-        };
-        /**
-         * The data of a lot.held event
-         * @description A lot was put on hold for new batches: a cup test of it failed (ASTM D7487 terms)
-         */
-        "event.lot.held": {
-            /** Format: uuid */
-            lotId: string;
-            lotNumber: string;
-            /** @enum {unknown} */
-            part: "A" | "B" | "pigment";
-            /** Format: uuid */
-            cupTestId: string;
-            /** @description The codes of the cup test's failed checks */
-            reasons: components["schemas"]["finding-code"][];
-        };
-        /**
-         * The data of a lot.hold_released event
-         * @description An engineer released a held lot, with a note saying why
-         */
-        "event.lot.hold_released": {
-            /** Format: uuid */
-            lotId: string;
-            lotNumber: string;
-            /** @enum {unknown} */
-            part: "A" | "B" | "pigment";
-            /**
-             * Format: uuid
-             * @description The cup test that held it
-             */
-            cupTestId: string | null;
-            note: string;
-            releasedBy: string | null;
         };
         /**
          * The data of a reading.accepted event
@@ -3002,7 +2784,7 @@ export interface components {
             /** Format: uuid */
             id: string;
             /** @enum {unknown} */
-            type: "webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed" | "drift.detected" | "drift.acknowledged";
+            type: "webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed" | "drift.detected" | "drift.acknowledged";
             /** Format: date-time */
             occurredAt: string;
             subject: {
@@ -3401,7 +3183,7 @@ export interface components {
             demoldTime?: components["schemas"]["quantity"] | null;
             /** @description Time */
             fullCureTime?: components["schemas"]["quantity"] | null;
-            /** @description Highest pigment, percent of the dose basis (A+B unless pigmentDoseBasis says otherwise) */
+            /** @description Highest pigment, percent of A+B */
             maxPigmentPercent?: number | null;
             /** @description Highest pack factor the system is made for (at least 1) */
             maxPackFactor?: number | null;
@@ -3417,44 +3199,6 @@ export interface components {
             cautionsText?: string | null;
             /** @description Why this revision was made (PUT) */
             changeNote?: string | null;
-            /** @description ± tolerance as data sheets state it: parts by weight of B per the system's A parts (100 : 45 ± 2 is 2). Replaces ratioTolerancePercent; weight ratios only */
-            ratioTolerancePbw?: number | null;
-            /**
-             * @description What a pigment percent is of: A+B, the polyol side, or the total with the pigment (pastes are dosed all three ways)
-             * @default ab
-             * @enum {unknown}
-             */
-            pigmentDoseBasis?: "ab" | "polyol" | "total";
-            /**
-             * @description Pigment weighed on its own, or pre-blended in part A or B (that part's target and the ratio check then include it)
-             * @default separate
-             * @enum {unknown}
-             */
-            pigmentPlacement?: "separate" | "A" | "B";
-            /** @description OH number of the pigment paste's carrier, mg KOH/g: counted in the isocyanate index */
-            pigmentCarrierHydroxylNumber?: number | null;
-            /** @description Cup-test cream time window (time), ASTM D7487 terms */
-            creamTimeWindow?: {
-                min: components["schemas"]["quantity"];
-                max: components["schemas"]["quantity"];
-            } | null;
-            /** @description Cup-test rise (top-of-cup) time window (time), ASTM D7487 terms */
-            riseTimeWindow?: {
-                min: components["schemas"]["quantity"];
-                max: components["schemas"]["quantity"];
-            } | null;
-            /** @description Cup-test tack-free time window (time), ASTM D7487 terms */
-            tackFreeTimeWindow?: {
-                min: components["schemas"]["quantity"];
-                max: components["schemas"]["quantity"];
-            } | null;
-            /** @description Free-rise density band at the reference temperature (density) for judging cup tests; a cup's density is corrected to the reference temperature with the system's slope */
-            freeRiseDensityBand?: {
-                min: components["schemas"]["quantity"];
-                max: components["schemas"]["quantity"];
-            } | null;
-            /** @description What a batch must also have recorded (and accepted or waived) before release, besides A, B and the pigment */
-            releaseRequires?: ("component_temperature" | "mold_temperature" | "ambient_temperature" | "humidity" | "mix_start" | "pour" | "demold")[];
         };
         /** A material system at its current revision (SI) */
         "material-system.view": {
@@ -3770,22 +3514,6 @@ export interface components {
              */
             unit: string;
         };
-        /**
-         * Queue dashboard session
-         * @description A short-lived pass to the queue dashboard, carried by an HttpOnly cookie limited to the dashboard's path; open `url` in the same browser.
-         */
-        "queue-dashboard.session": {
-            /**
-             * @description Where the dashboard is (same origin)
-             * @example /queues/
-             */
-            url: string;
-            /**
-             * Format: date-time
-             * @description When the pass lapses; ask for a new one from the console
-             */
-            expiresAt: string;
-        };
         /** Readiness: PostgreSQL and Redis are reachable */
         "readiness.view": {
             /** @constant */
@@ -3937,7 +3665,8 @@ export interface components {
          * @description Why a reading was rejected (or set aside): what was measured against which limit, in which unit
          */
         "reading.reason": {
-            code: components["schemas"]["finding-code"];
+            /** @example RATIO_ISOCYANATE_HEAVY */
+            code: string;
             message: string;
             measured: number | null;
             limit: number | null;
@@ -3948,8 +3677,6 @@ export interface components {
              * @example s
              */
             unit: string | null;
-            /** @description What the sentence needs besides the figures (part, side, target, readability, ...), so it can be written for another unit system */
-            facts?: Record<string, never>;
         };
         /** A reading posted again: the first one, as stored */
         "reading.replayed": {
@@ -3980,8 +3707,7 @@ export interface components {
             cavities: number;
             totalVolume: components["schemas"]["displayed-quantity"];
             targetDensity: components["schemas"]["displayed-quantity"];
-            /** @description Dimensionless (unit 1) */
-            packFactor: components["schemas"]["quantity"];
+            packFactor: components["schemas"]["displayed-quantity"];
             /** @enum {unknown} */
             densityBasis: "target_density" | "pack_factor" | "mold_default_pack_factor" | "free_rise_cup";
             expectedFreeRiseDensity: {
@@ -3998,8 +3724,7 @@ export interface components {
                     count: number;
                 } | null;
             };
-            /** @description Dimensionless (unit 1) */
-            expectedPackFactor: components["schemas"]["quantity"];
+            expectedPackFactor: components["schemas"]["displayed-quantity"];
             foamMass: components["schemas"]["displayed-quantity"];
             mixedMass: components["schemas"]["displayed-quantity"];
             allowances: {
@@ -4292,7 +4017,7 @@ export interface components {
             url: string;
             description?: string;
             /** @description Empty or omitted: every event type */
-            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed")[];
+            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
             enabled?: boolean;
         };
         /** A webhook endpoint with its signing secret: the only time it is shown */
@@ -4317,7 +4042,7 @@ export interface components {
             url?: string;
             description?: string;
             /** @description Empty or omitted: every event type */
-            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed")[];
+            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
             enabled?: boolean;
         };
         /** A webhook endpoint (never its secret) */
@@ -7541,113 +7266,6 @@ export interface operations {
             };
         };
     };
-    BatchRelease_check: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                id: string;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            /** @description OK */
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["batch-release-check.view"];
-                };
-            };
-            /** @description No valid credentials */
-            401: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/problem+json": components["schemas"]["problem"];
-                };
-            };
-            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
-            403: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/problem+json": components["schemas"]["problem"];
-                };
-            };
-            /** @description An error, as RFC 9457 problem details */
-            default: {
-                headers: {
-                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
-                    "Retry-After"?: string;
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/problem+json": components["schemas"]["problem"];
-                };
-            };
-        };
-    };
-    BatchRelease_release: {
-        parameters: {
-            query?: never;
-            header?: {
-                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
-                "Idempotency-Key"?: string;
-            };
-            path: {
-                id: string;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            /** @description OK */
-            200: {
-                headers: {
-                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
-                    "Idempotent-Replayed"?: "true";
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["batch.view"];
-                };
-            };
-            /** @description No valid credentials */
-            401: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/problem+json": components["schemas"]["problem"];
-                };
-            };
-            /** @description Needs the action readings:review (roles: engineer) */
-            403: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/problem+json": components["schemas"]["problem"];
-                };
-            };
-            /** @description An error, as RFC 9457 problem details */
-            default: {
-                headers: {
-                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
-                    "Retry-After"?: string;
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/problem+json": components["schemas"]["problem"];
-                };
-            };
-        };
-    };
     Live_ticket: {
         parameters: {
             query?: never;
@@ -8719,7 +8337,7 @@ export interface operations {
             query?: {
                 after?: string;
                 limit?: number;
-                type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed")[];
+                type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
             };
             header?: never;
             path?: never;
@@ -9364,62 +8982,6 @@ export interface operations {
                 };
             };
             /** @description Needs the action webhooks:manage (roles: admin, integrator) */
-            403: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/problem+json": components["schemas"]["problem"];
-                };
-            };
-            /** @description An error, as RFC 9457 problem details */
-            default: {
-                headers: {
-                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
-                    "Retry-After"?: string;
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/problem+json": components["schemas"]["problem"];
-                };
-            };
-        };
-    };
-    QueueDashboard_open: {
-        parameters: {
-            query?: never;
-            header?: {
-                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
-                "Idempotency-Key"?: string;
-            };
-            path?: never;
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            /** @description Created */
-            201: {
-                headers: {
-                    /** @description pourgate_queues=…; Path=/queues; HttpOnly; SameSite=Strict */
-                    "Set-Cookie"?: unknown;
-                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
-                    "Idempotent-Replayed"?: "true";
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["queue-dashboard.session"];
-                };
-            };
-            /** @description No valid credentials */
-            401: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/problem+json": components["schemas"]["problem"];
-                };
-            };
-            /** @description Needs the action queues:read (roles: admin) */
             403: {
                 headers: {
                     [name: string]: unknown;
