@@ -2,7 +2,7 @@ import type { Knex } from 'knex';
 import { computeBatchTargets, type BatchTargetsInput } from '@pourgate/batching';
 import { readSystemInput, parametersOf, type MaterialSystemInput } from '@pourgate/batching';
 import { readMoldGeometry, type MoldGeometryInput } from '@pourgate/batching';
-import { isoDay } from '@pourgate/batching';
+import { isoDay, judgeCupTest, judgeReading, type MaterialSystemParameters } from '@pourgate/batching';
 
 /**
  * The demo shop's materials and work: invented systems, molds, lots, cup tests, work orders and
@@ -38,6 +38,11 @@ const SYSTEMS: (MaterialSystemInput & { name: string; kind: 'flexible' | 'integr
     hydroxylNumber: 35,
     waterPbw: 3.2,
     cautionsText: 'Demo data: fast system — mix for 8 seconds at most and pour at once.',
+    // the reactivity window and density band its cup tests are judged against (ASTM D7487 terms)
+    creamTimeWindow: { min: { value: 9, unit: 's' }, max: { value: 15, unit: 's' } },
+    riseTimeWindow: { min: { value: 60, unit: 's' }, max: { value: 85, unit: 's' } },
+    tackFreeTimeWindow: { min: { value: 120, unit: 's' }, max: { value: 160, unit: 's' } },
+    freeRiseDensityBand: { min: { value: 26.5, unit: 'kg/m3' }, max: { value: 29.5, unit: 'kg/m3' } },
   },
   {
     name: 'Demo Flex 45 Slow',
@@ -125,6 +130,8 @@ const LOTS: [string | null, 'A' | 'B' | 'pigment', string, number, number][] = [
   ['Demo Skin 55', 'A', 'DS55-A-0042', -14, 166],
   ['Demo Skin 55', 'B', 'DS55-B-0042', -14, 166],
   [null, 'pigment', 'PIG-BLACK-07', -90, 640],
+  // a fresh drum of isocyanate whose cup test failed: held for new batches until an engineer releases it
+  ['Demo Flex 28', 'B', 'DF28-B-0131', -3, 177],
 ];
 
 /** Cup tests of Demo Flex 28: [A °C, B °C, cream s, top of cup s, tack free s, kg/m³, days from today]. */
@@ -135,6 +142,9 @@ const CUPS: [number, number, number, number, number, number, number][] = [
   [24.0, 24.5, 11, 70, 131, 27.4, -22],
   [26.0, 25.5, 10, 66, 125, 27.0, -21],
 ];
+
+/** The failed cup test of lot DF28-B-0131: slow cream and rise, heavy foam (invented demo values). */
+const FAILED_CUP: [number, number, number, number, number, number, number] = [22.0, 22.5, 19, 97, 175, 31.6, -2];
 
 const ORDERS = [
   { externalRef: 'WO-DEMO-0001', partNumber: 'CUSH-SEAT-STD', mold: 'Seat cushion', system: 'Demo Flex 28', quantity: 120, dueOn: day(17), notes: 'Black, standard firmness.' },
@@ -186,13 +196,23 @@ export async function seedShopDemo(db: Knex, orgId: string): Promise<number> {
   }
 
   const flex = systemIds.get('Demo Flex 28')!;
+  const flexParameters: MaterialSystemParameters = parametersOf(flex.cols, 'flexible');
   const cupsOnFile = Number((await db('qc_cup_tests').where({ organization_id: orgId, material_system_id: flex.id }).count({ n: '*' }))[0]!.n);
-  for (const [a, b, cream, top, tack, density, daysAgo] of cupsOnFile > 0 ? [] : CUPS) {
+  const cupRows = cupsOnFile > 0 ? [] : [...CUPS.map((c) => ({ c, lotB: 'DF28-B-0117' })), { c: FAILED_CUP, lotB: 'DF28-B-0131' }];
+  for (const { c: [a, b, cream, top, tack, density, daysAgo], lotB } of cupRows) {
     const testedAt = `${day(daysAgo)}T07:40:00Z`;
-    await db('qc_cup_tests').insert({
-      organization_id: orgId, material_system_id: flex.id, material_system_revision_id: flex.revisionId, lot_a_id: lots.get('DF28-A-0117')!.id, lot_b_id: lots.get('DF28-B-0117')!.id,
+    // judged as the API judges a cup test: the system's window and band, the density at the reference temperature
+    const judged = judgeCupTest(
+      { temperature: (a + b) / 2, creamTime: cream, riseTime: top, tackFreeTime: tack, freeRiseDensity: density },
+      { creamTimeWindow: flexParameters.creamTimeWindow, riseTimeWindow: flexParameters.riseTimeWindow, tackFreeTimeWindow: flexParameters.tackFreeTimeWindow, freeRiseDensityBand: flexParameters.freeRiseDensityBand, referenceTemperature: flexParameters.freeRiseReferenceTemperature, slope: flexParameters.freeRiseDensitySlope },
+    );
+    const [cup] = await db('qc_cup_tests').insert({
+      organization_id: orgId, material_system_id: flex.id, material_system_revision_id: flex.revisionId, lot_a_id: lots.get('DF28-A-0117')!.id, lot_b_id: lots.get(lotB)!.id,
       component_temperature_a_c: a, component_temperature_b_c: b, cream_time_s: cream, top_of_cup_time_s: top, tack_free_time_s: tack, free_rise_density_kg_m3: density, tested_at: testedAt, created_by_label: SEEDED_BY,
-    });
+      verdict: judged.verdict, findings: JSON.stringify(judged.findings), free_rise_density_at_reference_kg_m3: judged.correctedDensity,
+    }).returning('id');
+    // the new drum is held; the lot of part A also went into the passing cups, so only the new drum is held
+    if (judged.verdict === 'failed') await db('lots').where({ id: lots.get(lotB)!.id }).update({ held_at: new Date(testedAt), held_by_cup_test_id: cup.id });
     added++;
   }
 
@@ -211,16 +231,22 @@ export async function seedShopDemo(db: Knex, orgId: string): Promise<number> {
   // planned batches: the same snapshot the API stores (every SI input, its sources, the targets)
   const batches = [
     { note: 'Demo batch: first seat cushion of the order', order: 'WO-DEMO-0001', system: 'Demo Flex 28', mold: 'Seat cushion', lotA: 'DF28-A-0117', lotB: 'DF28-B-0117', pigment: 'PIG-BLACK-07', packFactor: 1.8, pigmentPercent: 2, overfillPercent: 3, retentionPercent: 4, componentTemperature: 22.5, plannedFor: day(1) },
+    { note: 'Demo batch: short shot on the seat cushion (part B ran out)', order: 'WO-DEMO-0001', system: 'Demo Flex 28', mold: 'Seat cushion', lotA: 'DF28-A-0117', lotB: 'DF28-B-0117', pigment: null, packFactor: 1.8, pigmentPercent: 0, overfillPercent: 3, retentionPercent: 4, componentTemperature: 22.5, plannedFor: day(0), shortShot: true },
     { note: 'Demo batch: armrest pair', order: 'WO-DEMO-0002', system: 'Demo Skin 55', mold: 'Armrest, 2-up', lotA: 'DS55-A-0042', lotB: 'DS55-B-0042', pigment: null, packFactor: 3.6, pigmentPercent: 0, overfillPercent: 2, retentionPercent: 5, componentTemperature: 24, plannedFor: day(2) },
   ];
-  for (const b of batches) {
+  let scale = await db('devices').where({ organization_id: orgId, serial: 'DEMO-SCALE-01' }).first('id', 'readability_kg', 'capacity_kg');
+  if (!scale) {
+    [scale] = await db('devices').insert({ organization_id: orgId, kind: 'scale', serial: 'DEMO-SCALE-01', name: 'Demo bench scale', readability_kg: 0.0001, capacity_kg: 30, calibration_due: day(200) }).returning(['id', 'readability_kg', 'capacity_kg']);
+    added++;
+  }
+  for (const b of batches as (typeof batches[number] & { shortShot?: boolean })[]) {
     if (await db('batches').where({ organization_id: orgId, notes: b.note }).first('id')) continue;
     const sys = systemIds.get(b.system)!;
     const mold = molds.get(b.mold)!;
     const used = [['A', b.lotA], ['B', b.lotB], ['pigment', b.pigment]].filter((x): x is [string, string] => x[1] !== null).map(([part, n]) => ({ part, lot: lots.get(n)! }));
     const cups = sys.id === flex.id ? CUPS.map(([a, bb, , , , density]) => ({ temperature: (a + bb) / 2, density })) : [];
     const input: BatchTargetsInput = {
-      system: parametersOf(sys.cols),
+      system: parametersOf(sys.cols, SYSTEMS.find((x) => x.name === b.system)!.kind),
       mold: { volume: mold.cavity_volume_m3, cavities: mold.cavities, defaultPackFactor: mold.default_pack_factor ?? undefined },
       options: {
         packFactor: b.packFactor, pigmentPercent: b.pigmentPercent, overfillPercent: b.overfillPercent, retentionPercent: b.retentionPercent,
@@ -242,7 +268,7 @@ export async function seedShopDemo(db: Knex, orgId: string): Promise<number> {
     const [row] = await db('batches')
       .insert({
         organization_id: orgId, work_order_id: orders.get(b.order), material_system_id: sys.id, material_system_revision_id: sys.revisionId, subject: 'mold', mold_id: mold.id,
-        lot_a_id: lots.get(b.lotA)!.id, lot_b_id: lots.get(b.lotB)!.id, lot_pigment_id: b.pigment ? lots.get(b.pigment)!.id : null, state: 'planned', planned_for: b.plannedFor, notes: b.note,
+        lot_a_id: lots.get(b.lotA)!.id, lot_b_id: lots.get(b.lotB)!.id, lot_pigment_id: b.pigment ? lots.get(b.pigment)!.id : null, state: b.shortShot ? 'on_hold' : 'planned', planned_for: b.plannedFor, notes: b.note,
         options: JSON.stringify(options), computation_version: targets.computationVersion,
         targets: JSON.stringify({ computationVersion: targets.computationVersion, computedAt: new Date().toISOString(), input, sources, targets }),
         total_mass_kg: targets.totalMass.value, created_by_label: SEEDED_BY,
@@ -250,6 +276,31 @@ export async function seedShopDemo(db: Knex, orgId: string): Promise<number> {
       .returning('id');
     await db('batch_state_transitions').insert({ organization_id: orgId, batch_id: row.id, from_state: null, to_state: 'planned', actor_type: 'system', actor_label: SEEDED_BY, reason: 'demo data' });
     added++;
+    if (b.shortShot) added += await shortShot(db, orgId, row.id, scale.id, input, targets);
   }
   return added;
+}
+
+/**
+ * The short shot of the demo: part A weighed on target, part B only 70 % of its target (the drum ran
+ * out), judged as the API judges them — B is rejected as a short shot and the batch waits on hold.
+ */
+async function shortShot(db: Knex, orgId: string, batchId: string, deviceId: string, input: BatchTargetsInput, targets: ReturnType<typeof computeBatchTargets>): Promise<number> {
+  const a = targets.components.A.mass.value;
+  const b = Math.round(targets.components.B.mass.value * 0.7 * 10_000) / 10_000;
+  const facts = { a: targets.components.A.massUnrounded.value, b: targets.components.B.massUnrounded.value, pigment: 0, total: targets.totalMass.value, readability: 0.0001 };
+  const at = Date.now() - 40 * 60_000;
+  let n = 0;
+  const weighed: [string, number, number | null][] = [['part_a', a, null], ['part_b', b, a]];
+  for (const [i, [subject, kg, other]] of weighed.entries()) {
+    const verdict = judgeReading({ quantity: 'mass', subject: subject as 'part_a' | 'part_b', valueSi: kg, stable: true, device: { capacityKg: 30, calibrationDue: null }, day: new Date(at).toISOString().slice(0, 10), system: input.system, targets: facts, otherPartMassKg: other });
+    const time = new Date(at + i * 60_000);
+    await db('readings').insert({ organization_id: orgId, batch_id: batchId, device_id: deviceId, client_reading_id: `demo-short-shot-${subject}`, quantity: 'mass', subject, value_si: kg, unit_given: 'g', value_given: Math.round(kg * 1000 * 10) / 10, stable: true, device_time: time, received_at: time, skew_seconds: 0, status: verdict.status, reasons: JSON.stringify(verdict.reasons), judged_at: time });
+    n++;
+  }
+  await db('batch_state_transitions').insert([
+    { organization_id: orgId, batch_id: batchId, from_state: 'planned', to_state: 'weighing', actor_type: 'system', actor_label: 'reading judge', reason: 'first reading received' },
+    { organization_id: orgId, batch_id: batchId, from_state: 'weighing', to_state: 'on_hold', actor_type: 'system', actor_label: 'reading judge', reason: 'part B rejected: RATIO_POLYOL_HEAVY, SHORT_SHOT' },
+  ]);
+  return n;
 }

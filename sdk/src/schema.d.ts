@@ -752,6 +752,46 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/v1/batches/{id}/release-check": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * What a batch still needs before release
+         * @description Every component its targets name (A, B, the pigment when weighed separately) and what its system asks for (milestones, temperatures), each recorded and accepted or waived; and rejections still open.
+         */
+        get: operations["BatchRelease_check"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/batches/{id}/release": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Release a batch
+         * @description When the batch is complete (see release-check) and every rejected reading was waived (or none was rejected); 409 with what is missing otherwise.
+         */
+        post: operations["BatchRelease_release"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/v1/live/tickets": {
         parameters: {
             query?: never;
@@ -1041,7 +1081,7 @@ export interface paths {
         };
         /**
          * The event feed, for systems that poll instead of receiving webhooks
-         * @description Pass the `next` cursor of one page as `after` to get the following page; every event appears once, in order. Types: webhook.test, reading.accepted, reading.rejected, reading.waived, reading.upheld, batch.created, batch.state_changed, batch.released, batch.on_hold, batch.scrapped, work_order.created, work_order.changed, drift.detected, drift.acknowledged.
+         * @description Pass the `next` cursor of one page as `after` to get the following page; every event appears once, in order. Types: webhook.test, reading.accepted, reading.rejected, reading.waived, reading.upheld, batch.created, batch.state_changed, batch.released, batch.on_hold, batch.scrapped, lot.held, lot.hold_released, work_order.created, work_order.changed, drift.detected, drift.acknowledged.
          */
         get: operations["Events_feed"];
         put?: never;
@@ -1191,6 +1231,26 @@ export interface paths {
         put?: never;
         /** Replay every dead-lettered delivery since a time (optionally of one endpoint) */
         post: operations["WebhookDeliveries_replayAll"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/admin/queue-sessions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A pass to the queue dashboard (admins)
+         * @description Sets an HttpOnly cookie, valid 15 minutes on /queues only, that lets this browser open the queue dashboard (waiting, active, delayed and failed jobs of every queue, read-only).
+         */
+        post: operations["QueueDashboard_open"];
         delete?: never;
         options?: never;
         head?: never;
@@ -1776,6 +1836,110 @@ export interface webhooks {
         patch?: never;
         trace?: never;
     };
+    "lot.held": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A lot was put on hold for new batches: a cup test of it failed the system's reactivity window or density band
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "lot.held";
+                        data?: components["schemas"]["event.lot.held"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "lot.hold_released": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * An engineer released a held lot, with a note saying why
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "lot.hold_released";
+                        data?: components["schemas"]["event.lot.hold_released"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "work_order.created": {
         parameters: {
             query?: never;
@@ -2154,6 +2318,26 @@ export interface components {
             /** @description Scale divisions the ratio band on the smaller part must span (5 when not given) */
             minimumToleranceDivisions?: number;
         };
+        /** What a batch still needs before release */
+        "batch-release-check.view": {
+            /** Format: uuid */
+            batchId: string;
+            state: string;
+            /** @description True when the release button may be pressed */
+            ready: boolean;
+            /** @description What this batch must have recorded: A, B, the pigment when weighed separately, and what its system asks for */
+            required: components["schemas"]["batch-release-check.view.item"][];
+            missing: {
+                item: components["schemas"]["batch-release-check.view.item"];
+                /** @enum {unknown} */
+                problem: "not_recorded" | "rejected" | "pending";
+                message: string;
+            }[];
+            /** @description Rejected readings not waived (upheld ones included) */
+            openRejections: number;
+        };
+        /** @enum {unknown} */
+        "batch-release-check.view.item": "part_a" | "part_b" | "pigment" | "component_temperature" | "mold_temperature" | "ambient_temperature" | "humidity" | "mix_start" | "pour" | "demold";
         /** The targets stored with a batch */
         "batch-targets.view": {
             /** Format: uuid */
@@ -2185,13 +2369,9 @@ export interface components {
         };
         /** Something to check before pouring */
         "batch-warning": {
-            /**
-             * @example PACK_FACTOR_ABOVE_LIMIT
-             * @example LOT_EXPIRED
-             */
-            code: string;
+            code: components["schemas"]["finding-code"];
             /** @enum {unknown} */
-            severity: "warning" | "danger";
+            severity: "caution" | "warning" | "danger";
             message: string;
             /** @description SI (see unit) */
             measured?: number;
@@ -2205,6 +2385,8 @@ export interface components {
                 limit: number | null;
                 unit: string;
             };
+            /** @description What the sentence needs besides the figures */
+            facts?: Record<string, never>;
         };
         /**
          * Plan a batch (one mix) and compute its targets
@@ -2556,8 +2738,7 @@ export interface components {
         "displayed-quantity": {
             value: number;
             unit: string;
-            /** @description Absent for dimensionless figures */
-            si?: {
+            si: {
                 value: number;
                 unit: string;
             };
@@ -2701,7 +2882,7 @@ export interface components {
             /** @default 100 */
             limit?: number;
             /** @description Only these event types (repeat the parameter) */
-            type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
+            type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed")[];
         };
         /** A page of the event feed */
         "event.feed": {
@@ -2709,6 +2890,39 @@ export interface components {
             /** @description Pass as after= for the next page (also when empty: poll again later with it) */
             next: string | null;
             hasMore: boolean;
+        };
+        /**
+         * The data of a lot.held event
+         * @description A lot was put on hold for new batches: a cup test of it failed (ASTM D7487 terms)
+         */
+        "event.lot.held": {
+            /** Format: uuid */
+            lotId: string;
+            lotNumber: string;
+            /** @enum {unknown} */
+            part: "A" | "B" | "pigment";
+            /** Format: uuid */
+            cupTestId: string;
+            /** @description The codes of the cup test's failed checks */
+            reasons: components["schemas"]["finding-code"][];
+        };
+        /**
+         * The data of a lot.hold_released event
+         * @description An engineer released a held lot, with a note saying why
+         */
+        "event.lot.hold_released": {
+            /** Format: uuid */
+            lotId: string;
+            lotNumber: string;
+            /** @enum {unknown} */
+            part: "A" | "B" | "pigment";
+            /**
+             * Format: uuid
+             * @description The cup test that held it
+             */
+            cupTestId: string | null;
+            note: string;
+            releasedBy: string | null;
         };
         /**
          * The data of a reading.accepted event
@@ -2784,7 +2998,7 @@ export interface components {
             /** Format: uuid */
             id: string;
             /** @enum {unknown} */
-            type: "webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed" | "drift.detected" | "drift.acknowledged";
+            type: "webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed" | "drift.detected" | "drift.acknowledged";
             /** Format: date-time */
             occurredAt: string;
             subject: {
@@ -2844,6 +3058,17 @@ export interface components {
                 residualStandardDeviationKgM3: number;
                 count: number;
             } | null;
+            /** @description Whether targets use this line (judged at the system's reference temperature) */
+            trusted: boolean;
+            /** @enum {unknown} */
+            notTrustedBecause: "too_few_points" | "narrow_span" | "poor_fit" | "unexpected_sign" | "outside_tested_span" | null;
+            trustRules: {
+                minimumPoints: number;
+                minimumSpanC: number;
+                minimumRSquared: number;
+                extrapolationMarginC: number;
+                maxSlopeShare: number;
+            };
         };
         /** Liveness: the process answers */
         "health.view": {
@@ -3054,6 +3279,19 @@ export interface components {
             createdAt: string;
             /** Format: date-time */
             updatedAt: string;
+            /** @description Held for new batches: its latest cup test failed and no engineer has released it */
+            hold: {
+                /** Format: date-time */
+                since: string;
+                /** Format: uuid */
+                cupTestId: string | null;
+            } | null;
+            lastHoldRelease: {
+                /** Format: date-time */
+                at: string;
+                by: string | null;
+                note: string | null;
+            } | null;
         };
         /** One revision of a material system (SI) */
         "material-system-revision.view": {
@@ -3110,6 +3348,29 @@ export interface components {
             createdBy: string | null;
             /** Format: date-time */
             createdAt: string;
+            /** @description ± pbw of B per the system's A parts; replaces the percent when set */
+            ratioTolerancePbw: number | null;
+            /**
+             * @description What a pigment percent is of
+             * @enum {unknown}
+             */
+            pigmentDoseBasis: "ab" | "polyol" | "total";
+            /**
+             * @description Weighed on its own or pre-blended in a part
+             * @enum {unknown}
+             */
+            pigmentPlacement: "separate" | "A" | "B";
+            /** @description mg KOH/g, counted in the isocyanate index */
+            pigmentCarrierHydroxylNumber: number | null;
+            creamTimeMinS: number | null;
+            creamTimeMaxS: number | null;
+            riseTimeMinS: number | null;
+            riseTimeMaxS: number | null;
+            tackFreeTimeMinS: number | null;
+            tackFreeTimeMaxS: number | null;
+            freeRiseDensityMinKgM3: number | null;
+            freeRiseDensityMaxKgM3: number | null;
+            releaseRequires: ("component_temperature" | "mold_temperature" | "ambient_temperature" | "humidity" | "mix_start" | "pour" | "demold")[];
         };
         /**
          * Define (POST) or revise (PUT) a material system
@@ -3183,7 +3444,7 @@ export interface components {
             demoldTime?: components["schemas"]["quantity"] | null;
             /** @description Time */
             fullCureTime?: components["schemas"]["quantity"] | null;
-            /** @description Highest pigment, percent of A+B */
+            /** @description Highest pigment, percent of the dose basis (A+B unless pigmentDoseBasis says otherwise) */
             maxPigmentPercent?: number | null;
             /** @description Highest pack factor the system is made for (at least 1) */
             maxPackFactor?: number | null;
@@ -3199,6 +3460,44 @@ export interface components {
             cautionsText?: string | null;
             /** @description Why this revision was made (PUT) */
             changeNote?: string | null;
+            /** @description ± tolerance as data sheets state it: parts by weight of B per the system's A parts (100 : 45 ± 2 is 2). Replaces ratioTolerancePercent; weight ratios only */
+            ratioTolerancePbw?: number | null;
+            /**
+             * @description What a pigment percent is of: A+B, the polyol side, or the total with the pigment (pastes are dosed all three ways)
+             * @default ab
+             * @enum {unknown}
+             */
+            pigmentDoseBasis?: "ab" | "polyol" | "total";
+            /**
+             * @description Pigment weighed on its own, or pre-blended in part A or B (that part's target and the ratio check then include it)
+             * @default separate
+             * @enum {unknown}
+             */
+            pigmentPlacement?: "separate" | "A" | "B";
+            /** @description OH number of the pigment paste's carrier, mg KOH/g: counted in the isocyanate index */
+            pigmentCarrierHydroxylNumber?: number | null;
+            /** @description Cup-test cream time window (time), ASTM D7487 terms */
+            creamTimeWindow?: {
+                min: components["schemas"]["quantity"];
+                max: components["schemas"]["quantity"];
+            } | null;
+            /** @description Cup-test rise (top-of-cup) time window (time), ASTM D7487 terms */
+            riseTimeWindow?: {
+                min: components["schemas"]["quantity"];
+                max: components["schemas"]["quantity"];
+            } | null;
+            /** @description Cup-test tack-free time window (time), ASTM D7487 terms */
+            tackFreeTimeWindow?: {
+                min: components["schemas"]["quantity"];
+                max: components["schemas"]["quantity"];
+            } | null;
+            /** @description Free-rise density band at the reference temperature (density) for judging cup tests; a cup's density is corrected to the reference temperature with the system's slope */
+            freeRiseDensityBand?: {
+                min: components["schemas"]["quantity"];
+                max: components["schemas"]["quantity"];
+            } | null;
+            /** @description What a batch must also have recorded (and accepted or waived) before release, besides A, B and the pigment */
+            releaseRequires?: ("component_temperature" | "mold_temperature" | "ambient_temperature" | "humidity" | "mix_start" | "pour" | "demold")[];
         };
         /** A material system at its current revision (SI) */
         "material-system.view": {
@@ -3265,6 +3564,29 @@ export interface components {
             createdAt: string;
             /** Format: date-time */
             updatedAt: string;
+            /** @description ± pbw of B per the system's A parts; replaces the percent when set */
+            ratioTolerancePbw: number | null;
+            /**
+             * @description What a pigment percent is of
+             * @enum {unknown}
+             */
+            pigmentDoseBasis: "ab" | "polyol" | "total";
+            /**
+             * @description Weighed on its own or pre-blended in a part
+             * @enum {unknown}
+             */
+            pigmentPlacement: "separate" | "A" | "B";
+            /** @description mg KOH/g, counted in the isocyanate index */
+            pigmentCarrierHydroxylNumber: number | null;
+            creamTimeMinS: number | null;
+            creamTimeMaxS: number | null;
+            riseTimeMinS: number | null;
+            riseTimeMaxS: number | null;
+            tackFreeTimeMinS: number | null;
+            tackFreeTimeMaxS: number | null;
+            freeRiseDensityMinKgM3: number | null;
+            freeRiseDensityMaxKgM3: number | null;
+            releaseRequires: ("component_temperature" | "mold_temperature" | "ambient_temperature" | "humidity" | "mix_start" | "pour" | "demold")[];
         };
         /** The signed-in person */
         me: {
@@ -3500,6 +3822,14 @@ export interface components {
             createdBy: string | null;
             /** Format: date-time */
             createdAt: string;
+            /**
+             * @description Against the system's reactivity window and free-rise density band (ASTM D7487 terms)
+             * @enum {unknown}
+             */
+            verdict: "passed" | "failed" | "not_judged";
+            findings: components["schemas"]["reading.reason"][];
+            /** @description The measured density brought to the reference temperature with the system's slope */
+            freeRiseDensityAtReferenceKgM3: number | null;
         };
         /**
          * A measured quantity: a value and its unit
@@ -3513,6 +3843,22 @@ export interface components {
              * @example degC
              */
             unit: string;
+        };
+        /**
+         * Queue dashboard session
+         * @description A short-lived pass to the queue dashboard, carried by an HttpOnly cookie limited to the dashboard's path; open `url` in the same browser.
+         */
+        "queue-dashboard.session": {
+            /**
+             * @description Where the dashboard is (same origin)
+             * @example /queues/
+             */
+            url: string;
+            /**
+             * Format: date-time
+             * @description When the pass lapses; ask for a new one from the console
+             */
+            expiresAt: string;
         };
         /** Readiness: PostgreSQL and Redis are reachable */
         "readiness.view": {
@@ -3665,8 +4011,7 @@ export interface components {
          * @description Why a reading was rejected (or set aside): what was measured against which limit, in which unit
          */
         "reading.reason": {
-            /** @example RATIO_ISOCYANATE_HEAVY */
-            code: string;
+            code: components["schemas"]["finding-code"];
             message: string;
             measured: number | null;
             limit: number | null;
@@ -3677,6 +4022,8 @@ export interface components {
              * @example s
              */
             unit: string | null;
+            /** @description What the sentence needs besides the figures (part, side, target, readability, ...), so it can be written for another unit system */
+            facts?: Record<string, never>;
         };
         /** A reading posted again: the first one, as stored */
         "reading.replayed": {
@@ -3707,7 +4054,8 @@ export interface components {
             cavities: number;
             totalVolume: components["schemas"]["displayed-quantity"];
             targetDensity: components["schemas"]["displayed-quantity"];
-            packFactor: components["schemas"]["displayed-quantity"];
+            /** @description Dimensionless (unit 1) */
+            packFactor: components["schemas"]["quantity"];
             /** @enum {unknown} */
             densityBasis: "target_density" | "pack_factor" | "mold_default_pack_factor" | "free_rise_cup";
             expectedFreeRiseDensity: {
@@ -3723,8 +4071,13 @@ export interface components {
                     residualStandardDeviation: number;
                     count: number;
                 } | null;
+                /** @description Which estimate was used and why (the cup tests' line, or why it was not trusted) */
+                methodReason?: string;
+                /** @enum {unknown} */
+                fitRejected?: "too_few_points" | "narrow_span" | "poor_fit" | "unexpected_sign" | "outside_tested_span" | null;
             };
-            expectedPackFactor: components["schemas"]["displayed-quantity"];
+            /** @description Dimensionless (unit 1) */
+            expectedPackFactor: components["schemas"]["quantity"];
             foamMass: components["schemas"]["displayed-quantity"];
             mixedMass: components["schemas"]["displayed-quantity"];
             allowances: {
@@ -3781,6 +4134,17 @@ export interface components {
                     mass: components["schemas"]["displayed-quantity"];
                     massUnrounded: components["schemas"]["displayed-quantity"];
                     percentOfAB: number;
+                    /** @description The percent as dosed, and of what */
+                    dosed?: {
+                        percent: number;
+                        /** @enum {unknown} */
+                        basis: "ab" | "polyol" | "total";
+                    };
+                    /**
+                     * @description Weighed on its own, or pre-blended in a part (mass is then 0 and the part's target includes it)
+                     * @enum {unknown}
+                     */
+                    placement?: "separate" | "A" | "B";
                 };
             };
             totalMass: components["schemas"]["displayed-quantity"];
@@ -4017,7 +4381,7 @@ export interface components {
             url: string;
             description?: string;
             /** @description Empty or omitted: every event type */
-            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
+            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed")[];
             enabled?: boolean;
         };
         /** A webhook endpoint with its signing secret: the only time it is shown */
@@ -4042,7 +4406,7 @@ export interface components {
             url?: string;
             description?: string;
             /** @description Empty or omitted: every event type */
-            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
+            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed")[];
             enabled?: boolean;
         };
         /** A webhook endpoint (never its secret) */
@@ -4061,9 +4425,9 @@ export interface components {
             verdict: "delivered" | "failed";
             /**
              * Format: uuid
-             * @description The test send's row in the delivery log (GET /v1/webhook-deliveries/{id})
+             * @description The test send's row in the delivery log (GET /v1/webhook-deliveries/{id}); always present in answers of this version
              */
-            deliveryId: string;
+            deliveryId?: string;
             /** @description Why the send failed, in plain words (absent when delivered) */
             reason?: string;
         };
@@ -7266,6 +7630,113 @@ export interface operations {
             };
         };
     };
+    BatchRelease_check: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["batch-release-check.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    BatchRelease_release: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["batch.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action readings:review (roles: engineer) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
     Live_ticket: {
         parameters: {
             query?: never;
@@ -8337,7 +8808,7 @@ export interface operations {
             query?: {
                 after?: string;
                 limit?: number;
-                type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "work_order.created" | "work_order.changed")[];
+                type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed")[];
             };
             header?: never;
             path?: never;
@@ -8982,6 +9453,62 @@ export interface operations {
                 };
             };
             /** @description Needs the action webhooks:manage (roles: admin, integrator) */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    QueueDashboard_open: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Created */
+            201: {
+                headers: {
+                    /** @description pourgate_queues=…; Path=/queues; HttpOnly; SameSite=Strict */
+                    "Set-Cookie"?: unknown;
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["queue-dashboard.session"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action queues:read (roles: admin) */
             403: {
                 headers: {
                     [name: string]: unknown;

@@ -1,7 +1,8 @@
 import { Module } from '@nestjs/common';
+import { LotsModule } from '../lots/lots.module.js';
 import { TargetsModule } from '../targets/targets.module.js';
 import { BatchesController } from './batches.controller.js';
 import { BatchesService } from './batches.service.js';
 
-@Module({ imports: [TargetsModule], controllers: [BatchesController], providers: [BatchesService], exports: [BatchesService] })
+@Module({ imports: [TargetsModule, LotsModule], controllers: [BatchesController], providers: [BatchesService], exports: [BatchesService] })
 export class BatchesModule {}

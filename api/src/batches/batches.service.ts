@@ -6,15 +6,16 @@ import { AuditService } from '../audit/audit.service.js';
 import { actorOf, type RequestContext } from '../auth/principal.js';
 import { listPage } from '../common/lists/knex-list.js';
 import type { ListQuery, ListSpec } from '../common/lists/list-query.js';
-import { type FieldError, validationProblem } from '../common/problems.js';
+import { type FieldError, ProblemException, validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
 import { isoDay } from '@pourgate/batching';
 import { notFound } from '../shop/errors.js';
 import type { Quantity } from '@pourgate/batching';
 import { type OptionsInput, type TargetsSources, TargetsService } from '../targets/targets.service.js';
 import { EventsService } from '../events/events.service.js';
-import { ProblemException } from '../common/problems.js';
-import { moveBatch } from './batch-transitions.js';
+import { moveBatch, type TransitionActor } from './batch-transitions.js';
+import type { BatchState } from './batch-states.js';
+import { LotsService } from '../lots/lots.service.js';
 
 export const batchesListSpec: ListSpec = {
   resource: 'batches',
@@ -124,7 +125,7 @@ export function batchView(r: BatchRow) {
 
 @Injectable()
 export class BatchesService {
-  constructor(@Inject(KNEX) private readonly db: Knex, private readonly audit: AuditService, private readonly targets: TargetsService, private readonly events: EventsService) {}
+  constructor(@Inject(KNEX) private readonly db: Knex, private readonly audit: AuditService, private readonly targets: TargetsService, private readonly events: EventsService, private readonly lots: LotsService) {}
 
   base(orgId: string, db: Knex | Knex.Transaction = this.db) {
     return db('batches')
@@ -218,6 +219,12 @@ export class BatchesService {
       options: body.options,
       at: { systemId: '/materialSystemId', systemRevision: '/materialSystemRevision', systemInline: '/materialSystemId', moldId: '/moldId', moldInline: '/moldId', freeRiseCup: '/freeRiseCup', options: '/options' },
     });
+    // a lot whose cup test failed is held for new batches until an engineer releases it
+    const held = await this.lots.held(orgId, Object.values(resolved.lotIds).filter((x): x is string => !!x));
+    if (held.length) {
+      const at = (lotId: string) => `/options/lots/${Object.entries(resolved.lotIds).find(([, id]) => id === lotId)?.[0] ?? ''}`;
+      throw new ProblemException(409, { slug: 'conflict', detail: `Lot ${held.map((l) => l.lotNumber).join(', ')} is on hold: its latest cup test failed. An engineer must release the hold first.`, errors: held.map((l) => ({ pointer: at(l.id), detail: `lot ${l.lotNumber} is on hold since ${l.heldAt} (failed cup test)`, code: 'lot_on_hold' })) });
+    }
     if (!stationId && resolved.scaleDeviceId) {
       const dev = await this.db('devices').where({ id: resolved.scaleDeviceId }).first('station_id');
       stationId = dev?.station_id ?? null;
@@ -262,25 +269,31 @@ export class BatchesService {
     return this.get(c, id);
   }
 
-  /**
-   * Releases a batch: allowed when it has no rejected reading left unwaived (an upheld one never
-   * releases). 409 otherwise, nothing written.
-   */
-  async release(c: RequestContext, id: string) {
-    const orgId = c.principal.organizationId;
-    await this.row(c, id);
-    const actor = actorOf(c.principal);
-    await this.db.transaction(async (trx) => {
-      const open = await trx('readings').where({ organization_id: orgId, batch_id: id, status: 'rejected' }).where((q) => q.whereNull('review_decision').orWhere('review_decision', 'uphold')).count({ n: '*' });
-      if (Number(open[0]!.n) > 0) throw new ProblemException(409, { slug: 'conflict', detail: `The batch has ${open[0]!.n} rejected reading(s) not waived.` });
-      const moved = await moveBatch(trx, this.events, orgId, id, 'released', actor, 'released by an engineer');
-      if (!moved) {
-        const b = await trx('batches').where({ id }).first('state');
-        if (b?.state !== 'released') throw new ProblemException(409, { slug: 'conflict', detail: `A ${b?.state} batch cannot be released.` });
-        return;
-      }
-      await this.audit.record({ organizationId: orgId, ...actor, action: 'batch.released', targetType: 'batch', targetId: id, details: {}, ip: c.ip, userAgent: c.userAgent }, trx);
-    });
-    return this.get(c, id);
+  /** The ids among `ids` that are batches of the organization. */
+  async existingIds(orgId: string, ids: string[]): Promise<Set<string>> {
+    if (ids.length === 0) return new Set();
+    const rows: { id: string }[] = await this.db('batches').where('organization_id', orgId).whereIn('id', ids).select('id');
+    return new Set(rows.map((r) => r.id));
+  }
+
+  /** What judging and release need of a batch: its state and the stored targets snapshot. */
+  async judgingFacts(db: Knex | Knex.Transaction, orgId: string, batchId: string): Promise<{ state: string; snapshot: TargetsSnapshot | null; systemKind: string | null } | undefined> {
+    const row = await db('batches').join('material_systems', 'material_systems.id', 'batches.material_system_id').where({ 'batches.id': batchId, 'batches.organization_id': orgId }).first('batches.state', 'batches.targets', 'material_systems.kind');
+    return row ? { state: row.state, snapshot: row.targets ?? null, systemKind: row.kind ?? null } : undefined;
+  }
+
+  /** Moves a batch inside the caller's transaction when the move is legal (see batch-transitions.ts). */
+  move(trx: Knex.Transaction, orgId: string, batchId: string, to: BatchState, actor: TransitionActor, reason: string): Promise<boolean> {
+    return moveBatch(trx, this.events, orgId, batchId, to, actor, reason);
+  }
+
+  async state(trx: Knex | Knex.Transaction, orgId: string, batchId: string): Promise<string | undefined> {
+    const b = await trx('batches').where({ id: batchId, organization_id: orgId }).first('state');
+    return b?.state;
+  }
+
+  /** Audits a release decided by the review use case (same transaction). */
+  async recordRelease(trx: Knex.Transaction, c: RequestContext, batchId: string, details: Record<string, unknown>) {
+    await this.audit.record({ organizationId: c.principal.organizationId, ...actorOf(c.principal), action: 'batch.released', targetType: 'batch', targetId: batchId, details, ip: c.ip, userAgent: c.userAgent }, trx);
   }
 }

@@ -13,6 +13,8 @@ export const EVENT_TYPES = {
   'batch.released': 'A batch was released: every rejection waived or none',
   'batch.on_hold': 'A batch was put on hold pending review',
   'batch.scrapped': 'A batch was scrapped',
+  'lot.held': 'A lot was put on hold for new batches: a cup test of it failed the system\'s reactivity window or density band',
+  'lot.hold_released': 'An engineer released a held lot, with a note saying why',
   'work_order.created': 'A work order arrived (from the ERP or an engineer)',
   'work_order.changed': 'A work order was changed',
   'drift.detected': 'A run rule of a control chart fired: the process is moving before readings leave tolerance',

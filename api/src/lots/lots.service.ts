@@ -8,6 +8,8 @@ import { type FieldError, validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
 import { isoDay, todayUtc } from '@pourgate/batching';
 import { conflict, isUniqueViolation, notFound } from '../shop/errors.js';
+import { EventsService } from '../events/events.service.js';
+import { ProblemException } from '../common/problems.js';
 
 export const lotsListSpec: ListSpec = {
   resource: 'lots',
@@ -42,6 +44,11 @@ export interface LotRow {
   notes: string | null;
   created_at: Date;
   updated_at: Date;
+  held_by_cup_test_id?: string | null;
+  held_at?: Date | null;
+  hold_released_at?: Date | null;
+  hold_released_by_label?: string | null;
+  hold_release_note?: string | null;
 }
 
 export function lotView(r: LotRow, today = todayUtc()) {
@@ -55,6 +62,9 @@ export function lotView(r: LotRow, today = todayUtc()) {
     expiresOn: isoDay(r.expires_on),
     openedOn: isoDay(r.opened_on),
     expired: isoDay(r.expires_on)! < today,
+    /** Held for new batches: its latest cup test failed and no engineer has released it yet. */
+    hold: r.held_at ? { since: r.held_at, cupTestId: r.held_by_cup_test_id ?? null } : null,
+    lastHoldRelease: r.hold_released_at ? { at: r.hold_released_at, by: r.hold_released_by_label ?? null, note: r.hold_release_note ?? null } : null,
     notes: r.notes,
     createdAt: r.created_at,
     updatedAt: r.updated_at,
@@ -63,7 +73,7 @@ export function lotView(r: LotRow, today = todayUtc()) {
 
 @Injectable()
 export class LotsService {
-  constructor(@Inject(KNEX) private readonly db: Knex, private readonly audit: AuditService) {}
+  constructor(@Inject(KNEX) private readonly db: Knex, private readonly audit: AuditService, private readonly events: EventsService) {}
 
   base(orgId: string, db: Knex | Knex.Transaction = this.db) {
     return db('lots')
@@ -150,6 +160,41 @@ export class LotsService {
         await this.audit.record({ organizationId: orgId, ...actorOf(c.principal), action: 'lot.changed', targetType: 'lot', targetId: id, details: { part: body.part, lotNumber: body.lotNumber }, ip: c.ip, userAgent: c.userAgent }, trx);
       })
       .catch((e) => this.duplicate(e, body));
+    return this.get(c, id);
+  }
+
+  /** The lots among `ids` on hold, for refusing a new batch. */
+  async held(orgId: string, ids: string[]): Promise<{ id: string; lotNumber: string; heldAt: string }[]> {
+    if (ids.length === 0) return [];
+    const rows = await this.db('lots').where('organization_id', orgId).whereIn('id', ids).whereNotNull('held_at').select('id', 'lot_number', 'held_at');
+    return rows.map((r: { id: string; lot_number: string; held_at: Date }) => ({ id: r.id, lotNumber: r.lot_number, heldAt: new Date(r.held_at).toISOString() }));
+  }
+
+  /**
+   * Holds lots for new batches because a cup test of theirs failed (inside the cup test's
+   * transaction): lot.held for each lot not already on hold.
+   */
+  async holdForCupTest(trx: Knex.Transaction, orgId: string, lotIds: string[], cupTestId: string, reasons: { code: string }[]): Promise<void> {
+    for (const id of lotIds) {
+      const [row] = await trx('lots').where({ id, organization_id: orgId }).whereNull('held_at').update({ held_at: trx.fn.now(), held_by_cup_test_id: cupTestId }).returning(['id', 'lot_number', 'part']);
+      if (!row) continue;
+      await this.events.emit(trx, { organizationId: orgId, type: 'lot.held', subjectType: 'lot', subjectId: id, data: { lotId: id, lotNumber: row.lot_number, part: row.part, cupTestId, reasons: reasons.map((r) => r.code) } });
+    }
+  }
+
+  /** An engineer releases a held lot, with a note saying why (audited; lot.hold_released). */
+  async releaseHold(c: RequestContext, id: string, note: string) {
+    const orgId = c.principal.organizationId;
+    if (!note?.trim()) throw validationProblem([{ pointer: '/note', detail: 'releasing a held lot needs a note saying why', code: 'required' }]);
+    const actor = actorOf(c.principal);
+    await this.db.transaction(async (trx) => {
+      const lot = await trx('lots').where({ id, organization_id: orgId }).forUpdate().first('id', 'lot_number', 'part', 'held_at', 'held_by_cup_test_id');
+      if (!lot) throw notFound('lot');
+      if (!lot.held_at) throw new ProblemException(409, { slug: 'conflict', detail: `Lot ${lot.lot_number} is not on hold.` });
+      await trx('lots').where({ id }).update({ held_at: null, held_by_cup_test_id: null, hold_released_at: trx.fn.now(), hold_released_by_label: actor.actorLabel, hold_release_note: note.trim() });
+      await this.events.emit(trx, { organizationId: orgId, type: 'lot.hold_released', subjectType: 'lot', subjectId: id, data: { lotId: id, lotNumber: lot.lot_number, part: lot.part, cupTestId: lot.held_by_cup_test_id, note: note.trim(), releasedBy: actor.actorLabel } });
+      await this.audit.record({ organizationId: orgId, ...actor, action: 'lot.hold_released', targetType: 'lot', targetId: id, details: { note: note.trim(), cupTestId: lot.held_by_cup_test_id, heldAt: lot.held_at }, ip: c.ip, userAgent: c.userAgent }, trx);
+    });
     return this.get(c, id);
   }
 }

@@ -1,6 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
-import { fitFreeRiseDensity } from '@pourgate/batching';
+import { fitFreeRiseDensity, fitRejection, FIT_TRUST, forReader, judgeCupTest, parametersOf, type Finding, type UnitSystem } from '@pourgate/batching';
+import { MaterialSystemsService } from '../materials/material-systems.service.js';
 import { AuditService } from '../audit/audit.service.js';
 import { actorOf, type RequestContext } from '../auth/principal.js';
 import { listPage } from '../common/lists/knex-list.js';
@@ -51,10 +52,13 @@ interface CupTestRow {
   notes: string | null;
   created_by_label: string | null;
   created_at: Date;
+  verdict: 'passed' | 'failed' | 'not_judged';
+  findings: Finding[];
+  free_rise_density_at_reference_kg_m3: number | null;
 }
 
 /** A cup test in the terms of ASTM D7487 (cream, top-of-cup and tack-free times; free-rise density), SI. */
-export function cupTestView(r: CupTestRow) {
+export function cupTestView(r: CupTestRow, units: UnitSystem = 'metric') {
   return {
     id: r.id,
     materialSystemId: r.material_system_id,
@@ -68,6 +72,10 @@ export function cupTestView(r: CupTestRow) {
     topOfCupTimeS: r.top_of_cup_time_s,
     tackFreeTimeS: r.tack_free_time_s,
     freeRiseDensityKgM3: r.free_rise_density_kg_m3,
+    /** Judged against the system's reactivity window and density band (its revision of the day). */
+    verdict: r.verdict ?? 'not_judged',
+    findings: forReader(r.findings ?? [], units),
+    freeRiseDensityAtReferenceKgM3: r.free_rise_density_at_reference_kg_m3 ?? null,
     testedAt: r.tested_at,
     notes: r.notes,
     createdBy: r.created_by_label,
@@ -77,7 +85,7 @@ export function cupTestView(r: CupTestRow) {
 
 @Injectable()
 export class QcCupTestsService {
-  constructor(@Inject(KNEX) private readonly db: Knex, private readonly audit: AuditService, private readonly lots: LotsService) {}
+  constructor(@Inject(KNEX) private readonly db: Knex, private readonly audit: AuditService, private readonly lots: LotsService, private readonly systems: MaterialSystemsService) {}
 
   base(orgId: string) {
     return this.db('qc_cup_tests')
@@ -89,7 +97,7 @@ export class QcCupTestsService {
 
   async list(c: RequestContext, q: ListQuery) {
     const { rows, total } = await listPage<CupTestRow>(this.base(c.principal.organizationId), q, cupTestsListSpec, columns);
-    return { rows: rows.map(cupTestView), total };
+    return { rows: rows.map((r) => cupTestView(r)), total };
   }
 
   async get(c: RequestContext, id: string) {
@@ -106,11 +114,18 @@ export class QcCupTestsService {
       .select('component_temperature_a_c', 'component_temperature_b_c', 'free_rise_density_kg_m3');
     const points = rows.map((r) => ({ temperature: (r.component_temperature_a_c + r.component_temperature_b_c) / 2, density: r.free_rise_density_kg_m3 }));
     const fit = fitFreeRiseDensity(points);
+    const rev = await this.systems.revision(orgId, systemId);
+    const reference = rev?.free_rise_reference_temperature_c ?? null;
+    const rejected = points.length && reference !== null ? fitRejection(fit, points, reference) : 'too_few_points';
     return {
       materialSystemId: systemId,
       cupTests: points.length,
       temperatureBasis: 'mean of the A and B component temperatures, °C',
       fit: fit && { slopeKgM3PerC: fit.slope, interceptKgM3: fit.intercept, rSquared: fit.rSquared, residualStandardDeviationKgM3: fit.residualStandardDeviation, count: fit.count },
+      /** Whether targets use this line (at the reference temperature), and why not when they do not. */
+      trusted: rejected === null,
+      notTrustedBecause: rejected,
+      trustRules: { ...FIT_TRUST },
     };
   }
 
@@ -140,7 +155,16 @@ export class QcCupTestsService {
     if (new Date(body.testedAt).getTime() > Date.now() + 5 * 60_000) errors.push({ pointer: '/testedAt', detail: 'is in the future', code: 'range' });
     errors.push(...q.errors);
     if (errors.length) throw validationProblem(errors);
-    const revision = await this.db('material_system_revisions').where({ material_system_id: ms.id, revision: ms.current_revision }).first('id');
+    const revision = await this.systems.revision(orgId, ms.id);
+    // judged against the system's reactivity window and density band (ASTM D7487 terms), the density
+    // brought to the reference temperature with the system's slope
+    const system = revision ? parametersOf(revision, revision.kind) : null;
+    const judged = system
+      ? judgeCupTest(
+          { temperature: (tA! + tB!) / 2, creamTime: cream ?? null, riseTime: topOfCup ?? null, tackFreeTime: tackFree ?? null, freeRiseDensity: density! },
+          { creamTimeWindow: system.creamTimeWindow, riseTimeWindow: system.riseTimeWindow, tackFreeTimeWindow: system.tackFreeTimeWindow, freeRiseDensityBand: system.freeRiseDensityBand, referenceTemperature: system.freeRiseReferenceTemperature, slope: system.freeRiseDensitySlope },
+        )
+      : { verdict: 'not_judged' as const, findings: [], correctedDensity: null };
     const id = await this.db.transaction(async (trx) => {
       const [row] = await trx('qc_cup_tests')
         .insert({
@@ -158,8 +182,15 @@ export class QcCupTestsService {
           tested_at: body.testedAt,
           notes: body.notes ?? null,
           created_by_label: actorOf(c.principal).actorLabel,
+          verdict: judged.verdict,
+          findings: JSON.stringify(judged.findings),
+          free_rise_density_at_reference_kg_m3: judged.correctedDensity,
         })
         .returning('id');
+      // a failed cup test holds its lots for new batches until an engineer releases them
+      if (judged.verdict === 'failed') {
+        await this.lots.holdForCupTest(trx, orgId, [body.lotAId, body.lotBId].filter((x): x is string => !!x), row.id, judged.findings);
+      }
       await this.audit.record({ organizationId: orgId, ...actorOf(c.principal), action: 'qc_cup_test.recorded', targetType: 'qc_cup_test', targetId: row.id, details: { materialSystemId: ms.id, freeRiseDensityKgM3: density }, ip: c.ip, userAgent: c.userAgent }, trx);
       return row.id as string;
     });

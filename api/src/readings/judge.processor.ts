@@ -2,19 +2,19 @@ import { OnQueueFailed, OnQueueStalled, Process, Processor } from '@nestjs/bull'
 import { Logger } from '@nestjs/common';
 import type { Job } from 'bull';
 import { JUDGE_CONCURRENCY, JUDGE_QUEUE, type JudgeJob } from './readings.constants.js';
-import { ReadingsService } from './readings.service.js';
+import { JudgeService } from './judge.service.js';
 
 /** The Bull consumer: one job per reading (job id = reading id). */
 @Processor(JUDGE_QUEUE)
 export class JudgeProcessor {
   private readonly log = new Logger('judging');
 
-  constructor(private readonly readings: ReadingsService) {}
+  constructor(private readonly judging: JudgeService) {}
 
   // judgings of one batch serialise on its row lock; different batches run side by side
   @Process({ concurrency: JUDGE_CONCURRENCY })
   handle(job: Job<JudgeJob>) {
-    return this.readings.judge(job.data.readingId);
+    return this.judging.judge(job.data.readingId);
   }
 
   /** A worker died or hung holding the job; Bull hands it to another (judging twice is harmless). */

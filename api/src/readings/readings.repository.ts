@@ -3,7 +3,7 @@ import type { Knex } from 'knex';
 import { listPage } from '../common/lists/knex-list.js';
 import type { ListQuery, ListSpec } from '../common/lists/list-query.js';
 import { KNEX } from '../database/database.module.js';
-import type { ReadingQuantity, ReadingSubject } from '@pourgate/batching';
+import type { FindingFacts, ReadingQuantity, ReadingSubject } from '@pourgate/batching';
 
 export const readingsListSpec: ListSpec = {
   resource: 'readings',
@@ -32,7 +32,7 @@ export interface ReadingRow {
   received_at: Date;
   skew_seconds: number | null;
   status: 'pending' | 'accepted' | 'rejected' | 'unused';
-  reasons: { code: string; message: string; measured: number | null; limit: number | null; unit: string | null }[];
+  reasons: { code: string; message: string; measured: number | null; limit: number | null; unit: string | null; facts?: FindingFacts }[];
   judged_at: Date | null;
   review_decision: 'waive' | 'uphold' | null;
   review_note: string | null;
@@ -133,6 +133,22 @@ export class ReadingsRepository {
 
   async setReview(trx: Knex.Transaction, id: string, review: { decision: string; note: string | null; by: string; label: string }) {
     await trx('readings').where({ id }).update({ review_decision: review.decision, review_note: review.note, reviewed_by: review.by, reviewed_by_label: review.label, reviewed_at: trx.fn.now() });
+  }
+
+  /**
+   * For the release check: each (quantity, subject) of the batch with its latest judged reading
+   * (unstable ones set aside), whether one is still pending, and the rejections not waived.
+   */
+  async releaseFacts(trx: Knex | Knex.Transaction, orgId: string, batchId: string) {
+    const latest: { quantity: ReadingQuantity; subject: ReadingSubject; status: 'accepted' | 'rejected'; review_decision: 'waive' | 'uphold' | null }[] = await trx('readings')
+      .where({ organization_id: orgId, batch_id: batchId })
+      .whereIn('status', ['accepted', 'rejected'])
+      .distinctOn('quantity', 'subject')
+      .orderBy([{ column: 'quantity' }, { column: 'subject' }, { column: 'received_at', order: 'desc' }, { column: 'id', order: 'desc' }])
+      .select('quantity', 'subject', 'status', 'review_decision');
+    const pending: { quantity: ReadingQuantity; subject: ReadingSubject }[] = await trx('readings').where({ organization_id: orgId, batch_id: batchId, status: 'pending' }).distinct('quantity', 'subject');
+    const open = await trx('readings').where({ organization_id: orgId, batch_id: batchId, status: 'rejected' }).where((q) => q.whereNull('review_decision').orWhere('review_decision', 'uphold')).count({ n: '*' });
+    return { latest, pending, openRejections: Number(open[0]!.n) };
   }
 
   stalePending(olderThanMs: number, limit = 500): Promise<{ id: string }[]> {

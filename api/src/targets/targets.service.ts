@@ -16,7 +16,7 @@ import { MoldsService } from '../molds/molds.service.js';
 import { isoDay, todayUtc } from '@pourgate/batching';
 import { inDisplayUnits } from '../shop/display.js';
 import { withBatchingErrors } from '../shop/errors.js';
-import { QuantityReader, type Quantity } from '@pourgate/batching';
+import { QuantityReader, forReader, type Quantity } from '@pourgate/batching';
 
 export interface OptionsInput {
   targetDensity?: Quantity;
@@ -103,7 +103,7 @@ export class TargetsService {
           ? { pointer: at.systemRevision, detail: `the system has no revision ${req.system.revision}`, code: 'reference' }
           : { pointer: at.systemId, detail: 'no material system with that id in your organization', code: 'reference' });
       } else {
-        system = parametersOf(rev);
+        system = parametersOf(rev, rev.kind);
         systemId = rev.material_system_id;
         systemRevisionId = rev.id;
         systemSource = { id: rev.material_system_id, name: rev.name, revision: rev.revision, revisionId: rev.id };
@@ -264,7 +264,8 @@ export class TargetsService {
   async view(c: RequestContext, units: UnitSystem, stored: { targets: BatchTargets; sources: TargetsSources; input: BatchTargetsInput }) {
     return {
       unitSystem: units,
-      ...(inDisplayUnits(stored.targets, units) as Record<string, unknown>),
+      // warnings' sentences written again in the reader's unit system
+      ...(inDisplayUnits({ ...stored.targets, warnings: forReader(stored.targets.warnings, units) }, units) as Record<string, unknown>),
       sources: stored.sources,
       inputs: stored.input,
       documents: await this.documentsFor(c.principal.organizationId, stored.sources),

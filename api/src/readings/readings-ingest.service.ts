@@ -1,0 +1,170 @@
+import { InjectQueue } from '@nestjs/bull';
+import { Inject, Injectable, Logger } from '@nestjs/common';
+import type { Queue } from 'bull';
+import type { Knex } from 'knex';
+import { MASS_SUBJECTS, MILESTONE_SUBJECTS, toSI, UnitError, type ReadingQuantity, type ReadingSubject } from '@pourgate/batching';
+import type { RequestContext } from '../auth/principal.js';
+import { BatchesService } from '../batches/batches.service.js';
+import { type FieldError, validationProblem } from '../common/problems.js';
+import { KNEX } from '../database/database.module.js';
+import { DevicesService } from '../devices/devices.service.js';
+import { JUDGE_QUEUE, type JudgeJob } from './readings.constants.js';
+import { type NewReading, ReadingsRepository } from './readings.repository.js';
+import { readingView } from './reading-view.js';
+
+export interface ReadingInput {
+  batchId: string;
+  deviceId?: string;
+  clientReadingId: string;
+  quantity: ReadingQuantity;
+  subject: ReadingSubject;
+  value?: number;
+  unit?: string;
+  stable?: boolean;
+  deviceTime?: string;
+}
+
+const HUMIDITY_UNITS = ['%', '%RH', 'percent'];
+
+/** Ingest: check and convert readings, store them pending, queue their judging; re-queue lost jobs. */
+@Injectable()
+export class ReadingsIngestService {
+  private readonly log = new Logger('readings');
+
+  constructor(
+    @Inject(KNEX) private readonly db: Knex,
+    private readonly repo: ReadingsRepository,
+    private readonly devices: DevicesService,
+    private readonly batches: BatchesService,
+    @InjectQueue(JUDGE_QUEUE) private readonly queue: Queue<JudgeJob>,
+  ) {}
+
+  /** Checks and converts every item; all refused together, with pointers, before anything is written. */
+  private async prepare(c: RequestContext, items: ReadingInput[], at: (i: number) => string): Promise<NewReading[]> {
+    const { rows, errors } = await this.check(c, items, at);
+    if (errors.length) throw validationProblem(errors);
+    return rows;
+  }
+
+  /**
+   * Converts every item and collects what is wrong with each (pointers from `at(i)`), writing
+   * nothing. `rows[i]` is item i, meaningful only when no error points into it.
+   */
+  async check(c: RequestContext, items: ReadingInput[], at: (i: number) => string): Promise<{ rows: NewReading[]; errors: FieldError[] }> {
+    const orgId = c.principal.organizationId;
+    const errors: FieldError[] = [];
+    const boundDevice = c.principal.kind === 'api_key' ? c.principal.deviceId : null;
+    const deviceIds = [...new Set(items.map((r) => r.deviceId ?? boundDevice).filter((x): x is string => !!x))];
+    const batchIds = [...new Set(items.map((r) => r.batchId))];
+    // each module's rows through its own service: side by side, ids only
+    const [devices, batches] = await Promise.all([
+      deviceIds.length ? this.devices.base(orgId).whereIn('devices.id', deviceIds).clearSelect().select('devices.id').then((rows: { id: string }[]) => new Set(rows.map((d) => d.id))) : new Set<string>(),
+      this.batches.existingIds(orgId, batchIds),
+    ]);
+    const now = Date.now();
+    const out: NewReading[] = [];
+    items.forEach((r, i) => {
+      const p = at(i);
+      let deviceId = r.deviceId ?? boundDevice;
+      if (boundDevice && r.deviceId && r.deviceId !== boundDevice) errors.push({ pointer: `${p}/deviceId`, detail: 'differs from the device this key is bound to', code: 'conflicting' });
+      if (!deviceId) errors.push({ pointer: `${p}/deviceId`, detail: 'is required unless the key is bound to a device', code: 'required' });
+      else if (!devices.has(deviceId)) errors.push({ pointer: `${p}/deviceId`, detail: 'no device with that id in your organization', code: 'reference' });
+      if (!batches.has(r.batchId)) errors.push({ pointer: `${p}/batchId`, detail: 'no batch with that id in your organization', code: 'reference' });
+      let valueSi = NaN;
+      const isMilestone = r.quantity === 'milestone';
+      if (isMilestone) {
+        // the clock is the measurement: seconds since the milestone before it, filled in by the judge
+        valueSi = 0;
+        if (!(MILESTONE_SUBJECTS as readonly string[]).includes(r.subject)) errors.push({ pointer: `${p}/subject`, detail: `a milestone is one of ${MILESTONE_SUBJECTS.join(', ')}`, code: 'enum' });
+        if (r.value !== undefined || r.unit !== undefined) errors.push({ pointer: `${p}/value`, detail: 'a milestone carries no value; its time is deviceTime (or when it was received)', code: 'not_allowed' });
+      } else if (r.value === undefined || r.unit === undefined) {
+        if (r.value === undefined) errors.push({ pointer: `${p}/value`, detail: 'is required', code: 'required' });
+        if (r.unit === undefined) errors.push({ pointer: `${p}/unit`, detail: 'is required', code: 'required' });
+      } else if ((MILESTONE_SUBJECTS as readonly string[]).includes(r.subject)) {
+        errors.push({ pointer: `${p}/subject`, detail: `${r.subject} is a milestone: post it with quantity "milestone"`, code: 'enum' });
+      } else if (!Number.isFinite(r.value)) errors.push({ pointer: `${p}/value`, detail: 'must be a finite number', code: 'type' });
+      else if (r.quantity === 'humidity') {
+        if (!HUMIDITY_UNITS.includes(r.unit)) errors.push({ pointer: `${p}/unit`, detail: `relative humidity is given in % (one of ${HUMIDITY_UNITS.join(', ')})`, code: 'unit' });
+        else if (r.value < 0 || r.value > 100) errors.push({ pointer: `${p}/value`, detail: 'must be between 0 and 100 %', code: 'range' });
+        valueSi = r.value;
+      } else {
+        try {
+          valueSi = toSI(r.quantity as 'mass' | 'temperature', r.value, r.unit);
+          if (r.quantity === 'mass' && valueSi < 0) errors.push({ pointer: `${p}/value`, detail: 'a net mass cannot be negative', code: 'minimum' });
+          if (r.quantity === 'temperature' && valueSi < -273.15) errors.push({ pointer: `${p}/value`, detail: 'is below absolute zero', code: 'minimum' });
+        } catch (e) {
+          if (!(e instanceof UnitError)) throw e;
+          errors.push({ pointer: `${p}/unit`, detail: e.message, code: 'unit' });
+        }
+      }
+      if (r.quantity === 'mass' && !(MASS_SUBJECTS as readonly string[]).includes(r.subject)) errors.push({ pointer: `${p}/subject`, detail: `a mass is of ${MASS_SUBJECTS.join(', ')}`, code: 'enum' });
+      const deviceTime = r.deviceTime ? new Date(r.deviceTime) : null;
+      out.push({
+        organization_id: orgId,
+        batch_id: r.batchId,
+        device_id: deviceId ?? '',
+        client_reading_id: r.clientReadingId,
+        quantity: r.quantity,
+        subject: r.subject,
+        value_si: valueSi,
+        unit_given: isMilestone ? 's' : (r.unit ?? ''),
+        value_given: isMilestone ? 0 : (r.value ?? NaN),
+        stable: r.stable ?? true,
+        device_time: deviceTime,
+        skew_seconds: deviceTime ? Math.round((now - deviceTime.getTime()) / 100) / 10 : null,
+      });
+    });
+    return { rows: out, errors };
+  }
+
+  /** Commits the readings pending, then queues their judging; a failed queue is left to the sweeper. */
+  async ingest(c: RequestContext, items: ReadingInput[], at: (i: number) => string) {
+    return this.store(await this.prepare(c, items, at));
+  }
+
+  /** Writes readings already checked by `check` (one transaction) and queues the new ones. */
+  async store(rows: NewReading[]) {
+    // one statement is atomic by itself: a single reading needs no BEGIN/COMMIT round trips
+    const results = rows.length === 1 ? await this.repo.insertMany(this.db, rows) : await this.db.transaction((trx) => this.repo.insertMany(trx, rows));
+    await this.enqueueMany(results.filter((r) => r.created).map((r) => r.row.id));
+    return results.map(({ row, created }) =>
+      created ? { id: row.id, status: row.status, statusUrl: `/v1/readings/${row.id}`, replayed: false } : { ...readingView(row, 'metric'), replayed: true },
+    );
+  }
+
+  private jobOptions(id: string) {
+    return { jobId: id, attempts: 5, backoff: { type: 'exponential', delay: 1000 }, removeOnComplete: true, removeOnFail: true, timeout: 30_000 };
+  }
+
+  async enqueue(id: string): Promise<boolean> {
+    try {
+      await this.queue.add({ readingId: id }, this.jobOptions(id));
+      return true;
+    } catch (e) {
+      this.log.warn(`reading ${id} stays pending; the sweeper will queue it (${(e as Error).message})`);
+      return false;
+    }
+  }
+
+  /** One round trip to Redis for a whole post; on failure the readings wait for the sweeper. */
+  async enqueueMany(ids: string[]): Promise<void> {
+    if (ids.length === 0) return;
+    if (ids.length === 1) return void (await this.enqueue(ids[0]!));
+    try {
+      await this.queue.addBulk(ids.map((id) => ({ data: { readingId: id }, opts: this.jobOptions(id) })));
+    } catch (e) {
+      this.log.warn(`${ids.length} readings stay pending; the sweeper will queue them (${(e as Error).message})`);
+    }
+  }
+
+  /** Re-queues pending readings whose job was lost (Redis down at ingest, a worker crash). */
+  async sweep(olderThanMs: number, stopped: () => boolean = () => false): Promise<number> {
+    let n = 0;
+    for (const { id } of await this.repo.stalePending(olderThanMs)) {
+      if (stopped()) break;
+      if (await this.enqueue(id)) n++;
+    }
+    return n;
+  }
+
+}
