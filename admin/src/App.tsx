@@ -10,6 +10,7 @@ import cupTests from './qc';
 import workOrders from './work-orders';
 import batches, { PourSheetPage } from './batches';
 import { CalculatorPage } from './calculator';
+import { ControlPage } from './control';
 import { SignInPage } from './auth/SignInPage';
 import { Dashboard } from './dashboard';
 import { AcceptInvitationPage } from './invitations/AcceptInvitationPage';
@@ -47,6 +48,7 @@ export function App() {
         <Route path="/batches/:id/pour-sheet" element={<PourSheetPage />} />
         <Route path="/calculator" element={<CalculatorPage />} />
         <Route path="/imports" element={<ImportsPage />} />
+        <Route path="/control" element={<ControlPage />} />
       </CustomRoutes>
       <CustomRoutes noLayout>
         <Route path="/accept-invitation" element={<AcceptInvitationPage />} />
