@@ -22,8 +22,9 @@ let deviceKey: string;
 
 const as = (role: Role) => ({ authorization: auth[role] });
 
+// a 50 L free-rise bucket at 40 kg/m³ is 2 kg of mix: 1 kg of A and 1 kg of B at 100:100
 async function newBatch(a: Record<Role, string> = auth, sys = systemId): Promise<string> {
-  const res = await t.http.post('/v1/batches').set('authorization', a.engineer).send({ materialSystemId: sys, freeRiseCup: { volume: { value: 1, unit: 'L' } } });
+  const res = await t.http.post('/v1/batches').set('authorization', a.engineer).send({ materialSystemId: sys, freeRiseCup: { volume: { value: 50, unit: 'L' } } });
   expect(res.status).toBe(201);
   return res.body.id;
 }
@@ -56,8 +57,8 @@ beforeAll(async () => {
   other = await makeOrg('readings-other');
   auth = await tokensFor(t.http, org);
   otherAuth = await tokensFor(t.http, other);
-  // 100:100 by weight, B the isocyanate side, ±5 %
-  const sys = await t.http.post('/v1/material-systems').set(as('engineer')).send(flexSystem({ ratio: { a: 100, b: 100 }, specificGravityA: 1.1, specificGravityB: 1.1 }));
+  // 100:100 by weight, B the isocyanate side, ±5 % on the ratio, ±10 % on each mass
+  const sys = await t.http.post('/v1/material-systems').set(as('engineer')).send(flexSystem({ ratio: { a: 100, b: 100 }, specificGravityA: 1.1, specificGravityB: 1.1, massTolerancePercent: 10 }));
   expect(sys.status).toBe(201);
   systemId = sys.body.id;
   [{ id: scaleId }] = await testDb()('devices').insert({ organization_id: org.id, kind: 'scale', serial: `S-${randomUUID()}`, name: 'bench scale', readability_kg: 0.001, capacity_kg: 5, calibration_due: '2099-01-01' }).returning('id');
@@ -151,9 +152,9 @@ describe('refused input writes nothing', () => {
 describe('judging', () => {
   it.each([
     ['A heavy by exactly 5.0 % passes', 'part_a', 1.05, 'accepted', null],
-    ['A heavy by 5.1 % is rejected, polyol side named (softer and tackier)', 'part_a', 1.051, 'rejected', /polyol side \(part A\) is heavy.*softer and tackier/],
+    ['A heavy by 5.1 % is rejected, polyol side named (softer and tackier)', 'part_a', 1.051, 'rejected', /^Part A \(the polyol side\) is heavy by 5\.1 %, outside ±5 %: .*softer and tackier/],
     ['B heavy by exactly 5.0 % passes', 'part_b', 1.05, 'accepted', null],
-    ['B heavy by 5.1 % is rejected, isocyanate side named (harder)', 'part_b', 1.051, 'rejected', /isocyanate side \(part B\) is heavy.*harder/],
+    ['B heavy by 5.1 % is rejected, isocyanate side named (firmer, for a flexible foam)', 'part_b', 1.051, 'rejected', /^Part B \(the isocyanate side\) is heavy by 5\.1 %, outside ±5 %: .*firmer and harsher/],
   ] as const)('%s', async (_label, heavy, heavyMass, status, message) => {
     const batchId = await newBatch();
     const light = heavy === 'part_a' ? 'part_b' : 'part_a';
@@ -190,6 +191,7 @@ describe('judging', () => {
     expect(shaky.status).toBe('unused');
     expect(shaky.reasons[0].code).toBe('SCALE_NOT_STABLE');
     const heavy = await postJudged(reading(batchId, { value: 5.001 }));
+    expect(heavy.reasons).toHaveLength(1);
     expect(heavy.status).toBe('rejected');
     expect(heavy.reasons[0]).toMatchObject({ code: 'OVER_CAPACITY', measured: 5.001, limit: 5, unit: 'kg' });
   });
@@ -239,6 +241,8 @@ describe('judging: mold, shop air, humidity, the mixed shot and timing', () => {
   it('judges the mixed shot against the batch total', async () => {
     const batchId = await newBatch(auth, floorSystemId);
     const total = Number((await testDb()('batches').where({ id: batchId }).first('total_mass_kg')).total_mass_kg);
+    await postJudged(reading(batchId, { subject: 'part_a', value: total / 2 }));
+    await postJudged(reading(batchId, { subject: 'part_b', value: total / 2 }));
     expect((await postJudged(reading(batchId, { subject: 'mixed', value: total * 0.97 }))).status).toBe('accepted');
     const short = await postJudged(reading(batchId, { subject: 'mixed', value: total * 0.9 }));
     expect(short.reasons[0]).toMatchObject({ code: 'TOTAL_MASS_LOW', unit: 'kg' });
@@ -303,9 +307,12 @@ describe('review', () => {
     expectProblem(await t.http.get('/v1/readings').query({ filter: JSON.stringify({ reviewed: 'no' }) }).set(as('viewer')), 400, '/filter/reviewed');
   });
 
-  it('a waiver needs a note; once every rejection is waived the batch can be released', async () => {
+  it('a waiver needs a note; once every rejection is waived and A and B are weighed the batch can be released', async () => {
     const { batchId, readingId } = await rejectedBatch();
     expect(await batchState(batchId)).toBe('on_hold');
+    // weighed again by hand, within their bands
+    expect((await postJudged(reading(batchId, { subject: 'part_a', value: 1 }))).status).toBe('accepted');
+    expect((await postJudged(reading(batchId, { subject: 'part_b', value: 1 }))).status).toBe('accepted');
     expectProblem(await t.http.post(`/v1/batches/${batchId}/release`).set(as('engineer')), 409);
     expectProblem(await t.http.post(`/v1/readings/${readingId}/review`).set(as('engineer')).send({ decision: 'waive' }), 422, '/note');
     expectProblem(await t.http.post(`/v1/readings/${readingId}/review`).set(as('viewer')).send({ decision: 'waive', note: 'x' }), 403);
@@ -337,5 +344,86 @@ describe('review', () => {
   it("does not show another organization's reading", async () => {
     const { readingId } = await rejectedBatch();
     expectProblem(await t.http.get(`/v1/readings/${readingId}`).set('authorization', otherAuth.viewer), 404);
+  });
+});
+
+describe('judging the whole pour (issue 15)', () => {
+  it('1. rejects both parts 30 % short even though their ratio holds: a short shot, its own reason per part', async () => {
+    const batchId = await newBatch();
+    const a = await postJudged(reading(batchId, { subject: 'part_a', value: 700, unit: 'g' }));
+    expect(a.status).toBe('rejected');
+    expect(a.reasons.map((r: { code: string }) => r.code)).toEqual(['SHORT_SHOT']);
+    expect(a.reasons[0]).toMatchObject({ measured: 0.7, unit: 'kg', facts: { part: 'A', target: 1 } });
+    const b = await postJudged(reading(batchId, { subject: 'part_b', value: 700, unit: 'g' }));
+    // in ratio (no RATIO_ reason) but short
+    expect(b.reasons.map((r: { code: string }) => r.code)).toEqual(['SHORT_SHOT']);
+    expect(b.reasons[0].message).toMatch(/^Short shot: part B is 700 g, 30 % under its target of 1 kg/);
+    expect(await batchState(batchId)).toBe('on_hold');
+  });
+
+  it('1. rejects a part just outside its own band (±10 %) with the limit in kg, and a zero part as not weighed', async () => {
+    const batchId = await newBatch();
+    expect((await postJudged(reading(batchId, { subject: 'part_a', value: 1.1 }))).status).toBe('accepted');
+    const over = await postJudged(reading(batchId, { subject: 'part_a', value: 1.101 }));
+    expect(over.reasons[0]).toMatchObject({ code: 'PART_A_MASS_HIGH', measured: 1.101, limit: 1.1, unit: 'kg' });
+    const zero = await postJudged(reading(batchId, { subject: 'part_b', value: 0 }));
+    expect(zero.reasons.map((r: { code: string }) => r.code)).toEqual(['PART_NOT_WEIGHED']);
+    // the ratio is not judged against a zero part
+    const later = await postJudged(reading(await newBatch(), { subject: 'part_a', value: 1 }));
+    expect(later.status).toBe('accepted');
+  });
+
+  it('8. writes reasons in the reader’s unit system (an imperial user reads °F), rounded', async () => {
+    const batchId = await newBatch();
+    const cold = await postJudged(reading(batchId, { deviceId: probeId, quantity: 'temperature', subject: 'part_a', value: 15.5555555555556, unit: 'degC' }));
+    expect(cold.reasons[0].message).toMatch(/^The component at 15\.6 °C is below the window of 18–27 °C/);
+    await testDb()('users').where({ id: org.people.viewer.id }).update({ unit_system: 'imperial' });
+    try {
+      const seen = (await t.http.get(`/v1/readings/${cold.id}`).set(as('viewer'))).body;
+      // °F = °C × 9/5 + 32 (NIST SP 811): 15.56 °C is 60 °F, 18–27 °C is 64.4–80.6 °F
+      expect(seen.reasons[0].message).toMatch(/^The component at 60 °F is below the window of 64\.4–80\.6 °F/);
+      expect(seen.reasons[0].code).toBe('TEMPERATURE_BELOW_WINDOW');
+    } finally {
+      await testDb()('users').where({ id: org.people.viewer.id }).update({ unit_system: 'metric' });
+    }
+  });
+});
+
+describe('complete before release (issue 15, item 2)', () => {
+  it('refuses to release a batch with part B or the pigment missing, listing what is missing, and releases it once complete', async () => {
+    const pigmented = await t.http.post('/v1/batches').set(as('engineer')).send({ materialSystemId: systemId, freeRiseCup: { volume: { value: 50, unit: 'L' } }, options: { pigmentPercent: 2 } });
+    expect(pigmented.status).toBe(201);
+    const batchId = pigmented.body.id as string;
+    const targets = (await t.http.get(`/v1/batches/${batchId}/targets`).set(as('viewer'))).body;
+    const kg = (c: 'A' | 'B' | 'pigment') => targets.components[c].mass.si.value as number;
+    expect((await postJudged(reading(batchId, { subject: 'part_a', value: kg('A') }))).status).toBe('accepted');
+    const check = await t.http.get(`/v1/batches/${batchId}/release-check`).set(as('viewer'));
+    expect(check.status).toBe(200);
+    expect(check.body).toMatchObject({ ready: false, required: ['part_a', 'part_b', 'pigment'], openRejections: 0 });
+    expect(check.body.missing.map((m: { item: string; problem: string }) => `${m.item}:${m.problem}`)).toEqual(['part_b:not_recorded', 'pigment:not_recorded']);
+    const refused = await t.http.post(`/v1/batches/${batchId}/release`).set(as('engineer'));
+    expectProblem(refused, 409, '/missing/part_b');
+    expect(refused.body.errors.map((e: { pointer: string }) => e.pointer)).toEqual(['/missing/part_b', '/missing/pigment']);
+    expect(await batchState(batchId)).toBe('weighing');
+    expect((await postJudged(reading(batchId, { subject: 'part_b', value: kg('B') }))).status).toBe('accepted');
+    expect((await postJudged(reading(batchId, { subject: 'pigment', value: kg('pigment') }))).status).toBe('accepted');
+    expect((await t.http.get(`/v1/batches/${batchId}/release-check`).set(as('viewer'))).body).toMatchObject({ ready: true, missing: [] });
+    const released = await t.http.post(`/v1/batches/${batchId}/release`).set(as('engineer'));
+    expect(released.status).toBe(200);
+    expect(released.body.state).toBe('released');
+  });
+
+  it('asks for the milestones and temperatures the system requires', async () => {
+    const sys = await t.http.post('/v1/material-systems').set(as('engineer')).send(flexSystem({ ratio: { a: 100, b: 100 }, specificGravityA: 1.1, specificGravityB: 1.1, releaseRequires: ['component_temperature', 'mix_start'] }));
+    expect(sys.status).toBe(201);
+    expect(sys.body.releaseRequires).toEqual(['component_temperature', 'mix_start']);
+    const batchId = await newBatch(auth, sys.body.id);
+    await postJudged(reading(batchId, { subject: 'part_a', value: 1 }));
+    await postJudged(reading(batchId, { subject: 'part_b', value: 1 }));
+    const check = (await t.http.get(`/v1/batches/${batchId}/release-check`).set(as('viewer'))).body;
+    expect(check.missing.map((m: { item: string }) => m.item)).toEqual(['component_temperature', 'mix_start']);
+    await postJudged(reading(batchId, { deviceId: probeId, quantity: 'temperature', subject: 'part_b', value: 22, unit: 'degC' }));
+    await postJudged({ batchId, deviceId: scaleId, clientReadingId: randomUUID(), quantity: 'milestone', subject: 'mix_start' });
+    expect((await t.http.post(`/v1/batches/${batchId}/release`).set(as('engineer'))).status).toBe(200);
   });
 });

@@ -176,9 +176,13 @@ describe('lots and QC cup tests', () => {
     expect(second.body).toMatchObject({ creamTimeS: 12, topOfCupTimeS: 75, tackFreeTimeS: 180, freeRiseDensityKgM3: 29.2, materialSystemRevision: 1 });
     expect(second.body.componentTemperatureAC).toBeCloseTo(22, 12);
     expect((await cup({ value: 26, unit: 'degC' }, { value: 26, unit: 'degC' }, 28.0)).status).toBe(201);
+    // a line is trusted from five cups over at least 4 °C (two more on the same line: 20 and 24 °C)
+    expect((await cup({ value: 20, unit: 'degC' }, { value: 20, unit: 'degC' }, 29.8)).status).toBe(201);
+    expect((await cup({ value: 24, unit: 'degC' }, { value: 24, unit: 'degC' }, 28.6)).status).toBe(201);
     const fit = await t.http.get(`/v1/material-systems/${systemId}/free-rise-fit`).set('authorization', auth.viewer);
     expect(fit.status).toBe(200);
-    expect(fit.body.cupTests).toBe(3);
+    expect(fit.body.cupTests).toBe(5);
+    expect(fit.body).toMatchObject({ trusted: true, notTrustedBecause: null });
     expect(fit.body.fit.slopeKgM3PerC).toBeCloseTo(-0.3, 9);
     expect(fit.body.fit.interceptKgM3).toBeCloseTo(35.8, 9);
     const preview = await t.http.post('/v1/targets/preview').set('authorization', auth.viewer).send({ system: { id: systemId }, freeRiseCup: { volume: { value: 1, unit: 'L' } }, options: { componentTemperature: { value: 20, unit: 'degC' } } });
@@ -190,6 +194,64 @@ describe('lots and QC cup tests', () => {
   it('a cream time after the top-of-cup time is refused (ASTM D7487 order of events)', async () => {
     const res = await post('/v1/qc-cup-tests', { materialSystemId: systemId, componentTemperatureA: { value: 22, unit: 'degC' }, componentTemperatureB: { value: 22, unit: 'degC' }, creamTime: { value: 90, unit: 's' }, topOfCupTime: { value: 60, unit: 's' }, freeRiseDensity: { value: 30, unit: 'kg/m3' }, testedAt: '2026-03-02T09:00:00Z' });
     expectProblem(res, 422, '/topOfCupTime/value');
+  });
+});
+
+describe('lots qualified by cup test (issue 15, item 9; ASTM D7487 terms)', () => {
+  // The system's window and band are invented test data; the density correction is the system's own
+  // straight line (−0.3 kg/m³ per °C here).
+  let systemId: string;
+  let lotA: string;
+  let lotB: string;
+  beforeAll(async () => {
+    const sys = await post('/v1/material-systems', flexSystem({
+      freeRiseDensitySlope: { value: -0.3, unit: 'kg/m3/degC' },
+      creamTimeWindow: { min: { value: 8, unit: 's' }, max: { value: 14, unit: 's' } },
+      riseTimeWindow: { min: { value: 60, unit: 's' }, max: { value: 90, unit: 's' } },
+      tackFreeTimeWindow: { min: { value: 2, unit: 'min' }, max: { value: 4, unit: 'min' } },
+      freeRiseDensityBand: { min: { value: 38, unit: 'kg/m3' }, max: { value: 42, unit: 'kg/m3' } },
+    }));
+    expect(sys.status).toBe(201);
+    expect(sys.body).toMatchObject({ creamTimeMinS: 8, creamTimeMaxS: 14, tackFreeTimeMaxS: 240, freeRiseDensityMinKgM3: 38 });
+    systemId = sys.body.id;
+    lotA = (await post('/v1/lots', { part: 'A', materialSystemId: systemId, lotNumber: `QA-${Date.now()}`, receivedOn: '2026-01-05', expiresOn: '2099-07-05' })).body.id;
+    lotB = (await post('/v1/lots', { part: 'B', materialSystemId: systemId, lotNumber: `QB-${Date.now()}`, receivedOn: '2026-01-05', expiresOn: '2099-07-05' })).body.id;
+  });
+  const cup = (over: Record<string, unknown>) => post('/v1/qc-cup-tests', { materialSystemId: systemId, lotAId: lotA, lotBId: lotB, componentTemperatureA: { value: 22, unit: 'degC' }, componentTemperatureB: { value: 22, unit: 'degC' }, creamTime: { value: 11, unit: 's' }, topOfCupTime: { value: 75, unit: 's' }, tackFreeTime: { value: 3, unit: 'min' }, freeRiseDensity: { value: 40, unit: 'kg/m3' }, testedAt: '2026-03-02T09:00:00Z', ...over });
+
+  it('passes a cup inside the window, the density corrected to the reference temperature', async () => {
+    // at 28 °C, 38.5 kg/m³ is 38.5 + 0.3 × 6 = 40.3 kg/m³ at 22 °C: inside 38–42
+    const ok = await cup({ componentTemperatureA: { value: 28, unit: 'degC' }, componentTemperatureB: { value: 28, unit: 'degC' }, freeRiseDensity: { value: 38.5, unit: 'kg/m3' } });
+    expect(ok.status).toBe(201);
+    expect(ok.body).toMatchObject({ verdict: 'passed', findings: [] });
+    expect(ok.body.freeRiseDensityAtReferenceKgM3).toBeCloseTo(40.3, 9);
+    expect((await t.http.get(`/v1/lots/${lotA}`).set('authorization', auth.viewer)).body.hold).toBeNull();
+  });
+
+  it('a failed cup test holds its lots: no new batch until an engineer releases them (audited, with events)', async () => {
+    const slow = await cup({ creamTime: { value: 16, unit: 's' }, freeRiseDensity: { value: 44, unit: 'kg/m3' } });
+    expect(slow.status).toBe(201);
+    expect(slow.body.verdict).toBe('failed');
+    expect(slow.body.findings.map((f: { code: string }) => f.code)).toEqual(['CREAM_TIME_ABOVE_WINDOW', 'FREE_RISE_DENSITY_ABOVE_BAND']);
+    expect(slow.body.findings[0].message).toMatch(/^Cream time 16 s is above the window of 8–14 s/);
+    const lot = (await t.http.get(`/v1/lots/${lotA}`).set('authorization', auth.viewer)).body;
+    expect(lot.hold).toMatchObject({ cupTestId: slow.body.id });
+    const held = await t.http.post('/v1/batches').set('authorization', auth.engineer).send({ materialSystemId: systemId, freeRiseCup: { volume: { value: 1, unit: 'L' } }, options: { lots: { A: lotA } } });
+    expectProblem(held, 409, '/options/lots/A');
+    expect(held.body.detail).toMatch(/on hold/);
+    expectProblem(await t.http.post(`/v1/lots/${lotA}/release-hold`).set('authorization', auth.viewer).send({ note: 'x' }), 403);
+    expectProblem(await t.http.post(`/v1/lots/${lotA}/release-hold`).set('authorization', auth.engineer).send({ note: '' }), 422, '/note');
+    const released = await t.http.post(`/v1/lots/${lotA}/release-hold`).set('authorization', auth.engineer).send({ note: 'repeat cup at 22 °C passed; supplier confirmed the lot' });
+    expect(released.status).toBe(200);
+    expect(released.body.hold).toBeNull();
+    expect(released.body.lastHoldRelease).toMatchObject({ note: 'repeat cup at 22 °C passed; supplier confirmed the lot' });
+    expectProblem(await t.http.post(`/v1/lots/${lotA}/release-hold`).set('authorization', auth.engineer).send({ note: 'again' }), 409);
+    const ok = await t.http.post('/v1/batches').set('authorization', auth.engineer).send({ materialSystemId: systemId, freeRiseCup: { volume: { value: 1, unit: 'L' } }, options: { lots: { A: lotA } } });
+    expect(ok.status).toBe(201);
+    const events = await testDb()('events').where({ organization_id: org.id }).whereIn('type', ['lot.held', 'lot.hold_released']).orderBy('seq').select('type', 'subject_id');
+    expect(events.filter((e) => e.subject_id === lotA).map((e) => e.type)).toEqual(['lot.held', 'lot.hold_released']);
+    expect(events.filter((e) => e.subject_id === lotB).map((e) => e.type)).toEqual(['lot.held']);
+    expect(await testDb()('audit_events').where({ organization_id: org.id, action: 'lot.hold_released', target_id: lotA }).first()).toBeTruthy();
   });
 });
 
@@ -229,6 +291,13 @@ describe('bad input: 422 with a pointer, and nothing written', () => {
     ['a lot of another organization’s system', '/v1/lots', () => ({ part: 'A', materialSystemId: otherSystemId, lotNumber: 'X-3', receivedOn: '2026-01-05', expiresOn: '2026-07-05' }), '/materialSystemId'],
     ['a cup test of another organization’s system', '/v1/qc-cup-tests', () => ({ materialSystemId: otherSystemId, componentTemperatureA: { value: 22, unit: 'degC' }, componentTemperatureB: { value: 22, unit: 'degC' }, freeRiseDensity: { value: 30, unit: 'kg/m3' }, testedAt: '2026-03-02T09:00:00Z' }), '/materialSystemId'],
     ['a cup test with a part B lot as its part A lot', '/v1/qc-cup-tests', () => ({ materialSystemId: systemId, lotAId: lotB, componentTemperatureA: { value: 22, unit: 'degC' }, componentTemperatureB: { value: 22, unit: 'degC' }, freeRiseDensity: { value: 30, unit: 'kg/m3' }, testedAt: '2026-03-02T09:00:00Z' }), '/lotAId'],
+    // physical bounds (issue 15, item 5): each with its source in packages/batching/src/bounds.ts
+    ['a specific gravity of 12 (liquid PU components are near 0.9–1.6, from memory)', '/v1/material-systems', () => flexSystem({ specificGravityA: 12 }), '/specificGravityA'],
+    ['a ratio of 1e308:1', '/v1/material-systems', () => flexSystem({ ratio: { a: 1e308, b: 1 } }), '/ratio/a'],
+    ['%NCO 48 with OH 5000 (index 7; glycerol, OH 1829, is about the highest polyol)', '/v1/material-systems', () => flexSystem({ ncoPercent: 48, hydroxylNumber: 5000 }), '/hydroxylNumber'],
+    ['a free-rise density that rises with temperature', '/v1/material-systems', () => flexSystem({ freeRiseDensitySlope: { value: 15, unit: 'kg/m3/degC' } }), '/freeRiseDensitySlope/value'],
+    ['a pbw tolerance on a volume ratio', '/v1/material-systems', () => flexSystem({ ratioBasis: 'volume', ratioTolerancePbw: 2 }), '/ratioTolerancePbw'],
+    ['a cream-time window upside down', '/v1/material-systems', () => flexSystem({ creamTimeWindow: { min: { value: 20, unit: 's' }, max: { value: 10, unit: 's' } } }), '/creamTimeWindow/max/value'],
     ['a cup test with a zero density', '/v1/qc-cup-tests', () => ({ materialSystemId: systemId, componentTemperatureA: { value: 22, unit: 'degC' }, componentTemperatureB: { value: 22, unit: 'degC' }, freeRiseDensity: { value: 0, unit: 'kg/m3' }, testedAt: '2026-03-02T09:00:00Z' }), '/freeRiseDensity/value'],
   ];
 
