@@ -6,6 +6,7 @@ import { FastifyAdapter, NestFastifyApplication } from '@nestjs/platform-fastify
 import { SwaggerModule } from '@nestjs/swagger';
 import { Redis } from 'ioredis';
 import path from 'node:path';
+import type { FastifyReply, FastifyRequest } from 'fastify';
 import type { DestinationStream } from 'pino';
 import { AppModule } from './app.module.js';
 import { frameworkErrorProblem, ProblemDetailsFilter } from './common/filters/problem-details.filter.js';
@@ -20,6 +21,8 @@ import { registerQueueDashboard } from './queues/queue-dashboard.js';
 export interface CreateAppOptions {
   /** Where log lines go (tests capture them); stdout by default. */
   logStream?: DestinationStream;
+  /** Sees every response as sent, body serialised (the e2e suites check each against the OpenAPI document). */
+  onSend?: (req: FastifyRequest, reply: FastifyReply, payload: unknown) => void;
 }
 
 /** Builds the whole HTTP application, initialised and ready; `main.ts` only adds `listen`. */
@@ -40,8 +43,9 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
     bufferLogs: false,
   });
   const fastify = app.getHttpAdapter().getInstance();
-  fastify.addHook('onSend', async (req, reply) => {
+  fastify.addHook('onSend', async (req, reply, payload) => {
     reply.header('x-request-id', req.id);
+    opts.onSend?.(req, reply, payload);
   });
   await app.register(helmet as never, {
     contentSecurityPolicy: {

@@ -84,7 +84,7 @@ export async function startErp(opts: ErpOptions): Promise<Erp> {
     fetchTargets,
     async targetsForWorkOrder(workOrderId) {
       const out: BatchTargets[] = [];
-      for await (const b of opts.client.paginate<{ id: string }>('/v1/batches', { filter: { workOrderId } })) out.push(await fetchTargets(b.id));
+      for await (const b of opts.client.paginate('/v1/batches', { filter: { workOrderId } })) out.push(await fetchTargets(b.id));
       return out;
     },
     async catchUp(cursor) {

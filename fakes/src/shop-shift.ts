@@ -35,7 +35,7 @@ export interface ShiftResult {
 const PASSWORD = 'pourgate-demo';
 
 async function findOrCreateDevice(integrator: Pourgate, body: { kind: 'scale' | 'logger'; serial: string; name: string; stationCode: string; readability?: { value: number; unit: string }; capacity?: { value: number; unit: string }; calibrationDue?: string }) {
-  for await (const d of integrator.paginate<{ id: string; serial: string }>('/v1/devices')) if (d.serial === body.serial) return d.id;
+  for await (const d of integrator.paginate('/v1/devices')) if (d.serial === body.serial) return d.id;
   return (await integrator.unwrap<{ id: string }>(integrator.api.POST('/v1/devices', { body }))).id;
 }
 
@@ -45,7 +45,7 @@ async function deviceKey(integrator: Pourgate, deviceId: string, name: string): 
 }
 
 async function idByName(client: Pourgate, list: '/v1/material-systems' | '/v1/molds', name: string): Promise<string> {
-  for await (const r of client.paginate<{ id: string; name: string }>(list)) if (r.name === name) return r.id;
+  for await (const r of client.paginate(list)) if (r.name === name) return r.id;
   throw new Error(`the demo seed has no ${list.slice(4)} named "${name}": run npm start once (it seeds the demo)`);
 }
 
@@ -80,7 +80,7 @@ export async function playShift(opts: ShiftOptions): Promise<ShiftResult> {
   let secret = '';
   const erpClient = new Pourgate({ baseUrl: opts.api, apiKey: erpKey.secret });
   const erp = await startErp({ client: erpClient, secret: () => secret, port: opts.erpPort ?? 4100, log: (l) => log(`    [erp] ${l}`) });
-  for await (const ep of integrator.paginate<{ id: string; url: string }>('/v1/webhook-endpoints')) {
+  for await (const ep of integrator.paginate('/v1/webhook-endpoints')) {
     if (ep.url === erp.receiver.url) await integrator.unwrap(integrator.api.DELETE('/v1/webhook-endpoints/{id}', { params: { path: { id: ep.id } } }));
   }
   const endpoint = await integrator.unwrap<{ id: string; secret: string }>(

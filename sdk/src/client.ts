@@ -1,7 +1,7 @@
 import createClient, { type Client } from 'openapi-fetch';
 import { randomUUID } from 'node:crypto';
 import { PourgateProblem, parseRetryAfter } from './errors.js';
-import type { BatchTargets, EventType, PourgateEvent, Reading, ReadingAck, ReadingInput } from './models.js';
+import type { BatchTargets, BulkReadingsResult, EventType, PourgateEvent, Reading, ReadingAck, ReadingInput, Session } from './models.js';
 import type { paths } from './schema.js';
 import { createTransport, type Credentials, type TransportOptions } from './transport.js';
 
@@ -20,6 +20,9 @@ export interface PourgateOptions extends Omit<TransportOptions, 'credentials'> {
 export type ListPath = {
   [P in keyof paths]: paths[P] extends { get: { parameters: { query?: { range?: string } } } } ? P : never;
 }[keyof paths];
+
+/** One row of a list path: the item schema of its 200 body (e.g. `reading.view` for /v1/readings). */
+export type ListItem<P extends ListPath> = paths[P] extends { get: { responses: { 200: { content: { 'application/json': (infer T)[] } } } } } ? T : never;
 
 export interface PaginateOptions {
   filter?: Record<string, unknown>;
@@ -72,7 +75,7 @@ export class Pourgate {
   static async signIn(opts: Omit<PourgateOptions, 'apiKey' | 'token' | 'refresh'> & { email: string; password: string }): Promise<Pourgate> {
     const { email, password, ...rest } = opts;
     const anonymous = new Pourgate(rest);
-    let session = await anonymous.unwrap<{ accessToken: string; refreshToken: string }>(anonymous.api.POST('/v1/auth/sign-in', { body: { email, password } }));
+    let session: Session = await anonymous.unwrap(anonymous.api.POST('/v1/auth/sign-in', { body: { email, password } }));
     return new Pourgate({
       ...rest,
       token: () => session.accessToken,
@@ -84,7 +87,7 @@ export class Pourgate {
   }
 
   /** The data of a successful call, or a thrown `PourgateProblem`. */
-  async unwrap<T = unknown>(call: Promise<FetchResult>): Promise<T> {
+  async unwrap<T>(call: Promise<{ data?: T; error?: unknown; response: Response }>): Promise<T> {
     const { data, error, response } = await call;
     if (response.ok) return data as T;
     throw PourgateProblem.from(response.status, response.statusText, response.headers.get('content-type'), error, response.headers.get('x-request-id'), parseRetryAfter(response.headers.get('retry-after')));
@@ -96,17 +99,17 @@ export class Pourgate {
    */
   postReading(input: ReadingInput): Promise<ReadingAck> {
     const body = { ...input, clientReadingId: input.clientReadingId ?? randomUUID() };
-    return this.unwrap<ReadingAck>(this.api.POST('/v1/readings', { body }));
+    return this.unwrap(this.api.POST('/v1/readings', { body }));
   }
 
   /** Posts up to 1000 readings at once, all or nothing. */
-  postReadings(inputs: ReadingInput[]): Promise<{ items: ReadingAck[] }> {
+  postReadings(inputs: ReadingInput[]): Promise<BulkReadingsResult> {
     const readings = inputs.map((r) => ({ ...r, clientReadingId: r.clientReadingId ?? randomUUID() }));
     return this.unwrap(this.api.POST('/v1/readings/bulk', { body: { readings } }));
   }
 
   getReading(id: string): Promise<Reading> {
-    return this.unwrap<Reading>(this.api.GET('/v1/readings/{id}', { params: { path: { id } } }));
+    return this.unwrap(this.api.GET('/v1/readings/{id}', { params: { path: { id } } }));
   }
 
   /** Polls a reading until the judge has decided (status other than pending). */
@@ -121,11 +124,11 @@ export class Pourgate {
   }
 
   batchTargets(batchId: string): Promise<BatchTargets> {
-    return this.unwrap<BatchTargets>(this.api.GET('/v1/batches/{id}/targets', { params: { path: { id: batchId } } }));
+    return this.unwrap(this.api.GET('/v1/batches/{id}/targets', { params: { path: { id: batchId } } }));
   }
 
   /** Every row of a list, fetched a page at a time by the range parameter until Content-Range's total. */
-  async *paginate<T = Record<string, unknown>>(path: ListPath, opts: PaginateOptions = {}): AsyncGenerator<T> {
+  async *paginate<P extends ListPath>(path: P, opts: PaginateOptions = {}): AsyncGenerator<ListItem<P>> {
     const size = opts.pageSize ?? 100;
     for (let start = 0; ; ) {
       const query: Record<string, string> = { range: JSON.stringify([start, start + size - 1]) };
@@ -133,7 +136,7 @@ export class Pourgate {
       if (opts.sort) query.sort = JSON.stringify(opts.sort);
       const call = (this.api.GET as (p: string, o: unknown) => Promise<FetchResult>)(path, { params: { query, path: opts.path } });
       const { response } = await call;
-      const rows = await this.unwrap<T[]>(call);
+      const rows = (await this.unwrap(call)) as ListItem<P>[];
       for (const row of rows) yield row;
       const range = parseContentRange(response.headers.get('content-range'));
       start += rows.length;
@@ -166,8 +169,9 @@ export class EventFeed implements AsyncIterable<PourgateEvent> {
     const { limit = 100, types, follow = false, pollIntervalMs = 1000, signal } = this.opts;
     while (!signal?.aborted) {
       const query = { limit, ...(this.cursor ? { after: this.cursor } : {}), ...(types?.length ? { type: types } : {}) };
-      const page = await this.client.unwrap<{ events: PourgateEvent[]; next: string | null; hasMore: boolean }>(this.client.api.GET('/v1/events', { params: { query }, signal }));
-      for (const e of page.events) yield e;
+      const page = await this.client.unwrap(this.client.api.GET('/v1/events', { params: { query }, signal }));
+      // the document types `data` loosely; PourgateEvent narrows it by `type`
+      for (const e of page.events) yield e as PourgateEvent;
       if (page.next) this.cursor = page.next;
       if (page.hasMore) continue;
       if (!follow) return;

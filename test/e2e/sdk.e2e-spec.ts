@@ -205,7 +205,7 @@ describe('typed errors', () => {
 describe('iteration', () => {
   it('paginate walks a list two rows at a time and yields what one big page holds', async () => {
     const small: Reading[] = [];
-    for await (const r of engineer.paginate<Reading>('/v1/readings', { filter: { batchId }, sort: ['receivedAt', 'ASC'], pageSize: 2 })) small.push(r);
+    for await (const r of engineer.paginate('/v1/readings', { filter: { batchId }, sort: ['receivedAt', 'ASC'], pageSize: 2 })) small.push(r);
     const big = await engineer.unwrap<Reading[]>(engineer.api.GET('/v1/readings', { params: { query: { filter: JSON.stringify({ batchId }), sort: '["receivedAt","ASC"]', range: '[0,99]' } } }));
     expect(small.length).toBeGreaterThanOrEqual(5);
     expect(small.map((r) => r.id)).toEqual(big.map((r) => r.id));

@@ -3,6 +3,7 @@ import type { AddressInfo } from 'node:net';
 import { Writable } from 'node:stream';
 import request from 'supertest';
 import { createApp } from '../../../api/src/app.factory.js';
+import { type OpenApiDoc, ResponseContract } from './contract.js';
 
 /** Collects every log line the app writes, so tests can assert what is (and is not) logged. */
 export class LogCapture extends Writable {
@@ -20,7 +21,20 @@ export interface TestApp {
   app: NestFastifyApplication;
   http: ReturnType<typeof request>;
   logs: LogCapture;
+  /** Responses that did not match the served OpenAPI document; close() fails when there are any. */
+  contractMismatches: string[];
   close(): Promise<void>;
+}
+
+const contracts = new Map<string, ResponseContract>();
+/** One compiled contract per document text (every test app of a worker serves the same one). */
+function contractFor(text: string): ResponseContract {
+  let c = contracts.get(text);
+  if (!c) {
+    c = new ResponseContract(JSON.parse(text) as OpenApiDoc);
+    contracts.set(text, c);
+  }
+  return c;
 }
 
 let appCount = 0;
@@ -40,13 +54,31 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
   }
   const logs = new LogCapture();
   try {
-    const app = await createApp({ logStream: logs });
+    // every response the suite receives is checked against the served OpenAPI document
+    const mismatches: string[] = [];
+    let contract: ResponseContract | undefined;
+    const app = await createApp({
+      logStream: logs,
+      onSend: (req, reply, payload) => {
+        if (!contract) return;
+        try {
+          const wrong = contract.check({ method: req.method, route: req.routeOptions?.url, url: req.url, status: reply.statusCode, headers: reply.getHeaders(), payload });
+          if (wrong && !mismatches.includes(wrong)) mismatches.push(wrong);
+        } catch (e) {
+          mismatches.push(`${req.method} ${req.url}: the contract check failed: ${(e as Error).message}`);
+        }
+      },
+    });
+    const served = await app.inject({ method: 'GET', url: '/v1/openapi.json' });
+    contract = contractFor(served.body);
     return {
       app,
       logs,
       http: request(app.getHttpServer()),
+      contractMismatches: mismatches,
       async close() {
         await app.close();
+        if (mismatches.length) throw new Error(`${mismatches.length} response(s) did not match the OpenAPI document:\n- ${mismatches.join('\n- ')}`);
       },
     };
   } finally {

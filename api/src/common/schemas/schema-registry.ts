@@ -74,8 +74,10 @@ export class SchemaRegistry {
   openApiComponents(): Record<string, Schema> {
     const out: Record<string, Schema> = {};
     for (const [name, schema] of this.schemas) {
-      const { $id: _id, $schema: _s, ...rest } = schema;
-      out[name] = rewriteRefs(rest) as Schema;
+      const { $id: _id, $schema: _s, $defs, ...rest } = schema;
+      out[name] = rewriteRefs(rest, name) as Schema;
+      // a schema's own definitions become components of their own (x.view's $defs/item: x.view.item)
+      for (const [def, sub] of Object.entries(($defs ?? {}) as Record<string, unknown>)) out[`${name}.${def}`] = rewriteRefs(sub, name) as Schema;
     }
     return out;
   }
@@ -113,15 +115,17 @@ export function nulCharacters(value: unknown, pointer = ''): FieldError[] {
   return out;
 }
 
-function rewriteRefs(node: unknown): unknown {
-  if (Array.isArray(node)) return node.map(rewriteRefs);
+/** `$ref`s as the document needs them: to another file's component, or to a definition (`#/$defs/…`) hoisted to one. */
+function rewriteRefs(node: unknown, self: string): unknown {
+  if (Array.isArray(node)) return node.map((n) => rewriteRefs(n, self));
   if (!node || typeof node !== 'object') return node;
   const out: Record<string, unknown> = {};
   for (const [k, v] of Object.entries(node)) {
-    if (k === '$ref' && typeof v === 'string' && v.startsWith(ID_PREFIX)) {
-      const [name, frag] = v.slice(ID_PREFIX.length).split('#');
-      out[k] = `#/components/schemas/${name}${frag ?? ''}`;
-    } else out[k] = rewriteRefs(v);
+    if (k === '$ref' && typeof v === 'string' && (v.startsWith(ID_PREFIX) || v.startsWith('#/'))) {
+      const [name, frag] = v.startsWith('#') ? [self, v.slice(1)] : v.slice(ID_PREFIX.length).split('#');
+      const def = /^\/\$defs\/([^/]+)(.*)$/.exec(frag ?? '');
+      out[k] = def ? `#/components/schemas/${name}.${def[1]}${def[2]}` : `#/components/schemas/${name}${frag ?? ''}`;
+    } else out[k] = rewriteRefs(v, self);
   }
   return out;
 }
