@@ -85,6 +85,8 @@ try {
     ], { NODE_OPTIONS: '--experimental-vm-modules --no-warnings' });
     // kills the API and stops its own PostgreSQL (55641) and Redis (56641) mid-ingest: never these suites' servers
     if (process.argv.length <= 2) step('fault suite, small counts (test/faults/run.ts)', process.execPath, ['--import', 'tsx', path.join(ROOT, 'test/faults/run.ts')], { FAULTS_SCALE: 'small' });
+    // its own PostgreSQL (55643) and Redis (56643): four processes that must agree on one truth
+    if (process.argv.length <= 2) step('multi-process: 2 API + 2 worker processes (test/multi-process/run.ts)', process.execPath, ['--import', 'tsx', path.join(ROOT, 'test/multi-process/run.ts')]);
   }
   if (results.find((r) => r.name === 'console: production build')?.ok) await browserSuite();
 } finally {
