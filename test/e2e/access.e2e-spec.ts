@@ -28,7 +28,7 @@ beforeAll(async () => {
   org = await makeOrg('access');
   other = await makeOrg('access-other');
   auth = await tokensFor(t.http, org);
-}, 60_000);
+}, 120_000);
 // apps started by single tests (other settings) are closed with the suite's: closing one early
 // ends connections the others still use
 const extraApps: TestApp[] = [];
@@ -124,7 +124,7 @@ describe('4. a password change ends the person’s other sessions', () => {
     expect(audit.details.sessionsEnded).toBe(2);
     expect(JSON.stringify(audit)).not.toContain('a-brand-new-password-9');
     expect(t.logs.text()).not.toContain('a-brand-new-password-9');
-  });
+  }, 120_000);
 
   it('a wrong current password is 422 and ends nothing', async () => {
     const a = await signIn(t.http, org.people.engineer.email);
@@ -133,7 +133,7 @@ describe('4. a password change ends the person’s other sessions', () => {
     expect(res.status).toBe(422);
     expect((await t.http.get('/v1/me').set('authorization', `Bearer ${b.token}`)).status).toBe(200);
     expect(t.logs.text()).not.toContain('whatever-password-2');
-  });
+  }, 120_000);
 
   it('signing out ends the access token of that session at once', async () => {
     const s = await signIn(t.http, org.people.engineer.email);
@@ -162,6 +162,11 @@ describe('5. invitations answer alike whether or not the address has an account 
     expect(toTaken.text).not.toContain('token=');
     const toFresh = await mail.waitFor((m) => m.to.includes(fresh));
     expect(toFresh.text).toContain('accept-invitation?token=');
+    // accepting signs the person in: the answer carries a session, so it is not cached either
+    const token = decodeURIComponent(/token=([^\s]+)/.exec(toFresh.text)![1]!);
+    const accepted = await t.http.post('/v1/invitations/accept').send({ token, name: 'Fresh Person', password: 'a-long-password-3' });
+    expect(accepted.status).toBe(200);
+    expect(accepted.headers['cache-control']).toBe('no-store');
   });
 });
 
@@ -246,7 +251,7 @@ describe('9. links in mail point where the API listens', () => {
     const quiet = await extraApp({ NODE_ENV: 'development', PORT: '4124', PUBLIC_URL: 'http://127.0.0.1:4124' });
     expect(warned.logs.text()).toMatch(/PUBLIC_URL http:\/\/127\.0\.0\.1:3000 points at port 3000, but the API listens on [^ ]+:4123/);
     expect(quiet.logs.text()).not.toContain('points at port');
-  });
+  }, 120_000);
 });
 
 describe('10. object storage credentials and secrets at rest', () => {
@@ -301,7 +306,7 @@ describe('10. object storage credentials and secrets at rest', () => {
       expect(hooks.signingSecrets(legacy)).toEqual([ep.body.secret]);
       expect(() => forgetful.app.get(WebhooksService).signingSecrets(row)).toThrow(/SECRETS_KEY_PREVIOUS/);
     }
-  });
+  }, 120_000);
 });
 
 describe('bad input to these routes', () => {

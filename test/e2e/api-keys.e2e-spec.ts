@@ -12,7 +12,7 @@ beforeAll(async () => {
   t = await startTestApp({ LOG_LEVEL: 'debug' });
   org = await makeOrg('keys');
   auth = await tokensFor(t.http, org);
-});
+}, 120_000);
 afterAll(async () => {
   await t.close();
   await closeTestDb();

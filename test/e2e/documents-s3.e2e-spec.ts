@@ -17,7 +17,8 @@ let systemId: string;
 
 beforeAll(async () => {
   store = await startObjectStore({ dir: fs.mkdtempSync(path.join(os.tmpdir(), 'pourgate-objects-')) });
-  t = await startTestApp({ S3_ENDPOINT: store.url, S3_BUCKET: 'shop-documents', DOCUMENT_MAX_BYTES: String(64 * 1024) });
+  // the stand-in's keys, as npm start sets them (without keys the SDK's default credential chain is used)
+  t = await startTestApp({ S3_ENDPOINT: store.url, S3_BUCKET: 'shop-documents', S3_ACCESS_KEY_ID: 'pourgate-local', S3_SECRET_ACCESS_KEY: 'pourgate-local-secret', DOCUMENT_MAX_BYTES: String(64 * 1024) });
   org = await makeOrg('s3');
   auth = await tokensFor(t.http, org);
   systemId = (await t.http.post('/v1/material-systems').set('authorization', auth.engineer).send(flexSystem())).body.id;

@@ -11,7 +11,7 @@ beforeAll(async () => {
   const org = await makeOrg('ssrf-create');
   orgId = org.id;
   admin = (await tokensFor(strict.http, org)).admin;
-});
+}, 120_000);
 afterAll(async () => {
   await strict.close();
   await closeTestDb();

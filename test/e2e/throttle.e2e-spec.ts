@@ -14,7 +14,7 @@ beforeAll(async () => {
   perAccount = await startTestApp({ SIGNIN_MAX_FAILURES: '3', SIGNIN_LOCK_SECONDS: '60', SIGNIN_IP_LIMIT_PER_MINUTE: '100000', RATE_LIMIT_NAMESPACE: `rl-account-${randomUUID()}:` });
   perAddress = await startTestApp({ SIGNIN_MAX_FAILURES: '100000', SIGNIN_LOCK_SECONDS: '60', SIGNIN_IP_LIMIT_PER_MINUTE: '5', RATE_LIMIT_NAMESPACE: `rl-address-${randomUUID()}:` });
   org = await makeOrg('throttle');
-}, 60_000);
+}, 120_000);
 afterAll(async () => {
   await t.close();
   await perAccount.close();

@@ -1,8 +1,8 @@
-import { Inject, Injectable, Logger } from '@nestjs/common';
+import { Inject, Injectable, Logger, type OnApplicationShutdown } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { JwtService } from '@nestjs/jwt';
 import argon2 from 'argon2';
-import type { Redis } from 'ioredis';
+import { Redis } from 'ioredis';
 import type { Knex } from 'knex';
 import { createHash, randomBytes, randomUUID } from 'node:crypto';
 import rateLimiterFlexible, { type RateLimiterAbstract, type RateLimiterRes } from 'rate-limiter-flexible';
@@ -10,7 +10,6 @@ import { AuditService } from '../audit/audit.service.js';
 import { ProblemException } from '../common/problems.js';
 import type { Env } from '../config/env.js';
 import { KNEX } from '../database/database.module.js';
-import { REDIS } from '../queues/queues.module.js';
 import { UserRow, UsersRepository } from '../users/users.repository.js';
 import { actionsOf } from '@pourgate/permissions';
 import type { AccessClaims } from './strategies.js';
@@ -50,9 +49,10 @@ const BAD_CREDENTIALS = 'The e-mail or the password is not right, or the account
 
 /** Sign-in, refresh-token rotation (with reuse detection) and sign-out. */
 @Injectable()
-export class TokensService {
+export class TokensService implements OnApplicationShutdown {
   private readonly logger = new Logger('Auth');
 
+  private readonly redis: Redis;
   /** Attempts per account (known or not, so answers stay alike) within SIGNIN_LOCK_SECONDS. */
   private readonly perAccount: RateLimiterAbstract;
   /** Attempts per client address per minute. */
@@ -60,13 +60,16 @@ export class TokensService {
 
   constructor(
     @Inject(KNEX) private readonly db: Knex,
-    @Inject(REDIS) private readonly redis: Redis,
     private readonly jwt: JwtService,
     private readonly users: UsersRepository,
     private readonly audit: AuditService,
     private readonly config: ConfigService<Env, true>,
   ) {
     const ns = config.get('RATE_LIMIT_NAMESPACE', { infer: true });
+    // a connection of its own (fails fast, no offline queue), so auth does not depend on the queues module
+    const redis = new Redis(config.get('REDIS_URL', { infer: true }), { maxRetriesPerRequest: 1, enableOfflineQueue: false, connectTimeout: 2000 });
+    redis.on('error', () => undefined); // an outage shows in /v1/ready; the limiters fall back to memory
+    this.redis = redis;
     // Redis counts for every API process; if it is down, each process keeps counting in memory
     // rather than letting guesses through unchecked (or locking everyone out).
     const limiter = (keyPrefix: string, points: number, duration: number) =>
@@ -178,6 +181,10 @@ export class TokensService {
 
   private refreshRefused(): ProblemException {
     return new ProblemException(401, { title: 'Refresh refused', detail: 'The refresh token is unknown, expired, revoked or already used; sign in again.' });
+  }
+
+  onApplicationShutdown(): void {
+    this.redis.disconnect();
   }
 
   /** Takes one attempt from the limiter; answers the refusal when none is left, else null. */

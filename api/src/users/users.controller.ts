@@ -3,6 +3,7 @@ import { ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { FastifyReply } from 'fastify';
 import type { Role } from '@pourgate/permissions';
 import { Caller, Origin, type RequestContext } from '../auth/principal.js';
+import { NoStore } from '../auth/no-store.decorator.js';
 import { Requires } from '../auth/requires.decorator.js';
 import { Public } from '../common/decorators/public.decorator.js';
 import { IdParam } from '../common/decorators/uuid-param.js';
@@ -97,6 +98,7 @@ export class InvitationsController {
   @Post('accept')
   @Public()
   @HttpCode(200)
+  @NoStore()
   @ApiOperation({ summary: 'Accept an invitation: set name and password', description: 'Works once; a used, revoked or expired link answers 410. The answer carries a session: the person is signed in.' })
   @Responds(200, 'invitation.accepted')
   accept(@SchemaBody('invitation.accept') body: { token: string; name: string; password: string }, @Origin() origin: { ip: string; userAgent?: string }) {
