@@ -74,8 +74,9 @@ export const INDEX_BOUNDS = { min: 50, max: 500 } as const;
 export const MAX_BATCH_MASS_KG = 1000;
 
 /**
- * A weighed target must span at least this many divisions of its scale: a bench scale is not used
- * below a minimum load of 20 d (NIST Handbook 44, scale accuracy classes II and III, from memory);
- * under it the rounding to d alone is 2.5 % or more of the mass.
+ * A weighed target must span at least this many divisions of its scale. A scale shows steps of d,
+ * so a reading is off by up to ±½ d from rounding alone: at 10 d that is ±5 %, the whole of the
+ * common ±5 % band (common practice), and a target that rounds to zero is no target at all. NIST
+ * Handbook 44 sets minimum loads of 10–50 d by accuracy class for the same reason (from memory).
  */
-export const MINIMUM_TARGET_DIVISIONS = 20;
+export const MINIMUM_TARGET_DIVISIONS = 10;

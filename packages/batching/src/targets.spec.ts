@@ -232,7 +232,7 @@ describe('computeBatchTargets: warnings', () => {
     expect(warning!.limit).toBeCloseTo(0.00025, 15);
   });
 
-  it('refuses a scale on which a target rounds to zero or spans under 20 divisions', () => {
+  it('refuses a scale on which a target rounds to zero or spans under 10 divisions', () => {
     const tiny = base({ mold: { volume: 0.00005 }, options: { packFactor: 1.5, scale: { readability: 0.001 } } });
     expect(() => computeBatchTargets(tiny)).toThrow(BatchingInputError);
     try {

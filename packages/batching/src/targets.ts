@@ -612,7 +612,7 @@ export function computeBatchTargets(input: BatchTargetsInput): BatchTargets {
     const blocked = ([['A', exact.a], ['B', exact.b], ['pigment', exact.pigment]] as const).filter(([, m]) => m > 0 && m / readability < MINIMUM_TARGET_DIVISIONS);
     if (blocked.length) {
       const what = blocked.map(([p, m]) => `${p === 'pigment' ? 'the pigment' : `part ${p}`} (${Number(m.toPrecision(3))} kg, ${Number((m / readability).toPrecision(3))} d)`).join(', ');
-      throw new BatchingInputError([{ pointer: '/options/scale/readability', detail: `is too coarse for ${what}: a target must span at least ${MINIMUM_TARGET_DIVISIONS} divisions of its scale (NIST Handbook 44 minimum load); use a finer scale or a larger batch`, code: 'below_minimum_load' }]);
+      throw new BatchingInputError([{ pointer: '/options/scale/readability', detail: `is too coarse for ${what}: a target must span at least ${MINIMUM_TARGET_DIVISIONS} divisions of its scale (rounding to the scale alone would use up a ±5 % band); use a finer scale or a larger batch`, code: 'below_minimum_load' }]);
     }
   }
 
