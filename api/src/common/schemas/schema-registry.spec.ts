@@ -1,4 +1,7 @@
 import { describe, expect, it } from '@jest/globals';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import { SchemaRegistry } from './schema-registry.js';
 
 describe('SchemaRegistry', () => {
@@ -24,5 +27,20 @@ describe('SchemaRegistry', () => {
     const c = registry.openApiComponents();
     expect(JSON.stringify(c['device.create'])).toContain('"$ref":"#/components/schemas/quantity"');
     expect(c['device.create'].$id).toBeUndefined();
+  });
+
+  it('hoists a schema\'s own $defs into components, so a reference into them resolves in the document', () => {
+    const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'schemas-'));
+    const write = (name: string, body: object) => fs.writeFileSync(path.join(dir, `${name}.schema.json`), JSON.stringify({ $id: `urn:pourgate:schema:${name}`, ...body }));
+    write('part', { type: 'object', properties: { side: { $ref: '#/$defs/side' } }, $defs: { side: { enum: ['A', 'B'] } } });
+    write('pair', { type: 'object', properties: { first: { $ref: 'urn:pourgate:schema:part#/$defs/side' }, whole: { $ref: 'urn:pourgate:schema:part' } } });
+    try {
+      const c = new SchemaRegistry(dir).openApiComponents();
+      expect(c['part.side']).toEqual({ enum: ['A', 'B'] });
+      expect(c.part).toEqual({ type: 'object', properties: { side: { $ref: '#/components/schemas/part.side' } } });
+      expect(c.pair!.properties).toEqual({ first: { $ref: '#/components/schemas/part.side' }, whole: { $ref: '#/components/schemas/part' } });
+    } finally {
+      fs.rmSync(dir, { recursive: true, force: true });
+    }
   });
 });
