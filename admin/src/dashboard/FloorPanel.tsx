@@ -8,7 +8,7 @@ import { useDataProvider } from 'react-admin';
 import type { Overview } from '../api/views';
 import { shortRef } from '../batches/labels';
 import type { PourgateDataProvider } from '../dataProvider';
-import { formatDate, formatDateTime } from '../format/dates';
+import { formatDateTime, formatDayShort } from '../format/dates';
 import { formatNumber, formatPercent } from '../format/quantities';
 import { palette } from '../theme';
 
@@ -46,7 +46,7 @@ function Stat({ label, value, hint, testId, to }: { label: string; value: string
   );
 }
 
-const shortDay = (day: string) => formatDate(`${day}T12:00:00`).replace(/ \d{4}$/, '');
+const shortDay = (day: string) => formatDayShort(day);
 
 /** The person's time zone, so "today" is the shop's day and not UTC's. */
 function localTimeZone(): string | undefined {

@@ -97,3 +97,10 @@ export function isoToDay(value: string | null | undefined): string {
   const pad = (n: number) => String(n).padStart(2, '0');
   return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`;
 }
+
+/** "2 Dec" / "Dec 2": a calendar day (YYYY-MM-DD) on a chart axis, without the year. */
+export function formatDayShort(day: string, opts: FormatOptions = {}): string {
+  const t = toTime(`${day}T12:00:00`);
+  if (t === null) return day;
+  return new Intl.DateTimeFormat(opts.locale, { day: 'numeric', month: 'short', timeZone: opts.timeZone }).format(t);
+}

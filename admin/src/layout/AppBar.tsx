@@ -53,13 +53,17 @@ function Organization() {
 }
 
 export function AppBar() {
+  const { identity } = useGetIdentity();
+  const name = (identity as PourgateIdentity | undefined)?.fullName;
+  // the button shows the person's name: its accessible name must contain what is seen (WCAG 2.5.3)
+  const accountLabel = name ? `${name}: account and sign-out` : 'Account and sign-out';
   return (
     <RaAppBar
       color="inherit"
       alwaysOn
       toolbar={<LoadingIndicator />}
       userMenu={
-        <UserMenu label="Account">
+        <UserMenu label={accountLabel}>
           <WhoAmI />
           <Divider />
           <SignOutItem />

@@ -423,7 +423,7 @@ function QueueBody() {
   return (
     <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', lg: 'minmax(0, 1fr) 330px' }, gap: 2, alignItems: 'start', pt: 1.5, bgcolor: 'background.default' }}>
       <Box sx={{ bgcolor: 'background.paper', border: '1px solid', borderColor: 'divider', borderRadius: 1.5, overflow: 'hidden' }}>
-        <Box sx={{ overflowX: 'auto' }}>
+        <Box sx={{ overflowX: 'auto' }} tabIndex={0} role="region" aria-label="Readings waiting for a decision, scrolls sideways">
         <Table size="small" aria-label="Readings" sx={{ '& th, & td': { px: 1.25 } }}>
           <TableHead>
             <TableRow>

@@ -1,18 +1,18 @@
 import { describe, expect, it } from 'vitest';
-import { describeReason, humaniseCode, reasonsLine, reasonTitle } from './reasons';
+import { describeReason, humaniseCode, reasonsLine, reasonTitle, type Reason } from './reasons';
 
 // the shapes the readings judge writes (api/src/readings/judging.ts)
-const isoHeavy = {
+const isoHeavy: Reason = {
   code: 'RATIO_ISOCYANATE_HEAVY',
   message: 'The A:B ratio is off by -7.88 %, outside ±5 %: the isocyanate side (part B) is heavy. Excess isocyanate side tends to make the foam harder and more brittle.',
   measured: -7.8787878788,
   limit: -5,
   unit: '%',
 };
-const cold = { code: 'TEMPERATURE_BELOW_WINDOW', message: '16.2 °C is below the window of 18–27 °C.', measured: 16.2, limit: 18, unit: 'degC' };
-const warm = { code: 'TEMPERATURE_ABOVE_WINDOW', message: '29 °C is above the window.', measured: 29, limit: 27, unit: 'degC' };
-const heavy = { code: 'OVER_CAPACITY', message: '6.2 kg is over the scale’s capacity of 6 kg.', measured: 6.2, limit: 6, unit: 'kg' };
-const calibration = { code: 'CALIBRATION_OVERDUE', message: 'The device was due for calibration on 2026-01-31.', measured: null, limit: null, unit: null };
+const cold: Reason = { code: 'TEMPERATURE_BELOW_WINDOW', message: '16.2 °C is below the window of 18–27 °C.', measured: 16.2, limit: 18, unit: 'degC' };
+const warm: Reason = { code: 'TEMPERATURE_ABOVE_WINDOW', message: '29 °C is above the window.', measured: 29, limit: 27, unit: 'degC' };
+const heavy: Reason = { code: 'OVER_CAPACITY', message: '6.2 kg is over the scale’s capacity of 6 kg.', measured: 6.2, limit: 6, unit: 'kg' };
+const calibration: Reason = { code: 'CALIBRATION_OVERDUE', message: 'The device was due for calibration on 2026-01-31.', measured: null, limit: null, unit: null };
 
 describe('describeReason', () => {
   it('reads a ratio error as a signed percent against a ± band', () => {
@@ -53,7 +53,7 @@ describe('describeReason', () => {
   it('turns a code it does not know into words instead of failing', () => {
     expect(humaniseCode('MIX_TIME_TOO_LONG')).toBe('Mix time too long');
     expect(reasonTitle('MIX_TIME_TOO_LONG')).toBe('Mix time too long');
-    expect(describeReason({ code: 'MIX_TIME_TOO_LONG', message: 'x', measured: 12, limit: 8, unit: 's' }).line).toBe('Mix time too long: 12 s, limit 8 s');
+    expect(describeReason({ code: 'MIX_TIME_TOO_LONG' as Reason['code'], message: 'x', measured: 12, limit: 8, unit: 's' }).line).toBe('Mix time too long: 12 s, limit 8 s');
   });
 });
 
