@@ -4,6 +4,7 @@ import type { Role } from '@pourgate/permissions';
 import { closeTestDb, makeOrg, type OrgFixture, testDb, tokensFor } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/app.js';
 import { expectProblem, flexSystem } from './support/shop.js';
+import { seedControlDemo } from '../../seeds/control-demo.js';
 
 // Checks: limits x̄ ± 2.660·MR̄ and the moving-range limit 3.267·MR̄ (NIST/SEMATECH e-Handbook
 // §6.3.2.2); a point beyond 3σ (Western Electric rule 1) and eight in a row on one side of the centre
@@ -199,5 +200,26 @@ describe('batch figures', () => {
     expect(p!.value).toBeCloseTo((1 / 1.02 - 1) * 100, 6);
     const shot = await testDb()('control_points').where({ batch_id: b.body.id, metric: 'shot_mass_error_percent' }).first('value');
     expect(shot.value).toBeCloseTo(((ta + tb * 1.02) / (ta + tb) - 1) * 100, 6);
+  });
+});
+
+describe('demo seed', () => {
+  it('seeds a drifting bench whose frozen chart shows the signals its rules raised; a second run adds nothing', async () => {
+    const demo = await makeOrg('control-demo');
+    const demoAuth = await tokensFor(t.http, demo);
+    const sys = await t.http.post('/v1/material-systems').set('authorization', demoAuth.engineer).send(flexSystem({ name: 'Demo Flex 28' }));
+    expect(sys.status).toBe(201);
+    expect(await seedControlDemo(testDb(), demo.id)).toBeGreaterThan(40);
+    expect(await seedControlDemo(testDb(), demo.id)).toBe(0);
+    const [chart] = (await t.http.get('/v1/control/charts').set('authorization', demoAuth.viewer)).body;
+    const d = await t.http.get(`/v1/control/charts/${chart.id}/data`).set('authorization', demoAuth.viewer);
+    expect(d.body.limitsKind).toBe('frozen');
+    expect(d.body.points).toHaveLength(40);
+    const signals = (await t.http.get('/v1/control/signals').set('authorization', demoAuth.viewer)).body as { rule: string; value: number }[];
+    expect(signals.length).toBeGreaterThan(0);
+    // every signal is on a drifting point, after the 25 of the baseline
+    const late = new Set(d.body.points.slice(25).flatMap((p: { signals: { id: string }[] }) => p.signals.map((x) => x.id)));
+    expect(signals.every((s) => late.has((s as unknown as { id: string }).id))).toBe(true);
+    expect(signals.some((s) => s.rule === 'WE1' && s.value > d.body.limits.ucl)).toBe(true);
   });
 });
