@@ -2882,7 +2882,7 @@ export interface components {
             /** @default 100 */
             limit?: number;
             /** @description Only these event types (repeat the parameter) */
-            type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed")[];
+            type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed" | "drift.detected" | "drift.acknowledged")[];
         };
         /** A page of the event feed */
         "event.feed": {
@@ -4381,7 +4381,7 @@ export interface components {
             url: string;
             description?: string;
             /** @description Empty or omitted: every event type */
-            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed")[];
+            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed" | "drift.detected" | "drift.acknowledged")[];
             enabled?: boolean;
         };
         /** A webhook endpoint with its signing secret: the only time it is shown */
@@ -4406,7 +4406,7 @@ export interface components {
             url?: string;
             description?: string;
             /** @description Empty or omitted: every event type */
-            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed")[];
+            eventTypes?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed" | "drift.detected" | "drift.acknowledged")[];
             enabled?: boolean;
         };
         /** A webhook endpoint (never its secret) */
@@ -8808,7 +8808,7 @@ export interface operations {
             query?: {
                 after?: string;
                 limit?: number;
-                type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed")[];
+                type?: ("webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed" | "drift.detected" | "drift.acknowledged")[];
             };
             header?: never;
             path?: never;
