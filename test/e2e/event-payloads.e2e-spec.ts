@@ -42,7 +42,8 @@ describe('event payloads', () => {
     const wo = await t.http.post('/v1/work-orders').set('authorization', auth.engineer).send({ externalRef: `WO-${randomUUID()}`, quantity: 4, materialSystemId: sys.body.id });
     expect(wo.status).toBe(201);
     expect((await t.http.put(`/v1/work-orders/${wo.body.id}`).set('authorization', auth.engineer).send({ externalRef: wo.body.externalRef, quantity: 5, materialSystemId: sys.body.id })).status).toBe(200);
-    const newBatch = async () => (await t.http.post('/v1/batches').set('authorization', auth.engineer).send({ materialSystemId: sys.body.id, workOrderId: wo.body.id, freeRiseCup: { volume: { value: 1, unit: 'L' } } })).body.id as string;
+    // 50 L at 40 kg/m³: 1 kg of A and 1 kg of B, so the parts weighed below are on or off their own targets
+    const newBatch = async () => (await t.http.post('/v1/batches').set('authorization', auth.engineer).send({ materialSystemId: sys.body.id, workOrderId: wo.body.id, freeRiseCup: { volume: { value: 50, unit: 'L' } } })).body.id as string;
     const waived = await newBatch();
     await post(waived, 'part_a', 1);
     const off = await post(waived, 'part_b', 1.2);
@@ -53,6 +54,13 @@ describe('event payloads', () => {
     await post(scrapped, 'part_a', 1);
     const bad = await post(scrapped, 'part_b', 0.8);
     expect((await t.http.post(`/v1/readings/${bad.id}/review`).set('authorization', auth.engineer).send({ decision: 'uphold', scrap: true, note: 'soft' })).status).toBe(200);
+
+    // a lot whose cup test fails is held, and an engineer releases it
+    const qc = await t.http.post('/v1/material-systems').set('authorization', auth.engineer).send(flexSystem({ creamTimeWindow: { min: { value: 8, unit: 's' }, max: { value: 14, unit: 's' } } }));
+    const lot = await t.http.post('/v1/lots').set('authorization', auth.engineer).send({ part: 'B', materialSystemId: qc.body.id, lotNumber: `EV-${randomUUID().slice(0, 8)}`, receivedOn: '2026-01-05', expiresOn: '2099-01-05' });
+    const failed = await t.http.post('/v1/qc-cup-tests').set('authorization', auth.engineer).send({ materialSystemId: qc.body.id, lotBId: lot.body.id, componentTemperatureA: { value: 22, unit: 'degC' }, componentTemperatureB: { value: 22, unit: 'degC' }, creamTime: { value: 20, unit: 's' }, freeRiseDensity: { value: 40, unit: 'kg/m3' }, testedAt: '2026-03-02T09:00:00Z' });
+    expect(failed.body.verdict).toBe('failed');
+    expect((await t.http.post(`/v1/lots/${lot.body.id}/release-hold`).set('authorization', auth.engineer).send({ note: 'repeat cup passed' })).status).toBe(200);
 
     const events = await testDb()('events').where({ organization_id: org.id }).select('type', 'payload');
     const registry = schemaRegistry();

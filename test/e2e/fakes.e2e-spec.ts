@@ -35,7 +35,8 @@ async function deviceWithKey(kind: 'scale' | 'logger', name: string) {
 }
 
 async function newBatch(workOrderId?: string): Promise<string> {
-  const b = await engineer.unwrap<{ id: string }>(engineer.api.POST('/v1/batches', { body: { materialSystemId: systemId, workOrderId, freeRiseCup: { volume: { value: 3, unit: 'L' } }, options: { scaleDeviceId: devices.scale, pigmentPercent: 2 } } }));
+  // 10 L at 40 kg/m³: the pigment target (about 8 g) spans at least 10 divisions of the 0.5 g scale
+  const b = await engineer.unwrap<{ id: string }>(engineer.api.POST('/v1/batches', { body: { materialSystemId: systemId, workOrderId, freeRiseCup: { volume: { value: 10, unit: 'L' } }, options: { scaleDeviceId: devices.scale, pigmentPercent: 2 } } }));
   return b.id;
 }
 

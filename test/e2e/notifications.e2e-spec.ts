@@ -35,8 +35,9 @@ afterAll(async () => {
 
 describe('e-mail about rejected readings', () => {
   it('tells each engineer as they chose: one message now, a digest later, or nothing', async () => {
-    const sys = await t.http.post('/v1/material-systems').set('authorization', auth.engineer).send(flexSystem({ ratio: { a: 100, b: 100 } }));
-    const batch = await t.http.post('/v1/batches').set('authorization', auth.engineer).send({ materialSystemId: sys.body.id, freeRiseCup: { volume: { value: 1, unit: 'L' } } });
+    // 50 L at 40 kg/m³: 1 kg of A and 1 kg of B; masses held to ±25 % so only the ratio is off
+    const sys = await t.http.post('/v1/material-systems').set('authorization', auth.engineer).send(flexSystem({ ratio: { a: 100, b: 100 }, massTolerancePercent: 25 }));
+    const batch = await t.http.post('/v1/batches').set('authorization', auth.engineer).send({ materialSystemId: sys.body.id, freeRiseCup: { volume: { value: 50, unit: 'L' } } });
     const send = (subject: string, value: number) => t.http.post('/v1/readings').set('authorization', auth.engineer).send({ batchId: batch.body.id, deviceId: scaleId, clientReadingId: randomUUID(), quantity: 'mass', subject, value, unit: 'kg' });
     expect((await send('part_a', 1)).status).toBe(202);
     await new Promise((r) => setTimeout(r, 300));
@@ -47,7 +48,8 @@ describe('e-mail about rejected readings', () => {
     expect(each.subject).toMatch(/^Rejected reading on batch .+: RATIO_ISOCYANATE_HEAVY$/);
     expect(each.text).toContain('part B (mass)');
     expect(each.text).toContain('from Bench scale 2');
-    expect(each.text).toMatch(/measured -16\.6+7 % against a limit of -5 %/);
+    // the size of the ratio error, the heavy side in words (the reason's code and sentence)
+    expect(each.text).toMatch(/measured 16\.6+7 % against a limit of 5 %/);
     expect(each.text).toContain(`http://127.0.0.1:3000/#/readings?filter=${encodeURIComponent(JSON.stringify({ status: 'rejected', batchId: batch.body.id }))}`);
     expect(each.text).toContain(off.body.id);
     expect(each.text).toMatch(/SDS/);
