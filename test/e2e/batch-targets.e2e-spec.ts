@@ -112,7 +112,10 @@ describe('POST /v1/targets/preview', () => {
     expect(fine.body.components.B.mass.value).toBeCloseTo(Math.round((ab / 3) * 10) / 10, 9);
     expect(fine.body.warnings.map((w: { code: string }) => w.code)).not.toContain('TOLERANCE_BELOW_SCALE_RESOLUTION');
     // B is about 74 g: ±5 % is about 3.5 g, under 5 divisions of a 1 g scale
-    const coarse = await t.http.post('/v1/targets/preview').query({ units: 'metric' }).set(as('engineer')).send(inlineCheck({ pigmentPercent: 2, scale: { readability: { value: 1, unit: 'g' } } }));
+    const coarse = await t.http.post('/v1/targets/preview').query({ units: 'metric' }).set(as('engineer')).send(inlineCheck({ scale: { readability: { value: 1, unit: 'g' } } }));
+    // with the pigment, 4.4 g of it is only 4.4 divisions of that scale: refused (at least 10 divisions)
+    const refused = await t.http.post('/v1/targets/preview').query({ units: 'metric' }).set(as('engineer')).send(inlineCheck({ pigmentPercent: 2, scale: { readability: { value: 1, unit: 'g' } } }));
+    expectProblem(refused, 422, '/options/scale/readability/value');
     const w = coarse.body.warnings.find((x: { code: string }) => x.code === 'TOLERANCE_BELOW_SCALE_RESOLUTION');
     expect(w).toBeDefined();
     expect(w.display.unit).toBe('g');
@@ -230,7 +233,7 @@ describe('a batch from a work order posted by the ERP', () => {
     await testDb()('devices').where({ id: scaleId }).update({ calibration_due: '2026-01-01' });
     const res = await t.http.post('/v1/batches').set(as('engineer')).send({ workOrderId: orderId, options: { packFactor: 2, lots: { A: lotA, B: lotBOld }, scaleDeviceId: scaleId, plannedFor: '2026-04-20' } });
     expect(res.status).toBe(201);
-    expect(res.body.summary.warnings).toEqual(expect.arrayContaining(['LOT_EXPIRED', 'SCALE_CALIBRATION_OVERDUE']));
+    expect(res.body.summary.warnings).toEqual(expect.arrayContaining(['LOT_EXPIRED', 'CALIBRATION_OVERDUE']));
     await testDb()('devices').where({ id: scaleId }).update({ calibration_due: '2099-01-01' });
   });
 
@@ -304,5 +307,83 @@ describe('a batch from a work order posted by the ERP', () => {
       expectProblem(await t.http.post('/v1/targets/preview').set({ authorization: otherAuth.engineer }).send({ system: { id: systemId }, mold: { id: moldId }, options: { packFactor: 2 } }), 422, '/system/id');
       expectProblem(await t.http.post('/v1/targets/preview').set(as('engineer')).send({ system: { id: systemId }, mold: { id: foreignMold }, options: { packFactor: 2 } }), 422, '/mold/id');
     });
+  });
+});
+
+describe('judging the whole pour: targets (issue 15)', () => {
+  const system = (over: Record<string, unknown> = {}) => ({ ...inlineCheck().system, freeRiseDensity: { value: 30, unit: 'kg/m3' }, freeRiseReferenceTemperature: { value: 22, unit: 'degC' }, freeRiseDensitySlope: { value: -0.3, unit: 'kg/m3/degC' }, ...over });
+  const preview = (body: Record<string, unknown>, units = 'metric') => t.http.post('/v1/targets/preview').query({ units }).set(as('viewer')).send(body);
+  const cup = { freeRiseCup: { volume: { value: 1, unit: 'L' } } };
+
+  it('5. refuses inputs with no physical sense with a pointer, never a number (and never a 500)', async () => {
+    // a component at 200 °C gave −17.3 kg/m³ (a mold) and a RangeError (a free-rise cup)
+    expectProblem(await preview({ system: system(), mold: inlineCheck().mold, options: { packFactor: 2, componentTemperature: { value: 200, unit: 'degC' } } }), 422, '/options/componentTemperature/value');
+    expectProblem(await preview({ system: system(), ...cup, options: { componentTemperature: { value: 200, unit: 'degC' } } }), 422, '/options/componentTemperature/value');
+    expectProblem(await preview({ system: system({ specificGravityA: 12 }), ...cup }), 422, '/system/specificGravityA');
+    expectProblem(await preview({ system: system({ ratio: { a: 1e308, b: 1 } }), ...cup }), 422, '/system/ratio/a');
+    expectProblem(await preview({ system: system({ ncoPercent: 48, hydroxylNumber: 5000 }), ...cup }), 422, '/system/hydroxylNumber');
+    expectProblem(await preview({ system: system(), mold: { cavity: { kind: 'entered', volume: { value: 1e9, unit: 'm3' } } }, options: { packFactor: 2 } }), 422, '/mold/cavity');
+  });
+
+  it('6. uses the system slope, and says why, when three cups at 22.0–22.2 °C fit +15 kg/m³/°C', async () => {
+    const sys = await t.http.post('/v1/material-systems').set(as('engineer')).send(flexSystem({ freeRiseDensitySlope: { value: -0.3, unit: 'kg/m3/degC' } }));
+    for (const [temperature, density] of [[22.0, 40], [22.1, 41.5], [22.2, 43]] as const) {
+      const r = await t.http.post('/v1/qc-cup-tests').set(as('engineer')).send({ materialSystemId: sys.body.id, componentTemperatureA: { value: temperature, unit: 'degC' }, componentTemperatureB: { value: temperature, unit: 'degC' }, freeRiseDensity: { value: density, unit: 'kg/m3' }, testedAt: '2026-03-02T09:00:00Z' });
+      expect(r.status).toBe(201);
+    }
+    const res = await preview({ system: { id: sys.body.id }, ...cup, options: { componentTemperature: { value: 30, unit: 'degC' } } });
+    expect(res.status).toBe(200);
+    expect(res.body.expectedFreeRiseDensity).toMatchObject({ method: 'system_slope', fitRejected: 'too_few_points' });
+    expect(res.body.expectedFreeRiseDensity.methodReason).toMatch(/cup tests were not used because fewer than 5 cup tests/);
+    // 40 − 0.3 × 8 = 37.6 kg/m³, not the 164 kg/m³ of the three-cup line
+    expect(res.body.expectedFreeRiseDensity.density.si.value).toBeCloseTo(37.6, 9);
+  });
+
+  it('7. refuses a scale on which a target rounds to zero or spans fewer than 10 divisions', async () => {
+    // 0.2 kg of mix on a 1 kg readability rounded every target to 0 with only a warning
+    const res = await preview({ system: system(), mold: { cavity: { kind: 'entered', volume: { value: 0.2 / 60, unit: 'm3' } } }, options: { packFactor: 2, scale: { readability: { value: 1, unit: 'kg' } } } });
+    expectProblem(res, 422, '/options/scale/readability/value');
+    expect(res.body.errors[0].detail).toMatch(/at least 10 divisions/);
+    expect((await preview({ system: system(), mold: { cavity: { kind: 'entered', volume: { value: 0.2 / 60, unit: 'm3' } } }, options: { packFactor: 2, scale: { readability: { value: 1, unit: 'g' } } } })).status).toBe(200);
+  });
+
+  it('3. doses pigment as the trade does: 2 % of the polyol side at 100:55 is 1.29 % of A+B; pre-blended in B it is in B’s target', async () => {
+    // 2 × 100/155 = 1.2903 % of A + B (polyol is A); copying a paste sheet as % of A+B overdoses by 55 %
+    const polyol = await preview({ system: system({ ratio: { a: 100, b: 55 }, pigmentDoseBasis: 'polyol' }), ...cup, options: { pigmentPercent: 2 } });
+    expect(polyol.status).toBe(200);
+    expect(polyol.body.components.pigment.percentOfAB).toBeCloseTo(200 / 155, 9);
+    expect(polyol.body.components.pigment.dosed).toEqual({ percent: 2, basis: 'polyol' });
+    const inB = await preview({ system: system({ ratio: { a: 100, b: 55 }, pigmentPlacement: 'B' }), ...cup, options: { pigmentPercent: 2 } });
+    const c = inB.body.components;
+    expect(c.pigment.placement).toBe('B');
+    expect(c.pigment.mass.si.value).toBe(0);
+    expect(c.B.massUnrounded.si.value).toBeCloseTo(c.A.massUnrounded.si.value * 0.55 + c.pigment.massUnrounded.si.value, 12);
+  });
+
+  it('3. counts the pigment carrier’s OH in the isocyanate index (equivalent-weight method)', async () => {
+    // 100 A (polyol, OH 56.1: 0.1 eq) : 50 B (%NCO 16.808: 4202 ÷ 16.808 = 250 g/eq, 0.2 eq) is index 200; 2 % of A+B of a carrier of OH 56.1
+    // adds 3 g × 56.1/56 100 = 0.003 eq → 0.2/0.103 × 100 = 194.17
+    const base = system({ ncoPercent: 16.808, hydroxylNumber: 56.1 });
+    expect((await preview({ system: base, ...cup })).body.isocyanateIndex.value).toBeCloseTo(200, 6);
+    const carried = await preview({ system: { ...base, pigmentCarrierHydroxylNumber: 56.1 }, ...cup, options: { pigmentPercent: 2 } });
+    expect(carried.body.isocyanateIndex.value).toBeCloseTo((0.2 / 0.103) * 100, 6);
+  });
+
+  it('4. takes the ratio tolerance in parts by weight: 100:50 ± 2 pbw is the narrower 2/52 = 3.85 %', async () => {
+    const res = await preview({ system: system({ ratioTolerancePbw: 2 }), ...cup });
+    expect(res.status).toBe(200);
+    expect(res.body.ratioTolerancePercent).toBeCloseTo((2 / 52) * 100, 9);
+  });
+
+  it('8. writes warnings in the reader’s units and grades the pack factor: below 1 a danger, just above 1 a caution', async () => {
+    const cold = await preview({ system: { ...system(), componentTemperatureWindow: { min: { value: 18, unit: 'degC' }, max: { value: 27, unit: 'degC' } } }, mold: inlineCheck().mold, options: { packFactor: 1.05, componentTemperature: { value: 15.5555555555556, unit: 'degC' } } }, 'imperial');
+    expect(cold.status).toBe(200);
+    const byCode = Object.fromEntries(cold.body.warnings.map((w: { code: string }) => [w.code, w]));
+    // 15.56 °C = 60 °F and 18–27 °C = 64.4–80.6 °F (NIST SP 811)
+    expect(byCode.TEMPERATURE_BELOW_WINDOW.message).toMatch(/^The component at 60 °F is below the window of 64\.4–80\.6 °F/);
+    // expected free-rise density at 15.56 °C is 30 + 0.3 × 6.44 = 31.93 kg/m³: 1.05 × 30 / 31.93 = 0.987, under 1
+    expect(byCode.PACK_FACTOR_BELOW_ONE.severity).toBe('danger');
+    const marginal = await preview({ system: system(), mold: inlineCheck().mold, options: { packFactor: 1.05 } });
+    expect(marginal.body.warnings.map((w: { code: string; severity: string }) => `${w.code}:${w.severity}`)).toContain('PACK_FACTOR_MARGINAL:caution');
   });
 });
