@@ -19,8 +19,5 @@ const run = (args) => {
 run(['run', 'build', '-w', 'packages/batching', '-w', 'packages/permissions']);
 run(['run', 'build', '-w', 'api']);
 run(['run', 'build', '-w', 'admin']);
-const r = spawnSync(process.execPath, ['--import', 'tsx', '--input-type=module', '-e', `
-  const { precompressDir } = await import(${JSON.stringify(path.join(ROOT, 'api/src/static/precompress.ts'))});
-  console.log('[pourgate] console files compressed: ' + precompressDir(${JSON.stringify(path.join(ROOT, 'admin/dist'))}));
-`], { cwd: ROOT, stdio: 'inherit' });
+const r = spawnSync(process.execPath, ['--import', 'tsx', path.join(ROOT, 'scripts/precompress.ts'), path.join(ROOT, 'admin/dist')], { cwd: ROOT, stdio: 'inherit' });
 process.exit(r.status ?? 1);

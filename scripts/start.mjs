@@ -73,6 +73,8 @@ function build(name, target, sources, args) {
 }
 build('the API', 'api/dist/main.js', ['api/src', 'api/tsconfig.json', 'api/tsconfig.build.json'], ['run', 'build', '-w', 'api']);
 if (fs.existsSync(path.join(ROOT, 'admin/vite.config.ts')) && !process.env.SKIP_CONSOLE_BUILD) build('the console', 'admin/dist/index.html', ['admin/src', 'admin/index.html', 'admin/vite.config.ts'], ['run', 'build', '-w', 'admin']);
+// brotli and gzip copies beside the console's files, once per build (the API serves them by Accept-Encoding)
+if (fs.existsSync(path.join(ROOT, 'admin/dist/index.html'))) runTs(path.join(ROOT, 'scripts/precompress.ts'), [path.join(ROOT, 'admin/dist')], env);
 
 const child = spawn(process.execPath, ['--enable-source-maps', path.join(ROOT, 'api/dist/main.js')], { cwd: ROOT, env, stdio: 'inherit' });
 let stopping = false;

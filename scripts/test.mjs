@@ -73,6 +73,8 @@ try {
     step('console: vitest component tests', process.execPath, [path.join(ROOT, 'node_modules/vitest/vitest.mjs'), 'run', '--root', 'admin'], { NODE_ENV: 'test' });
     const built = step('console: production build', 'npm', ['run', 'build', '-w', 'admin'], { NODE_ENV: 'production' });
     if (built) step('console: first-page bundle within 250 kB gzip', 'npm', ['run', 'size', '-w', 'admin']);
+    // once here, so no test app compresses the console while it boots
+    if (built) step('console: brotli and gzip copies of its files', process.execPath, ['--import', 'tsx', path.join(ROOT, 'scripts/precompress.ts'), path.join(ROOT, 'admin/dist')]);
   }
   if (seeded) {
     // the module boundaries (controllers without Knex, no reaching into another module's repository or

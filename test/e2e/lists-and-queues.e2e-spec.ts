@@ -14,7 +14,7 @@ beforeAll(async () => {
   admin = (await tokensFor(t.http, org)).admin;
   const rows = Array.from({ length: 12 }, (_, i) => ({ organization_id: org.id, kind: 'thermometer', serial: `T-${String(i).padStart(2, '0')}`, name: `Probe ${String(i).padStart(2, '0')}` }));
   await testDb()('devices').insert(rows);
-});
+}, 60_000);
 afterAll(async () => {
   await t.close();
   await closeTestDb();
