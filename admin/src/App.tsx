@@ -16,6 +16,7 @@ import { Dashboard } from './dashboard';
 import { AcceptInvitationPage } from './invitations/AcceptInvitationPage';
 import invitations from './invitations';
 import { ImportsPage } from './imports';
+import { ReadingListPage } from './readings';
 import { LivePage } from './live';
 import { ConsoleAdmin } from './layout/ConsoleAdmin';
 import { ProfilePage } from './profile';
@@ -49,6 +50,7 @@ export function App() {
         <Route path="/batches/:id/pour-sheet" element={<PourSheetPage />} />
         <Route path="/calculator" element={<CalculatorPage />} />
         <Route path="/imports" element={<ImportsPage />} />
+        <Route path="/reading-log" element={<ReadingListPage />} />
         <Route path="/live" element={<LivePage />} />
         <Route path="/control" element={<ControlPage />} />
       </CustomRoutes>

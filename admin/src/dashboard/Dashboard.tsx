@@ -19,6 +19,7 @@ const SHORTCUTS: Record<string, { text: string; cta: string }> = {
   'api-keys': { text: 'Issue scoped keys for machines, see when each was last used, rotate and revoke them.', cta: 'Manage keys' },
   docs: { text: 'The OpenAPI reference: every route, schema and error, with examples.', cta: 'Open the reference' },
   readings: { text: 'Rejected readings with what was measured against which limit: waive with a note, or uphold.', cta: 'Open the queue' },
+  'reading-log': { text: 'Every reading the scales and loggers sent, with its verdict; filter by device to check a connection.', cta: 'See readings' },
   batches: { text: 'Every mix with its targets, what was weighed, its timeline and a printable pour sheet.', cta: 'See batches' },
   calculator: { text: 'Masses of A, B and pigment for any system and mold, with warnings and cautions.', cta: 'Compute targets' },
   imports: { text: 'Send a CSV a logger kept offline and follow it row by row.', cta: 'Import a file' },

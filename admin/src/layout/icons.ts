@@ -17,6 +17,7 @@ import ReviewOutlined from '@mui/icons-material/FactCheckOutlined';
 import BatchesOutlined from '@mui/icons-material/BlenderOutlined';
 import CalculatorOutlined from '@mui/icons-material/CalculateOutlined';
 import ImportsOutlined from '@mui/icons-material/UploadFileOutlined';
+import ReadingLogOutlined from '@mui/icons-material/ListAltOutlined';
 import type { ComponentType } from 'react';
 
 /** One icon per menu entry id, shared by the menu and the resource registrations. */
@@ -40,4 +41,5 @@ export const menuIcons: Record<string, ComponentType> = {
   batches: BatchesOutlined,
   calculator: CalculatorOutlined,
   imports: ImportsOutlined,
+  'reading-log': ReadingLogOutlined,
 };

@@ -36,6 +36,7 @@ export const MENU: readonly MenuSection[] = [
     label: 'Shop floor',
     links: [
       { id: 'readings', label: 'Review queue', to: '/readings', requires: 'readings:review' },
+      { id: 'reading-log', label: 'Readings', to: '/reading-log', requires: 'readings:read' },
       { id: 'batches', label: 'Batches', to: '/batches', requires: 'shop:read' },
       { id: 'calculator', label: 'Targets calculator', to: '/calculator', requires: 'targets:read' },
       { id: 'imports', label: 'Logger imports', to: '/imports', requires: 'imports:write' },
