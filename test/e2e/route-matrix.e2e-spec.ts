@@ -38,6 +38,8 @@ const fixtures: Record<string, (org: OrgFixture) => Promise<string>> = {
     const [dev] = await testDb()('devices').insert({ organization_id: org.id, kind: 'scale', serial: `F-${randomUUID()}`, name: 'foreign scale' }).returning('id');
     return (await testDb()('readings').insert({ organization_id: org.id, batch_id: batchId, device_id: dev.id, client_reading_id: randomUUID(), quantity: 'mass', subject: 'part_a', value_si: 1, unit_given: 'kg', value_given: 1, status: 'rejected' }).returning('id'))[0].id;
   },
+  // one chart: its id stands for every control/{id} route (a signal with that id does not exist there either)
+  control: async (org) => (await testDb()('control_charts').insert({ organization_id: org.id, name: 'foreign chart', material_system_id: await shopFixtures['material-systems']!(org), metric: 'ratio_error_percent', rules: ['WE1'] }).returning('id'))[0].id,
   'webhook-endpoints': async (org) => (await foreignEndpoint(org)).id,
   'webhook-deliveries': async (org) => {
     const ep = await foreignEndpoint(org);
@@ -75,7 +77,7 @@ beforeAll(async () => {
     const col = collectionOf(op.path);
     if (fixtures[col] && !foreignIds[col]) foreignIds[col] = await fixtures[col](theirs);
   }
-});
+}, 180_000);
 afterAll(async () => {
   await t.close();
   await closeTestDb();
@@ -107,7 +109,7 @@ describe('route × role × organization matrix', () => {
       }
     }
     expect(wrong).toEqual([]);
-  });
+  }, 180_000);
 
   it('another organization’s records answer 404 to every role that may see its own', async () => {
     const wrong: string[] = [];
@@ -121,7 +123,7 @@ describe('route × role × organization matrix', () => {
       }
     }
     expect(wrong).toEqual([]);
-  });
+  }, 180_000);
 
   it('an API key passes only where the action names a scope, and never on people’s routes', async () => {
     const wrong: string[] = [];
@@ -132,7 +134,7 @@ describe('route × role × organization matrix', () => {
       if (!ok) wrong.push(`${op.method} ${op.path} with key -> ${res.status}`);
     }
     expect(wrong).toEqual([]);
-  });
+  }, 180_000);
 });
 
 describe('key creation: every role × kind × scope', () => {
@@ -151,5 +153,5 @@ describe('key creation: every role × kind × scope', () => {
       }
     }
     expect(wrong).toEqual([]);
-  });
+  }, 180_000);
 });
