@@ -4543,6 +4543,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4552,6 +4554,8 @@ export interface operations {
             /** @description Needs the action audit:read (roles: admin) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4604,6 +4608,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4613,6 +4619,8 @@ export interface operations {
             /** @description Needs the action people:read (roles: admin) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4655,6 +4663,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4664,6 +4674,8 @@ export interface operations {
             /** @description Needs the action people:read (roles: admin) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4710,6 +4722,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4719,6 +4733,8 @@ export interface operations {
             /** @description Needs the action people:manage (roles: admin) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4771,6 +4787,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4780,6 +4798,8 @@ export interface operations {
             /** @description Needs the action people:read (roles: admin) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4829,6 +4849,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4838,6 +4860,8 @@ export interface operations {
             /** @description Needs the action people:manage (roles: admin) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4880,6 +4904,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4889,6 +4915,8 @@ export interface operations {
             /** @description Needs the action people:read (roles: admin) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4936,6 +4964,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -4945,6 +4975,8 @@ export interface operations {
             /** @description Needs the action people:manage (roles: admin) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5067,6 +5099,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5076,6 +5110,8 @@ export interface operations {
             /** @description Needs the action api-keys:read (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5125,6 +5161,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5134,6 +5172,8 @@ export interface operations {
             /** @description Needs the action api-keys:manage (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5176,6 +5216,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5185,6 +5227,8 @@ export interface operations {
             /** @description Needs the action api-keys:read (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5232,6 +5276,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5241,6 +5287,8 @@ export interface operations {
             /** @description Needs the action api-keys:manage (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5292,6 +5340,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5301,6 +5351,8 @@ export interface operations {
             /** @description Needs the action api-keys:manage (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5455,6 +5507,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5464,6 +5518,8 @@ export interface operations {
             /** @description Needs the action profile:read (roles: admin, engineer, integrator, viewer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5508,6 +5564,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5517,6 +5575,8 @@ export interface operations {
             /** @description Needs the action profile:read (roles: admin, engineer, integrator, viewer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5569,6 +5629,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5578,6 +5640,8 @@ export interface operations {
             /** @description Needs the action devices:read (roles: admin, engineer, integrator, viewer; key scope devices:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5627,6 +5691,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5636,6 +5702,8 @@ export interface operations {
             /** @description Needs the action devices:manage (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5678,6 +5746,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5687,6 +5757,8 @@ export interface operations {
             /** @description Needs the action devices:read (roles: admin, engineer, integrator, viewer; key scope devices:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5733,6 +5805,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5742,6 +5816,8 @@ export interface operations {
             /** @description Needs the action devices:manage (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5794,6 +5870,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5803,6 +5881,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5852,6 +5932,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5861,6 +5943,8 @@ export interface operations {
             /** @description Needs the action shop:write (roles: engineer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5903,6 +5987,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5912,6 +5998,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5958,6 +6046,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -5967,6 +6057,8 @@ export interface operations {
             /** @description Needs the action shop:write (roles: engineer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6021,6 +6113,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6030,6 +6124,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6075,6 +6171,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6084,6 +6182,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6148,6 +6248,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6157,6 +6259,8 @@ export interface operations {
             /** @description Needs the action shop:write (roles: engineer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6201,6 +6305,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6210,6 +6316,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6262,6 +6370,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6271,6 +6381,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6320,6 +6432,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6329,6 +6443,8 @@ export interface operations {
             /** @description Needs the action shop:write (roles: engineer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6371,6 +6487,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6380,6 +6498,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6426,6 +6546,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6435,6 +6557,8 @@ export interface operations {
             /** @description Needs the action shop:write (roles: engineer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6486,6 +6610,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6495,6 +6621,8 @@ export interface operations {
             /** @description Needs the action readings:review (roles: engineer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6547,6 +6675,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6556,6 +6686,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6605,6 +6737,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6614,6 +6748,8 @@ export interface operations {
             /** @description Needs the action shop:write (roles: engineer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6656,6 +6792,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6665,6 +6803,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6711,6 +6851,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6720,6 +6862,8 @@ export interface operations {
             /** @description Needs the action shop:write (roles: engineer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6772,6 +6916,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6781,6 +6927,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6843,6 +6991,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6852,6 +7002,8 @@ export interface operations {
             /** @description Needs the action work-orders:write (roles: engineer; key scope work-orders:write) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6861,6 +7013,8 @@ export interface operations {
             /** @description Already posted with a different body */
             409: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6903,6 +7057,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6912,6 +7068,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6958,6 +7116,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -6967,6 +7127,8 @@ export interface operations {
             /** @description Needs the action work-orders:write (roles: engineer; key scope work-orders:write) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7019,6 +7181,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7028,6 +7192,8 @@ export interface operations {
             /** @description Needs the action targets:read (roles: admin, engineer, integrator, viewer; key scope targets:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7080,6 +7246,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7089,6 +7257,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7138,6 +7308,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7147,6 +7319,8 @@ export interface operations {
             /** @description Needs the action shop:write (roles: engineer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7189,6 +7363,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7198,6 +7374,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7243,6 +7421,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7252,6 +7432,8 @@ export interface operations {
             /** @description Needs the action targets:read (roles: admin, engineer, integrator, viewer; key scope targets:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7306,6 +7488,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7315,6 +7499,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7367,6 +7553,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7376,6 +7564,8 @@ export interface operations {
             /** @description Needs the action readings:read (roles: admin, engineer, integrator, viewer; key scope readings:write) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7429,6 +7619,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7438,6 +7630,8 @@ export interface operations {
             /** @description Needs the action readings:write (roles: engineer; key scope readings:write) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7480,6 +7674,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7489,6 +7685,8 @@ export interface operations {
             /** @description Needs the action readings:read (roles: admin, engineer, integrator, viewer; key scope readings:write) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7542,6 +7740,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7551,6 +7751,8 @@ export interface operations {
             /** @description Needs the action readings:write (roles: engineer; key scope readings:write) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7602,6 +7804,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7611,6 +7815,8 @@ export interface operations {
             /** @description Needs the action readings:review (roles: engineer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7653,6 +7859,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7662,6 +7870,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7709,6 +7919,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7718,6 +7930,8 @@ export interface operations {
             /** @description Needs the action readings:review (roles: engineer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7767,6 +7981,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7776,6 +7992,8 @@ export interface operations {
             /** @description Needs the action readings:read (roles: admin, engineer, integrator, viewer; key scope readings:write) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7862,6 +8080,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7871,6 +8091,8 @@ export interface operations {
             /** @description Needs the action control:read (roles: admin, engineer, integrator, viewer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7920,6 +8142,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7929,6 +8153,8 @@ export interface operations {
             /** @description Needs the action control:manage (roles: engineer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7971,6 +8197,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -7980,6 +8208,8 @@ export interface operations {
             /** @description Needs the action control:read (roles: admin, engineer, integrator, viewer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8026,6 +8256,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8035,6 +8267,8 @@ export interface operations {
             /** @description Needs the action control:manage (roles: engineer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8086,6 +8320,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8095,6 +8331,8 @@ export interface operations {
             /** @description Needs the action control:manage (roles: engineer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8144,6 +8382,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8153,6 +8393,8 @@ export interface operations {
             /** @description Needs the action control:read (roles: admin, engineer, integrator, viewer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8202,6 +8444,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8211,6 +8455,8 @@ export interface operations {
             /** @description Needs the action control:read (roles: admin, engineer, integrator, viewer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8263,6 +8509,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8272,6 +8520,8 @@ export interface operations {
             /** @description Needs the action control:read (roles: admin, engineer, integrator, viewer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8314,6 +8564,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8323,6 +8575,8 @@ export interface operations {
             /** @description Needs the action control:read (roles: admin, engineer, integrator, viewer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8374,6 +8628,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8383,6 +8639,8 @@ export interface operations {
             /** @description Needs the action control:manage (roles: engineer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8435,6 +8693,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8444,6 +8704,8 @@ export interface operations {
             /** @description Needs the action readings:read (roles: admin, engineer, integrator, viewer; key scope readings:write) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8503,6 +8765,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8512,6 +8776,8 @@ export interface operations {
             /** @description Needs the action imports:write (roles: engineer, integrator; key scope readings:write) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8554,6 +8820,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8563,6 +8831,8 @@ export interface operations {
             /** @description Needs the action readings:read (roles: admin, engineer, integrator, viewer; key scope readings:write) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8615,6 +8885,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8624,6 +8896,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8673,6 +8947,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8682,6 +8958,8 @@ export interface operations {
             /** @description Needs the action shop:write (roles: engineer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8724,6 +9002,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8733,6 +9013,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8775,6 +9057,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8784,6 +9068,8 @@ export interface operations {
             /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8828,6 +9114,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8837,6 +9125,8 @@ export interface operations {
             /** @description Needs the action events:read (roles: admin, engineer, integrator; key scope events:read) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8889,6 +9179,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8898,6 +9190,8 @@ export interface operations {
             /** @description Needs the action webhooks:read (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8947,6 +9241,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8956,6 +9252,8 @@ export interface operations {
             /** @description Needs the action webhooks:manage (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -8998,6 +9296,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9007,6 +9307,8 @@ export interface operations {
             /** @description Needs the action webhooks:read (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9053,6 +9355,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9062,6 +9366,8 @@ export interface operations {
             /** @description Needs the action webhooks:manage (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9104,6 +9410,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9113,6 +9421,8 @@ export interface operations {
             /** @description Needs the action webhooks:manage (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9164,6 +9474,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9173,6 +9485,8 @@ export interface operations {
             /** @description Needs the action webhooks:manage (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9220,6 +9534,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9229,6 +9545,8 @@ export interface operations {
             /** @description Needs the action webhooks:manage (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9281,6 +9599,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9290,6 +9610,8 @@ export interface operations {
             /** @description Needs the action webhooks:read (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9332,6 +9654,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9341,6 +9665,8 @@ export interface operations {
             /** @description Needs the action webhooks:read (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9388,6 +9714,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9397,6 +9725,8 @@ export interface operations {
             /** @description Needs the action webhooks:manage (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9446,6 +9776,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9455,6 +9787,8 @@ export interface operations {
             /** @description Needs the action webhooks:manage (roles: admin, integrator) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9502,6 +9836,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9511,6 +9847,8 @@ export interface operations {
             /** @description Needs the action queues:read (roles: admin) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9555,6 +9893,8 @@ export interface operations {
             /** @description No valid credentials */
             401: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9564,6 +9904,8 @@ export interface operations {
             /** @description Needs the action overview:read (roles: admin, engineer, integrator, viewer) */
             403: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {
@@ -9696,6 +10038,8 @@ export interface operations {
              */
             503: {
                 headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
                     [name: string]: unknown;
                 };
                 content: {

@@ -1,17 +1,9 @@
-import { InjectQueue } from '@nestjs/bull';
-import { Controller, Get, Inject } from '@nestjs/common';
+import { Controller, Get } from '@nestjs/common';
 import { ApiOperation, ApiServiceUnavailableResponse, ApiTags } from '@nestjs/swagger';
 import { HealthCheck, HealthCheckService, HealthIndicatorService } from '@nestjs/terminus';
-import type { Queue } from 'bull';
-import type { Knex } from 'knex';
 import { Public } from '../common/decorators/public.decorator.js';
-import { KNEX } from '../database/database.module.js';
-import { QUEUES } from '../queues/queues.module.js';
 import { Responds } from '../common/schemas/responds.decorator.js';
-
-function withTimeout<T>(p: Promise<T>, ms: number, what: string): Promise<T> {
-  return Promise.race([p, new Promise<T>((_, reject) => setTimeout(() => reject(new Error(`${what} did not answer within ${ms} ms`)), ms).unref())]);
-}
+import { ReadinessService } from './readiness.service.js';
 
 @ApiTags('health')
 @Public()
@@ -22,8 +14,7 @@ export class HealthController {
   constructor(
     private readonly health: HealthCheckService,
     private readonly indicator: HealthIndicatorService,
-    @Inject(KNEX) private readonly db: Knex,
-    @InjectQueue(QUEUES.heartbeat) private readonly queue: Queue,
+    private readonly readiness: ReadinessService,
   ) {}
 
   @Get('health')
@@ -43,7 +34,7 @@ export class HealthController {
       async () => {
         const ind = this.indicator.check('postgres');
         try {
-          await withTimeout(this.db.raw('select 1'), 2000, 'PostgreSQL');
+          await this.readiness.postgres();
           return ind.up();
         } catch (e) {
           return ind.down({ message: (e as Error).message });
@@ -52,8 +43,8 @@ export class HealthController {
       async () => {
         const ind = this.indicator.check('redis');
         try {
-          const pong = await withTimeout(this.queue.client.ping(), 2000, 'Redis');
-          return pong === 'PONG' ? ind.up() : ind.down({ message: `unexpected reply ${pong}` });
+          await this.readiness.redis();
+          return ind.up();
         } catch (e) {
           return ind.down({ message: (e as Error).message });
         }

@@ -91,6 +91,11 @@ function addProblemResponses(doc: OpenAPIObject): void {
         if (/^[45]\d\d$/.test(code) && resp && typeof resp === 'object' && !('content' in resp)) {
           (resp as Record<string, unknown>).content = problem;
         }
+        // any error may carry Retry-After (429, and 503 while PostgreSQL or Redis is away)
+        if (/^[45]\d\d$/.test(code) && resp && typeof resp === 'object') {
+          const r = resp as { headers?: Record<string, unknown> };
+          r.headers = { ...RETRY_AFTER_HEADER, ...(r.headers ?? {}) };
+        }
       }
     }
   }
