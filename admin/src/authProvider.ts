@@ -43,7 +43,13 @@ export function createAuthProvider({ http, store, apiBase = '/v1', now = Date.no
   };
 
   return {
-    async login(params: { email?: string; password?: string }) {
+    async login(params: { email?: string; password?: string; session?: TokenResponse }) {
+      // an accepted invitation answers with a session: the new person is signed in without a second form
+      if (params.session) {
+        store.write(pickTokens(params.session));
+        me = Promise.resolve(params.session.user);
+        return;
+      }
       const { json } = await http.fetchJson(`${apiBase}/auth/sign-in`, {
         method: 'POST',
         body: JSON.stringify({ email: (params.email ?? '').trim(), password: params.password ?? '' }),

@@ -11,6 +11,9 @@ type Schemas = components['schemas'];
 export type User = Schemas['user.view'];
 export type Invitation = Schemas['invitation.view'];
 export type InvitationState = Invitation['state'];
+export type InvitationPreview = Schemas['invitation.preview'];
+/** The answer to accepting an invitation: the new account, signed in. */
+export type InvitationAccepted = Schemas['invitation.accepted'];
 export type ApiKey = Schemas['api-key.view'];
 export type ApiKeyState = ApiKey['state'];
 export type ApiKeyKind = ApiKey['kind'];

@@ -8,6 +8,8 @@ import type {
   DeliveryDetail,
   EndpointTestResult,
   Invitation,
+  InvitationAccepted,
+  InvitationPreview,
   MaterialSystemDocument,
   MaterialSystemRevision,
   Overview,
@@ -29,7 +31,9 @@ export interface PourgateDataProvider extends DataProvider {
   revokeApiKey(id: string): Promise<{ data: ApiKey }>;
   rotateApiKey(id: string, graceSeconds: number): Promise<{ data: ApiKeyWithSecret }>;
   revokeInvitation(id: string): Promise<{ data: Invitation }>;
-  acceptInvitation(input: AcceptInvitationInput): Promise<{ email: string }>;
+  acceptInvitation(input: AcceptInvitationInput): Promise<InvitationAccepted>;
+  /** What an invitation link offers (shop, role, address, the name the admin typed), before accepting. */
+  lookupInvitation(token: string): Promise<InvitationPreview>;
   materialSystemRevisions(id: string): Promise<{ data: MaterialSystemRevision[]; total: number }>;
   materialSystemDocuments(id: string): Promise<{ data: MaterialSystemDocument[] }>;
   testWebhookEndpoint(id: string): Promise<{ data: EndpointTestResult }>;
@@ -127,7 +131,11 @@ export function createDataProvider(http: HttpClient, apiBase = '/v1'): PourgateD
     },
     async acceptInvitation(input) {
       const { json } = await post('/invitations/accept', input, true);
-      return json as { email: string };
+      return json as InvitationAccepted;
+    },
+    async lookupInvitation(token) {
+      const { json } = await post('/invitations/lookup', { token }, true);
+      return json as InvitationPreview;
     },
   };
 }

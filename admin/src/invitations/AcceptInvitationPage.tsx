@@ -1,7 +1,10 @@
 import CheckCircle from '@mui/icons-material/CheckCircleOutline';
-import { Alert, Box, Button, CircularProgress, TextField, Typography } from '@mui/material';
-import { useState, type ChangeEvent, type FormEvent } from 'react';
-import { useDataProvider } from 'react-admin';
+import { Alert, Box, Button, CircularProgress, Skeleton, TextField, Typography } from '@mui/material';
+import { useEffect, useState, type ChangeEvent, type FormEvent } from 'react';
+import { useDataProvider, useLogin } from 'react-admin';
+import type { InvitationPreview } from '../api/views';
+import { roleLabel } from '../auth/roles';
+import type { TokenResponse } from '../dataProvider/session';
 import { Link as RouterLink, useSearchParams } from 'react-router-dom';
 import { AuthShell } from '../auth/AuthShell';
 import type { PourgateDataProvider } from '../dataProvider';
@@ -29,6 +32,32 @@ export function AcceptInvitationPage() {
   const [busy, setBusy] = useState(false);
   const [doneFor, setDoneFor] = useState<string | null>(null);
   const [spent, setSpent] = useState<string | null>(null);
+  const [preview, setPreview] = useState<InvitationPreview | null>(null);
+  const [looking, setLooking] = useState(!!token);
+  const login = useLogin();
+
+  // what the link offers: which shop, which role, the name the admin typed (prefilled)
+  useEffect(() => {
+    if (!token) return;
+    let live = true;
+    dataProvider
+      .lookupInvitation(token)
+      .then((p) => {
+        if (!live) return;
+        setPreview(p);
+        setValues((v) => (v.name ? v : { ...v, name: p.name ?? '' }));
+      })
+      .catch((err: unknown) => {
+        if (!live) return;
+        if ((err as { status?: number }).status === 410) setSpent((err as Error).message || 'This invitation was already used, withdrawn or has expired. Ask your IT admin for a new one.');
+      })
+      .finally(() => {
+        if (live) setLooking(false);
+      });
+    return () => {
+      live = false;
+    };
+  }, [dataProvider, token]);
 
   if (spent) {
     return (
@@ -84,6 +113,11 @@ export function AcceptInvitationPage() {
     setBusy(true);
     try {
       const res = await dataProvider.acceptInvitation({ token, name: values.name.trim(), password: values.password });
+      if (res.session) {
+        // signed in at once: straight to the overview, no second sign-in
+        await login({ session: res.session as unknown as TokenResponse }, '/');
+        return;
+      }
       setDoneFor(res.email);
     } catch (err) {
       const problem = problemOf(err);
@@ -101,6 +135,14 @@ export function AcceptInvitationPage() {
 
   return (
     <AuthShell heading="Accept your invitation" lead="Choose the name shown to your colleagues and a password for the console.">
+      {looking ? (
+        <Skeleton variant="rounded" height={56} sx={{ mb: 2 }} />
+      ) : preview ? (
+        <Alert severity="info" icon={false} sx={{ mb: 2 }} data-testid="invitation-preview">
+          {preview.invitedBy ? `${preview.invitedBy} invites you` : 'You are invited'} to <strong>{preview.organization.name}</strong> as{' '}
+          <strong>{roleLabel(preview.role)}</strong>, with the address <strong>{preview.email}</strong>.
+        </Alert>
+      ) : null}
       <Box component="form" onSubmit={submit} noValidate aria-label="Accept invitation" sx={{ display: 'grid', gap: 2 }}>
         {failure ? (
           <Alert severity="error" role="alert">
