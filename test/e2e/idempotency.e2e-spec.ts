@@ -114,4 +114,22 @@ describe('Idempotency-Key', () => {
     expect(header(doc.paths['/v1/readings'].post)).toBe(false);
     expect(header(doc.paths['/v1/auth/sign-in'].post)).toBe(false);
   });
+
+  it('keeps a response that carries a secret only sealed, and replays it whole', async () => {
+    const key = randomUUID();
+    const body = { name: `erp ${randomUUID()}`, kind: 'integration', scopes: ['work-orders:write'] };
+    const first = await t.http.post('/v1/api-keys').set('authorization', auth.admin).set('idempotency-key', key).send(body);
+    expect(first.status).toBe(201);
+    const secret = first.body.secret as string;
+    expect(secret).toMatch(/^pg/);
+    const row = await testDb()('idempotency_keys').where({ key }).first('response_body');
+    // the table holds no usable secret: neither the key nor any part of it
+    expect(row.response_body).not.toContain(secret);
+    expect(row.response_body).not.toContain(secret.slice(-24));
+    const again = await t.http.post('/v1/api-keys').set('authorization', auth.admin).set('idempotency-key', key).send(body);
+    expect(again.status).toBe(201);
+    expect(again.headers['idempotent-replayed']).toBe('true');
+    expect(again.headers['cache-control']).toBe('no-store');
+    expect(again.body).toEqual(first.body);
+  });
 });

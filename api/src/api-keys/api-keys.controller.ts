@@ -3,7 +3,7 @@ import { ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { FastifyReply } from 'fastify';
 import type { ApiKeyScope } from '@pourgate/permissions';
 import { Caller, type RequestContext } from '../auth/principal.js';
-import { NoStore } from '../auth/no-store.decorator.js';
+import { NoStore } from '../common/decorators/no-store.decorator.js';
 import { Requires } from '../auth/requires.decorator.js';
 import { IdParam } from '../common/decorators/uuid-param.js';
 import { ListRoute, parseListQuery, setContentRange } from '../common/lists/list-query.js';

@@ -4,7 +4,7 @@ import { ApiOperation, ApiTags, ApiTooManyRequestsResponse } from '@nestjs/swagg
 import { Public } from '../common/decorators/public.decorator.js';
 import { SchemaBody } from '../common/schemas/schema.pipe.js';
 import { Caller, Origin, type RequestContext } from './principal.js';
-import { NoStore } from './no-store.decorator.js';
+import { NoStore } from '../common/decorators/no-store.decorator.js';
 import { Requires } from './requires.decorator.js';
 import { TokensService } from './tokens.service.js';
 import { UsersService } from '../users/users.service.js';

@@ -3,7 +3,7 @@ import { ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { FastifyReply } from 'fastify';
 import type { Role } from '@pourgate/permissions';
 import { Caller, Origin, type RequestContext } from '../auth/principal.js';
-import { NoStore } from '../auth/no-store.decorator.js';
+import { NoStore } from '../common/decorators/no-store.decorator.js';
 import { Requires } from '../auth/requires.decorator.js';
 import { Public } from '../common/decorators/public.decorator.js';
 import { IdParam } from '../common/decorators/uuid-param.js';

@@ -12,7 +12,7 @@ import { ProblemException } from '../common/problems.js';
 import type { Env } from '../config/env.js';
 import { KNEX } from '../database/database.module.js';
 import { MailService } from '../mail/mail.service.js';
-import { SecretBox, newWebhookSecret } from './secret-box.js';
+import { SecretBox, newWebhookSecret } from '../common/secret-box.js';
 import { secretsKeysPrevious } from '../config/env.js';
 import { AllowList, checkWebhookUrl } from './ssrf-guard.js';
 import { plainStatus } from './plain-reason.js';

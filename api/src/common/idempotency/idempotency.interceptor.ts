@@ -1,4 +1,5 @@
 import { applyDecorators, type CallHandler, type ExecutionContext, Inject, Injectable, type NestInterceptor, SetMetadata } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
 import { Reflector } from '@nestjs/core';
 import { ApiExtension } from '@nestjs/swagger';
 import type { FastifyReply, FastifyRequest } from 'fastify';
@@ -6,8 +7,11 @@ import type { Knex } from 'knex';
 import { createHash } from 'node:crypto';
 import { lastValueFrom, type Observable, of } from 'rxjs';
 import type { Principal } from '../../auth/principal.js';
+import { type Env, secretsKeysPrevious } from '../../config/env.js';
 import { KNEX } from '../../database/database.module.js';
+import { NO_STORE } from '../decorators/no-store.decorator.js';
 import { IS_PUBLIC } from '../decorators/public.decorator.js';
+import { SecretBox } from '../secret-box.js';
 import { isMultipart } from '../http/multipart.js';
 import { malformed, ProblemException, validationProblem } from '../problems.js';
 
@@ -21,6 +25,9 @@ const SKIP = 'pourgate:idempotency-skip';
 /** An expired key, or one held by a request that died long ago: free to take again. */
 const STALE = `(expires_at < now() OR (state = 'in_flight' AND created_at < now() - make_interval(secs => ${IN_FLIGHT_TAKEOVER_S})))`;
 const SKIP_REQUEST = Symbol('not handled here');
+/** Keys of a stored response body that is sealed (it carried a secret). */
+const SEALED = '$pourgateSealed';
+const SEALED_VERSION = '$pourgateKeyVersion';
 /**
  * Marks a POST that is idempotent by its own means (a reading's (device, clientReadingId), an
  * imported file's hash): the Idempotency-Key header is ignored there.
@@ -68,7 +75,30 @@ interface KeyRow {
  */
 @Injectable()
 export class IdempotencyInterceptor implements NestInterceptor {
-  constructor(@Inject(KNEX) private readonly db: Knex, private readonly reflector: Reflector) {}
+  private readonly box: SecretBox;
+
+  constructor(@Inject(KNEX) private readonly db: Knex, private readonly reflector: Reflector, config: ConfigService<Env, true>) {
+    this.box = new SecretBox(config.get('SECRETS_KEY', { infer: true }), secretsKeysPrevious(config.get('SECRETS_KEY_PREVIOUS', { infer: true })));
+  }
+
+  /**
+   * A response that carries a secret (a new key, a webhook secret, tokens: routes marked @NoStore) is
+   * kept sealed, so the idempotency table never holds a usable secret in plain text.
+   */
+  private storedBody(body: unknown, secret: boolean): string | null {
+    if (body === undefined) return null;
+    const json = JSON.stringify(body);
+    if (!secret) return json;
+    const { sealed, version } = this.box.seal(json);
+    return JSON.stringify({ [SEALED]: sealed, [SEALED_VERSION]: version });
+  }
+
+  private replayedBody(stored: string | null): unknown {
+    if (stored === null) return undefined;
+    const parsed = JSON.parse(stored) as Record<string, unknown>;
+    if (parsed && typeof parsed === 'object' && typeof parsed[SEALED] === 'string') return JSON.parse(this.box.open(parsed[SEALED] as string, parsed[SEALED_VERSION] as string));
+    return parsed;
+  }
 
   /**
    * What identifies the request besides method and URL. A multipart body is not parsed yet when the
@@ -102,7 +132,7 @@ export class IdempotencyInterceptor implements NestInterceptor {
       void reply.status(held.response_status!);
       void reply.header(REPLAYED_HEADER, 'true');
       for (const [h, v] of Object.entries(held.response_headers ?? {})) void reply.header(h, v);
-      return of(held.response_body === null ? undefined : JSON.parse(held.response_body));
+      return of(this.replayedBody(held.response_body));
     }
     try {
       const body = await lastValueFrom(next.handle(), { defaultValue: undefined });
@@ -111,7 +141,7 @@ export class IdempotencyInterceptor implements NestInterceptor {
         const v = reply.getHeader(h);
         if (typeof v === 'string') headers[h] = v;
       }
-      await this.db('idempotency_keys').where({ scope, key }).update({ state: 'done', response_status: reply.statusCode, response_headers: JSON.stringify(headers), response_body: body === undefined ? null : JSON.stringify(body) });
+      await this.db('idempotency_keys').where({ scope, key }).update({ state: 'done', response_status: reply.statusCode, response_headers: JSON.stringify(headers), response_body: this.storedBody(body, this.reflector.getAllAndOverride<boolean>(NO_STORE, targets) ?? false) });
       return of(body);
     } catch (e) {
       await this.db('idempotency_keys').where({ scope, key }).del().catch(() => undefined);

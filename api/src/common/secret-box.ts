@@ -19,7 +19,8 @@ function deriveKey(secretsKey: string): BoxKey {
 const legacyKey = (secretsKey: string) => createHash('sha256').update(`pourgate-secret-box:${secretsKey}`).digest();
 
 /**
- * Webhook signing secrets must be readable to sign, so they are stored encrypted (AES-256-GCM)
+ * Secrets that must be readable again (webhook signing secrets, a stored response that carried a
+ * key) are stored encrypted (AES-256-GCM)
  * with a key derived by HKDF from SECRETS_KEY, never in plain text. Each sealed secret is stored with
  * the version of the key that sealed it: after SECRETS_KEY changes, the former value goes into
  * SECRETS_KEY_PREVIOUS and old rows still open, while new ones are sealed with the new key.
