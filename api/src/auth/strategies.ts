@@ -7,23 +7,17 @@ import { ApiKeysService } from '../api-keys/api-keys.service.js';
 import type { Env } from '../config/env.js';
 import { API_KEY_HEADER } from '../openapi/openapi.js';
 import type { Principal } from './principal.js';
-import { TokensService } from './tokens.service.js';
-import { UsersRepository } from '../users/users.repository.js';
+import { AccountsService } from '../users/accounts.service.js';
+import { type AccessClaims, TokensService } from './tokens.service.js';
 
-export interface AccessClaims {
-  sub: string;
-  org: string;
-  role: string;
-  typ: 'access';
-  /** The session (refresh-token family) the token belongs to: signing out or a password change ends it. */
-  sid: string;
-}
+export type { AccessClaims };
+
 
 /** People: a short-lived access JWT in `Authorization: Bearer`. The user row is re-read, so a
  *  disabled account or a changed role takes effect at once, not when the token expires. */
 @Injectable()
 export class JwtStrategy extends PassportStrategy(JwtStrategyBase, 'jwt') {
-  constructor(config: ConfigService<Env, true>, private readonly users: UsersRepository, private readonly tokens: TokensService) {
+  constructor(config: ConfigService<Env, true>, private readonly users: AccountsService, private readonly tokens: TokensService) {
     super({
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
       secretOrKey: config.get('JWT_SECRET', { infer: true }),

@@ -10,9 +10,8 @@ import { AuditService } from '../audit/audit.service.js';
 import { ProblemException } from '../common/problems.js';
 import type { Env } from '../config/env.js';
 import { KNEX } from '../database/database.module.js';
-import { UserRow, UsersRepository } from '../users/users.repository.js';
+import { AccountsService, type UserRow } from '../users/accounts.service.js';
 import { actionsOf } from '@pourgate/permissions';
-import type { AccessClaims } from './strategies.js';
 
 export const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
 
@@ -48,6 +47,15 @@ const { RateLimiterMemory, RateLimiterRedis } = rateLimiterFlexible;
 const BAD_CREDENTIALS = 'The e-mail or the password is not right, or the account is disabled.';
 
 /** Sign-in, refresh-token rotation (with reuse detection) and sign-out. */
+export interface AccessClaims {
+  sub: string;
+  org: string;
+  role: string;
+  typ: 'access';
+  /** The session (refresh-token family) the token belongs to: signing out or a password change ends it. */
+  sid: string;
+}
+
 @Injectable()
 export class TokensService implements OnApplicationShutdown {
   private readonly logger = new Logger('Auth');
@@ -61,7 +69,7 @@ export class TokensService implements OnApplicationShutdown {
   constructor(
     @Inject(KNEX) private readonly db: Knex,
     private readonly jwt: JwtService,
-    private readonly users: UsersRepository,
+    private readonly users: AccountsService,
     private readonly audit: AuditService,
     private readonly config: ConfigService<Env, true>,
   ) {
