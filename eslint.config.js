@@ -24,6 +24,8 @@ export default tseslint.config(
       '@typescript-eslint/no-empty-object-type': 'off',
       '@typescript-eslint/no-unsafe-declaration-merging': 'off',
       'no-empty': ['error', { allowEmptyCatch: true }],
+      // a variable a closure reads, assigned once after the closure is made, stays `let`
+      'prefer-const': ['error', { ignoreReadBeforeAssign: true }],
       'no-control-regex': 'off',
       'no-useless-escape': 'off',
     },

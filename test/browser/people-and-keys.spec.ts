@@ -1,5 +1,5 @@
 // API keys, people, invitations and the audit log (admin and integrator).
-import { test, expect, check, BASE_URL, PEOPLE, signIn, menuEntries, shot, apiToken, until, invitationToken } from './support.js';
+import { test, expect, check, BASE_URL, PEOPLE, signIn, menuEntries, shot, apiToken, invitationToken } from './support.js';
 
 /** The admin issues a key, sees the secret once, the secret works, then revokes it and it stops. */
 test('admin issues and revokes key', async ({ newPage }) => {

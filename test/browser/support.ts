@@ -120,7 +120,6 @@ export async function apiToken(who: Role): Promise<string> {
 }
 
 /** A JSON call to the API with a person's token. */
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
 export async function apiCall(token: string, method: string, route: string, body?: unknown): Promise<{ status: number; json: any }> {
   const res = await fetch(`${BASE_URL}/v1${route}`, {
     method,
@@ -132,7 +131,7 @@ export async function apiCall(token: string, method: string, route: string, body
   try {
     json = text ? JSON.parse(text) : null;
   } catch {
-    json = null;
+    // not JSON: json stays null
   }
   return { status: res.status, json };
 }

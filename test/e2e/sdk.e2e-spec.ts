@@ -213,7 +213,7 @@ describe('iteration', () => {
 
   it('the event feed iterator returns each event once, in order, and resumes from its cursor', async () => {
     const wanted = new Set(posted.map((r) => r.id));
-    let got: PourgateEvent[] = [];
+    const got: PourgateEvent[] = [];
     let cursor: string | undefined;
     const deadline = Date.now() + 15_000;
     while ([...wanted].some((id) => !got.some((e) => (e.data as { readingId?: string }).readingId === id)) && Date.now() < deadline) {

@@ -133,10 +133,9 @@ async function verify(ing: Ingest, since: number): Promise<{ lost: number; dupli
     if (!got.includes(rid)) lost++;
     if (got.length > 1) duplicates += got.length - 1;
   }
-  let pending = -1;
   const until = since + JUDGE_DEADLINE_MS;
   for (;;) {
-    pending = Number((await testDb()('readings').whereIn('id', [...ing.acked.values()]).where('status', 'pending').count({ n: '*' }))[0]!.n);
+    const pending = Number((await testDb()('readings').whereIn('id', [...ing.acked.values()]).where('status', 'pending').count({ n: '*' }))[0]!.n);
     if (pending === 0) return { lost, duplicates, judgedAfterMs: Date.now() - since, pending };
     if (Date.now() > until) {
       // past the target: keep watching a while, so the report can say by how much it missed

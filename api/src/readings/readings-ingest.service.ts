@@ -65,7 +65,7 @@ export class ReadingsIngestService {
     const out: NewReading[] = [];
     items.forEach((r, i) => {
       const p = at(i);
-      let deviceId = r.deviceId ?? boundDevice;
+      const deviceId = r.deviceId ?? boundDevice;
       if (boundDevice && r.deviceId && r.deviceId !== boundDevice) errors.push({ pointer: `${p}/deviceId`, detail: 'differs from the device this key is bound to', code: 'conflicting' });
       if (!deviceId) errors.push({ pointer: `${p}/deviceId`, detail: 'is required unless the key is bound to a device', code: 'required' });
       else if (!devices.has(deviceId)) errors.push({ pointer: `${p}/deviceId`, detail: 'no device with that id in your organization', code: 'reference' });

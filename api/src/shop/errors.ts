@@ -1,5 +1,5 @@
 import { BatchingInputError, translate } from '@pourgate/batching';
-import { ProblemException, validationProblem, type FieldError } from '../common/problems.js';
+import { ProblemException, validationProblem } from '../common/problems.js';
 
 /**
  * Runs a computation and turns its BatchingInputError into a 422 whose pointers name the request's

@@ -1,6 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
 import fs from 'node:fs';
-import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { ACTIONS, actionsOf, API_KEY_SCOPES, DEVICE_KEY_SCOPES, KEY_SCOPE_GRANTS, matrixMarkdown, refusedScopes, roleAllows, ROLES } from './index.js';
 

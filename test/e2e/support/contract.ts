@@ -48,7 +48,6 @@ export class ResponseContract {
     if (method === 'head' || method === 'options') return null;
     const route = r.route;
     const contentType = String(r.headers['content-type'] ?? '').split(';')[0]!.trim().toLowerCase();
-    let op: OperationDoc | undefined;
     let name = `${r.method} ${r.url}`;
     if (route === undefined || route === '*' || route === '/*') {
       // no route matched (404, an undecodable URL): only the problem body is checked
@@ -57,7 +56,7 @@ export class ResponseContract {
     }
     if (!route.startsWith('/v1/') || OUTSIDE_THE_DOCUMENT.has(route)) return null;
     const template = route.replace(/:([A-Za-z0-9_]+)/g, '{$1}');
-    op = this.doc.paths[template]?.[method];
+    const op: OperationDoc | undefined = this.doc.paths[template]?.[method];
     name = `${r.method} ${template}${op?.operationId ? ` (${op.operationId})` : ''}`;
     if (!op) return `${name}: the route is not in the OpenAPI document (document it: @Responds / @ListRoute on the controller method)`;
     const responses = op.responses ?? {};
