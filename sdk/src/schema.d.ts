@@ -2335,9 +2335,29 @@ export interface components {
             }[];
             /** @description Rejected readings not waived (upheld ones included) */
             openRejections: number;
+            /** @description The latest settled, judged mass of each part (null: not weighed), and the A:B ratio error they make against the batch's targets */
+            weighed: {
+                partA: components["schemas"]["batch-release-check.view.weighedMass"];
+                partB: components["schemas"]["batch-release-check.view.weighedMass"];
+                pigment: components["schemas"]["batch-release-check.view.weighedMass"];
+                mixed: components["schemas"]["batch-release-check.view.weighedMass"];
+                /** @description e = (m_A / m_B) ÷ (t_A / t_B) − 1, percent; null until both parts are weighed above zero */
+                ratioErrorPercent: number | null;
+            };
+            readings: {
+                total: number;
+                rejected: number;
+            };
         };
         /** @enum {unknown} */
         "batch-release-check.view.item": "part_a" | "part_b" | "pigment" | "component_temperature" | "mold_temperature" | "ambient_temperature" | "humidity" | "mix_start" | "pour" | "demold";
+        "batch-release-check.view.weighedMass": {
+            massKg: number;
+            /** Format: uuid */
+            readingId: string;
+            /** Format: date-time */
+            receivedAt: string;
+        } | null;
         /** The targets stored with a batch */
         "batch-targets.view": {
             /** Format: uuid */

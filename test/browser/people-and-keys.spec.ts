@@ -48,6 +48,9 @@ test('admin issues and revokes key', async ({ newPage }) => {
   await confirm.getByText(`Revoke “${name}”?`).waitFor();
   await shot(page, 'api-key-revoke-confirm');
   await confirm.getByRole('button', { name: 'Revoke key' }).click();
+  // revoked keys leave the list; "Show revoked keys" brings them back, marked
+  await row.waitFor({ state: 'detached' });
+  await page.getByTestId('show-revoked').check();
   await row.getByText('Revoked').waitFor();
   await shot(page, 'api-key-revoked');
 
@@ -85,8 +88,12 @@ test('admin rotates key with grace', async ({ newPage }) => {
   await shot(page, 'api-key-rotated-secret');
   await page.getByTestId('secret-stored').check();
   await page.getByTestId('secret-done').click();
-  await oldRow.getByText('Retiring').waitFor();
-  await oldRow.getByText(/Works until/).waitFor();
+  // one row for the key: the new secret's prefix, and the old one named as still accepted until the grace ends
+  const keyRow = page.getByRole('row', { name: new RegExp(`${name}[\\s\\S]*${newSecret.slice(0, 16)}`) });
+  await keyRow.getByTestId('grace-secret').waitFor();
+  check((await keyRow.getByTestId('grace-secret').innerText()).includes(oldSecret.slice(0, 16)), 'the row does not name the old secret in its grace period');
+  check(/still accepted until/.test(await keyRow.getByTestId('grace-secret').innerText()), 'the grace period has no end shown');
+  check((await page.getByRole('row', { name: new RegExp(name) }).count()) === 1, 'a rotated key shows as more than one row');
 
   for (const [which, secret] of [['old', oldSecret], ['new', newSecret]]) {
     const r = await fetch(`${BASE_URL}/v1/devices`, { headers: { 'X-Api-Key': secret } });
@@ -94,11 +101,13 @@ test('admin rotates key with grace', async ({ newPage }) => {
   }
   await shot(page, 'api-key-grace');
 
-  // tidy up: revoke both through the console
-  for (const row of [oldRow, page.getByRole('row', { name: new RegExp(`${name}[\\s\\S]*${newSecret.slice(0, 16)}`) })]) {
-    await row.getByRole('button', { name: `Revoke ${name}` }).click();
-    await page.getByRole('dialog').getByRole('button', { name: 'Revoke key' }).click();
-    await row.getByText('Revoked').waitFor();
+  // revoking ends every secret of the key at once, the old one in its grace period too
+  await keyRow.getByRole('button', { name: `Revoke ${name}` }).click();
+  await page.getByRole('dialog').getByRole('button', { name: 'Revoke key' }).click();
+  await keyRow.waitFor({ state: 'detached' });
+  for (const [which, secret] of [['old', oldSecret], ['new', newSecret]]) {
+    const r = await fetch(`${BASE_URL}/v1/devices`, { headers: { 'X-Api-Key': secret } });
+    expect(r.status, `GET /v1/devices with the ${which} secret after the revoke`).toEqual(401);
   }
 });
 
@@ -176,9 +185,14 @@ test('admin reads people and audit', async ({ newPage }) => {
   await page.locator('[data-menu-entry="audit-events"]').click();
   const first = page.locator('tbody tr').first();
   await first.waitFor();
-  await page.getByText('auth.signed_in').first().waitFor();
-  await first.click();
-  await page.getByTestId('audit-details').first().waitFor();
+  // actions read in plain words; the raw code is kept for the details
+  const signedIn = page.getByRole('row', { name: /Signed in/ }).first();
+  await signedIn.waitFor();
+  check(!(await page.locator('tbody').innerText()).includes('auth.signed_in'), 'the audit list shows raw action codes');
+  await signedIn.getByRole('button', { name: /^Details of Signed in/ }).click();
+  const details = page.getByRole('dialog').getByTestId('audit-details');
+  await details.waitFor();
+  check((await details.innerText()).includes('auth.signed_in'), 'the details do not give the action code');
   await shot(page, 'audit-log');
 });
 

@@ -63,6 +63,7 @@ export type DeliveryStatus = WebhookDelivery['status'];
 export type DeliveryDetail = Schemas['webhook-delivery.detail'];
 
 export type Overview = Schemas['overview.view'];
+export type ReleaseCheck = Schemas['batch-release-check.view'];
 export type OverviewQuery = Schemas['overview.query'];
 
 type MeAnswer = operations['Auth_me']['responses'] extends { 200: { content: { 'application/json': infer T } } } ? T : MeFallback;

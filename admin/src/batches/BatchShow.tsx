@@ -17,24 +17,21 @@ import { monoFont, palette } from '../theme';
 import { BatchStateChip } from './BatchList';
 import { CautionList, ComponentTable, ProcessFigures, TargetSummary, WarningList, massDecimals } from './TargetFigures';
 import { ToleranceBars, type BarRow } from './ToleranceBars';
-import type { BatchTransition as Transition, TargetsView } from '../api/views';
+import type { BatchTransition as Transition, ReleaseCheck, TargetsView } from '../api/views';
 import { BATCH_STATE, batchTitle, shortRef, type Batch, } from './labels';
 import { readableReason } from './timeline';
-import { ratioError, weighedMasses } from './weighed';
 
 export function useBatchTargets(id: string | undefined) {
   // GET /v1/batches/{id}/targets, through the data provider (its getOne appends the last segment)
   return useGetOne<TargetsView & { id: string }>(`batches/${id}`, { id: 'targets' }, { enabled: !!id });
 }
 
-/** What the batch still needs before release, as the API decides it (GET /v1/batches/{id}/release-check). */
-interface ReleaseCheck {
-  ready: boolean;
-  missing: { item: string; problem: string; message: string }[];
-  openRejections: number;
-}
-function useReleaseCheck(id: string | undefined, enabled: boolean) {
-  return useGetOne<ReleaseCheck & { id: string }>(`batches/${id}`, { id: 'release-check' }, { enabled: !!id && enabled });
+/**
+ * What was weighed and what the batch still needs before release, as the API decides it
+ * (GET /v1/batches/{id}/release-check): the console computes neither.
+ */
+function useReleaseCheck(id: string | undefined) {
+  return useGetOne<ReleaseCheck & { id: string }>(`batches/${id}`, { id: 'release-check' }, { enabled: !!id });
 }
 
 /** The missing items, listed before the release button is pressed. */
@@ -73,8 +70,8 @@ function Section({ title, children, actions, testId }: { title: string; children
   );
 }
 
-function barRows(t: TargetsView, readings: Reading[]): { rows: BarRow[]; error: number | null } {
-  const w = weighedMasses(readings);
+function barRows(t: TargetsView, weighed: ReleaseCheck['weighed'] | undefined): { rows: BarRow[]; error: number | null } {
+  const w = { A: weighed?.partA?.massKg, B: weighed?.partB?.massKg, pigment: weighed?.pigment?.massKg };
   const d = massDecimals(t);
   const factor = (q: { value: number; si?: { value: number } }) => (q.si && q.si.value !== 0 ? q.value / q.si.value : 1);
   const { A, B, pigment } = t.components;
@@ -82,8 +79,8 @@ function barRows(t: TargetsView, readings: Reading[]): { rows: BarRow[]; error: 
   const toDisplay = (kg: number | undefined) => (kg === undefined ? undefined : kg * f);
   const tol = t.ratioTolerancePercent / 100;
   const rows: BarRow[] = [
-    { label: 'Part A', note: A.side ? `${A.side} side` : undefined, unit: A.mass.unit, target: A.mass.value, low: A.toleranceBand?.low.value, high: A.toleranceBand?.high.value, measured: toDisplay(w.massKg.A), decimals: d, swatch: palette.partA },
-    { label: 'Part B', note: B.side ? `${B.side} side` : undefined, unit: B.mass.unit, target: B.mass.value, low: B.toleranceBand?.low.value, high: B.toleranceBand?.high.value, measured: toDisplay(w.massKg.B), decimals: d, swatch: palette.partB },
+    { label: 'Part A', note: A.side ? `${A.side} side` : undefined, unit: A.mass.unit, target: A.mass.value, low: A.toleranceBand?.low.value, high: A.toleranceBand?.high.value, measured: toDisplay(w.A), decimals: d, swatch: palette.partA },
+    { label: 'Part B', note: B.side ? `${B.side} side` : undefined, unit: B.mass.unit, target: B.mass.value, low: B.toleranceBand?.low.value, high: B.toleranceBand?.high.value, measured: toDisplay(w.B), decimals: d, swatch: palette.partB },
   ];
   if (pigment.mass.value > 0) {
     rows.push({
@@ -93,12 +90,13 @@ function barRows(t: TargetsView, readings: Reading[]): { rows: BarRow[]; error: 
       target: pigment.mass.value,
       low: pigment.mass.value * (1 - tol),
       high: pigment.mass.value * (1 + tol),
-      measured: toDisplay(w.massKg.pigment),
+      measured: toDisplay(w.pigment),
       decimals: d,
       swatch: '#3a3f44',
     });
   }
-  return { rows, error: ratioError(w.massKg.A, w.massKg.B, t.weightRatio) };
+  const e = weighed?.ratioErrorPercent;
+  return { rows, error: e === null || e === undefined ? null : e / 100 };
 }
 
 function Timeline({ items }: { items: Transition[] }) {
@@ -231,15 +229,13 @@ function BatchShow() {
   const { data: transitions = [] } = useGetList<Transition>(`batches/${batch?.id}/transitions`, { pagination: { page: 1, perPage: 200 }, sort: { field: 'at', order: 'ASC' } }, { enabled: !!batch });
   const canReview = useHolds('readings:review');
   const refresh = useRefresh();
-  const inReview = !!batch && ['weighing', 'mixed', 'curing', 'on_hold'].includes(batch.state);
-  const { data: releaseCheck } = useReleaseCheck(batch?.id, inReview);
+  const { data: releaseCheck } = useReleaseCheck(batch?.id);
 
   if (error) return <Alert severity="error">{(error as Error).message}</Alert>;
   if (isPending || !batch) return <Skeleton variant="rounded" height={320} sx={{ mt: 2 }} />;
 
-  const open = readings.filter((r) => r.status === 'rejected' && r.review?.decision !== 'waive');
   const releasable = canReview && ['weighing', 'mixed', 'curing', 'on_hold'].includes(batch.state);
-  const bars = targets ? barRows(targets, readings) : null;
+  const bars = targets ? barRows(targets, releaseCheck?.weighed) : null;
 
   return (
     <Box sx={{ maxWidth: 1240 }}>
@@ -270,7 +266,7 @@ function BatchShow() {
           <Button component={Link} to={`/batches/${batch.id}/pour-sheet`} variant="outlined" startIcon={<PrintOutlined />} data-testid="open-pour-sheet">
             Pour sheet
           </Button>
-          {releasable ? <ReleaseButton batch={batch} openRejections={open.length} ready={releaseCheck?.ready ?? false} onDone={refresh} /> : null}
+          {releasable ? <ReleaseButton batch={batch} openRejections={releaseCheck?.openRejections ?? 0} ready={releaseCheck?.ready ?? false} onDone={refresh} /> : null}
         </Box>
       </Box>
       {releasable ? <MissingBeforeRelease check={releaseCheck} /> : null}
@@ -302,7 +298,7 @@ function BatchShow() {
                       Readings
                     </Typography>
                     <Typography variant="body1">
-                      {readings.length} ({readings.filter((r) => r.status === 'rejected').length} rejected)
+                      {releaseCheck ? `${releaseCheck.readings.total} (${releaseCheck.readings.rejected} rejected)` : '…'}
                     </Typography>
                   </Box>
                 </Box>

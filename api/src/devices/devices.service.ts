@@ -88,11 +88,23 @@ function massKg(q: Quantity | null | undefined, pointer: string, errors: FieldEr
 export class DevicesService {
   constructor(@Inject(KNEX) private readonly db: Knex, private readonly audit: AuditService) {}
 
-  base(orgId: string, db: Knex | Knex.Transaction = this.db) {
+  private base(orgId: string, db: Knex | Knex.Transaction = this.db) {
     return db('devices')
       .leftJoin('stations', 'stations.id', 'devices.station_id')
       .where('devices.organization_id', orgId)
       .select('devices.*', 'stations.code as station_code', 'stations.name as station_name');
+  }
+
+  /** Which of these ids are devices of the organization. */
+  async existingIds(orgId: string, ids: readonly string[]): Promise<Set<string>> {
+    if (!ids.length) return new Set();
+    const rows: { id: string }[] = await this.db('devices').where({ organization_id: orgId }).whereIn('id', ids).select('id');
+    return new Set(rows.map((d) => d.id));
+  }
+
+  /** What judging needs to know of a device: its capacity and when its calibration is due. */
+  judgingFacts(orgId: string, id: string, db: Knex | Knex.Transaction = this.db): Promise<{ capacity_kg: number | null; calibration_due: Date | string | null } | undefined> {
+    return db('devices').where({ organization_id: orgId, id }).first('capacity_kg', 'calibration_due');
   }
 
   async list(c: RequestContext, q: ListQuery) {

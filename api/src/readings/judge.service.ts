@@ -51,7 +51,7 @@ export class JudgeService {
     const isPart = isMass && (r.subject === 'part_a' || r.subject === 'part_b');
     const needsBoth = isMass && (r.subject === 'pigment' || r.subject === 'mixed');
     const [device, batch, otherPartMassKg, partA, partB] = await Promise.all([
-      this.devices.base(orgId, trx).where('devices.id', r.device_id).first('devices.capacity_kg', 'devices.calibration_due'),
+      this.devices.judgingFacts(orgId, r.device_id, trx),
       this.batches.judgingFacts(trx, orgId, r.batch_id),
       isPart ? this.repo.otherPartMass(trx, r) : null,
       needsBoth ? this.repo.latestMass(trx, r, 'part_a') : null,

@@ -58,7 +58,7 @@ export class ReadingsIngestService {
     const batchIds = [...new Set(items.map((r) => r.batchId))];
     // each module's rows through its own service: side by side, ids only
     const [devices, batches] = await Promise.all([
-      deviceIds.length ? this.devices.base(orgId).whereIn('devices.id', deviceIds).clearSelect().select('devices.id').then((rows: { id: string }[]) => new Set(rows.map((d) => d.id))) : new Set<string>(),
+      this.devices.existingIds(orgId, deviceIds),
       this.batches.existingIds(orgId, batchIds),
     ]);
     const now = Date.now();

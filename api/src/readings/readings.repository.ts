@@ -139,6 +139,23 @@ export class ReadingsRepository {
    * For the release check: each (quantity, subject) of the batch with its latest judged reading
    * (unstable ones set aside), whether one is still pending, and the rejections not waived.
    */
+  /**
+   * What was weighed for a batch: the latest settled, judged (not `unused`) mass of each part, and how
+   * many readings the batch has, how many rejected.
+   */
+  async weighed(db: Knex | Knex.Transaction, orgId: string, batchId: string) {
+    const latest: { subject: ReadingSubject; value_si: number; id: string; received_at: Date }[] = await db('readings')
+      .where({ organization_id: orgId, batch_id: batchId, quantity: 'mass', stable: true })
+      .whereIn('status', ['accepted', 'rejected'])
+      .distinctOn('subject')
+      .orderBy([{ column: 'subject' }, { column: 'received_at', order: 'desc' }, { column: 'id', order: 'desc' }])
+      .select('subject', 'value_si', 'id', 'received_at');
+    const [counts] = await db('readings')
+      .where({ organization_id: orgId, batch_id: batchId })
+      .select(db.raw('count(*)::int AS total'), db.raw("count(*) FILTER (WHERE status = 'rejected')::int AS rejected"));
+    return { latest, total: Number(counts?.total ?? 0), rejected: Number(counts?.rejected ?? 0) };
+  }
+
   async releaseFacts(trx: Knex | Knex.Transaction, orgId: string, batchId: string) {
     const latest: { quantity: ReadingQuantity; subject: ReadingSubject; status: 'accepted' | 'rejected'; review_decision: 'waive' | 'uphold' | null }[] = await trx('readings')
       .where({ organization_id: orgId, batch_id: batchId })

@@ -1,6 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
-import { checkRelease, requiredForRelease, type ItemRecord, type ReleaseItem, type ReleaseRequirement } from '@pourgate/batching';
+import { checkRelease, ratioError, requiredForRelease, type ItemRecord, type ReleaseItem, type ReleaseRequirement } from '@pourgate/batching';
 import { AuditService } from '../audit/audit.service.js';
 import { actorOf, type RequestContext } from '../auth/principal.js';
 import { BatchesService } from '../batches/batches.service.js';
@@ -83,7 +83,23 @@ export class ReviewService {
       if (!seen || (!ok(seen) && ok(record))) latest.set(item, record);
     }
     const pending = new Set(facts.pending.map((p) => itemOf(p.quantity, p.subject)).filter((x): x is ReleaseItem => x !== null));
-    return { batchId, state: batch.state, ...checkRelease(required, latest, pending, facts.openRejections) };
+    const w = await this.repo.weighed(db, orgId, batchId);
+    const mass = (subject: string) => {
+      const r = w.latest.find((x) => x.subject === subject);
+      return r ? { massKg: Number(r.value_si), readingId: r.id, receivedAt: r.received_at.toISOString() } : null;
+    };
+    const a = mass('part_a');
+    const b = mass('part_b');
+    const weightRatio = targets?.weightRatio as { a: number; b: number } | undefined;
+    // the same definition the judge uses: e = (m_A / m_B) ÷ (t_A / t_B) − 1, with both parts above zero
+    const error = a && b && a.massKg > 0 && b.massKg > 0 && weightRatio ? ratioError(a.massKg, b.massKg, weightRatio) : null;
+    return {
+      batchId,
+      state: batch.state,
+      ...checkRelease(required, latest, pending, facts.openRejections),
+      weighed: { partA: a, partB: b, pigment: mass('pigment'), mixed: mass('mixed'), ratioErrorPercent: error === null ? null : Math.round(error * 1e6) / 1e4 },
+      readings: { total: w.total, rejected: w.rejected },
+    };
   }
 
   /**
