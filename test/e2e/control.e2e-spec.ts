@@ -5,6 +5,7 @@ import { closeTestDb, makeOrg, type OrgFixture, testDb, tokensFor } from './supp
 import { startTestApp, type TestApp } from './support/app.js';
 import { expectProblem, flexSystem } from './support/shop.js';
 import { seedControlDemo } from '../../seeds/control-demo.js';
+import { schemaRegistry } from '../../api/src/common/schemas/schema-registry.js';
 
 // Checks: limits x̄ ± 2.660·MR̄ and the moving-range limit 3.267·MR̄ (NIST/SEMATECH e-Handbook
 // §6.3.2.2); a point beyond 3σ (Western Electric rule 1) and eight in a row on one side of the centre
@@ -136,6 +137,8 @@ describe('signals', () => {
     spikeSignal = list.body[0].id;
     const ev = await testDb()('events').where({ organization_id: org.id, type: 'drift.detected', subject_id: spikeSignal }).first('payload');
     expect(ev.payload).toMatchObject({ signalId: spikeSignal, rule: 'WE1', readingId: spikeReading, metric: 'component_temperature_a_c' });
+    // the payload is what schemas/event.drift.detected.schema.json promises webhook receivers
+    expect(schemaRegistry().validate('event.drift.detected', ev.payload)).toEqual([]);
   });
 
   it('eight in a row above the centre raise WE4 on the eighth; a ninth raises nothing more', async () => {
@@ -160,7 +163,9 @@ describe('signals', () => {
     expect(res.body.acknowledged).toBe(true);
     expect(res.body.acknowledgement.note).toBe('Drum heater left on over lunch; switched off.');
     expect(await testDb()('audit_events').where({ organization_id: org.id, action: 'control_signal.acknowledged', target_id: spikeSignal }).first('id')).toBeTruthy();
-    expect(await testDb()('events').where({ organization_id: org.id, type: 'drift.acknowledged', subject_id: spikeSignal }).first('id')).toBeTruthy();
+    const acked = await testDb()('events').where({ organization_id: org.id, type: 'drift.acknowledged', subject_id: spikeSignal }).first('payload');
+    expect(acked).toBeTruthy();
+    expect(schemaRegistry().validate('event.drift.acknowledged', acked.payload)).toEqual([]);
     expectProblem(await t.http.post(`/v1/control/signals/${spikeSignal}/acknowledge`).set(as('engineer')).send({ note: 'again' }), 409);
     const open = await t.http.get('/v1/control/signals').query({ filter: JSON.stringify({ acknowledged: false }) }).set(as('viewer'));
     expect(open.body.map((s: { rule: string }) => s.rule)).toEqual(['WE4']);

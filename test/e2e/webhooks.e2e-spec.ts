@@ -158,7 +158,8 @@ describe('SSRF guard', () => {
     const own = await makeOrg('ssrf');
     const { WebhooksService } = await import('../../api/src/webhooks/webhooks.service.js');
     const box = t.app.get(WebhooksService).box;
-    await testDb()('webhook_endpoints').insert({ organization_id: own.id, url: 'http://169.254.169.254/latest/meta-data', secret_enc: box.seal('whsec_' + Buffer.from('x'.repeat(32)).toString('base64')) });
+    const { sealed, version } = box.seal('whsec_' + Buffer.from('x'.repeat(32)).toString('base64'));
+    await testDb()('webhook_endpoints').insert({ organization_id: own.id, url: 'http://169.254.169.254/latest/meta-data', secret_enc: sealed, secret_key_version: version });
     const ev = await testDb().transaction((trx) => t.app.get(EventsService).emit(trx, { organizationId: own.id, type: 'batch.created', subjectType: 'test', subjectId: 'y', data: {} }));
     const [d] = await until(async () => {
       const rows = await deliveriesOf(ev.id);
