@@ -18,6 +18,8 @@ import BatchesOutlined from '@mui/icons-material/BlenderOutlined';
 import CalculatorOutlined from '@mui/icons-material/CalculateOutlined';
 import ImportsOutlined from '@mui/icons-material/UploadFileOutlined';
 import ReadingLogOutlined from '@mui/icons-material/ListAltOutlined';
+import LiveOutlined from '@mui/icons-material/SensorsOutlined';
+import ControlOutlined from '@mui/icons-material/TimelineOutlined';
 import type { ComponentType } from 'react';
 
 /** One icon per menu entry id, shared by the menu and the resource registrations. */
@@ -42,4 +44,6 @@ export const menuIcons: Record<string, ComponentType> = {
   calculator: CalculatorOutlined,
   imports: ImportsOutlined,
   'reading-log': ReadingLogOutlined,
+  live: LiveOutlined,
+  control: ControlOutlined,
 };

@@ -37,6 +37,8 @@ export const MENU: readonly MenuSection[] = [
     links: [
       { id: 'readings', label: 'Review queue', to: '/readings', requires: 'readings:review' },
       { id: 'reading-log', label: 'Readings', to: '/reading-log', requires: 'readings:read' },
+      { id: 'live', label: 'Live station view', to: '/live', requires: 'readings:read' },
+      { id: 'control', label: 'Control charts', to: '/control', requires: 'control:read' },
       { id: 'batches', label: 'Batches', to: '/batches', requires: 'shop:read' },
       { id: 'calculator', label: 'Targets calculator', to: '/calculator', requires: 'targets:read' },
       { id: 'imports', label: 'Logger imports', to: '/imports', requires: 'imports:write' },
