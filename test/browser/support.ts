@@ -238,6 +238,8 @@ export async function shopFloorScenario() {
       return judgedReading(eng, r.json.id);
     };
     await post('part_a', b.summary.massAKg * 1000);
+    // a batch is released only when complete: the pigment its targets name is weighed too
+    if (b.summary.pigmentMassKg > 0) await post('pigment', b.summary.pigmentMassKg * 1000);
     const partB = await post('part_b', b.summary.massBKg * 1000 * factor);
     expect(partB.status, `verdict of part B at ${factor} × its target`).toBe('rejected');
     batches.push(b);

@@ -102,6 +102,9 @@ describe('the person’s unit system', () => {
     expect(formatDisplay({ value: 0.01, unit: 'lb' }, { decimals: 3 })).toBe('0.16 oz');
     expect(formatDisplayBand({ value: 0.009, unit: 'lb' }, { value: 0.01, unit: 'lb' }, { decimals: 3 })).toBe('0.14–0.16 oz');
     expect(formatDisplay({ value: 1.5, unit: 'lb' }, { decimals: 3 })).toBe('1.500 lb');
+    // a figure that reads a whole pound at the scale's decimals stays in pounds
+    expect(formatDisplay({ value: 0.9998, unit: 'lb' }, { decimals: 3 })).toBe('1.000 lb');
+    expect(formatDisplay({ value: 0.9994, unit: 'lb' }, { decimals: 3 })).toBe('15.99 oz');
   });
 
   it('reads them in grams when the organization chose grams', () => {
