@@ -105,6 +105,7 @@ describe('the person’s unit system', () => {
     // a figure that reads a whole pound at the scale's decimals stays in pounds
     expect(formatDisplay({ value: 0.9998, unit: 'lb' }, { decimals: 3 })).toBe('1.000 lb');
     expect(formatDisplay({ value: 0.9994, unit: 'lb' }, { decimals: 3 })).toBe('15.99 oz');
+    expect(formatSi(0.45359237 * 0.99995, 'kg', 'imperial')).toMatch(/ lb$/);
   });
 
   it('reads them in grams when the organization chose grams', () => {

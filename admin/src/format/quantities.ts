@@ -241,8 +241,8 @@ export function setSmallMassUnit(unit: SmallMassUnit): void {
 
 /** A mass in pounds, moved to ounces (or grams) when it is under a pound; decimals follow the move. */
 function smallMass(lb: number, decimals: number | undefined): { value: number; unit: string; decimals: number | undefined } {
-  // judged as it will read: 0.9998 lb at three decimals reads 1.000 lb, not 16.00 oz
-  const reads = decimals === undefined ? lb : Number(lb.toFixed(decimals));
+  // judged as it will read: 0.9998 lb at three decimals (or three significant digits) reads 1.000 lb, not 16.00 oz
+  const reads = decimals === undefined ? Number(lb.toPrecision(3)) : Number(lb.toFixed(decimals));
   if (Math.abs(reads) >= SMALL_MASS_LB) return { value: lb, unit: 'lb', decimals };
   if (smallMassUnit === 'g') return { value: lb * LB * 1000, unit: 'g', decimals: decimals === undefined ? undefined : Math.max(0, decimals - 2) };
   // 16 oz to the pound: one more order of magnitude, so one decimal fewer shows the same step
