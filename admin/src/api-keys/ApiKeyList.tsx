@@ -31,7 +31,7 @@ import { useNow } from '../common/useNow';
 import type { PourgateDataProvider } from '../dataProvider';
 import { formatDate, formatDateTime } from '../format/dates';
 import { monoFont } from '../theme';
-import type { ApiKey } from '../api/views';
+import type { ApiKey } from '../views/sdk';
 import { KeyDialogsProvider, useKeyDialogs } from './KeyDialogs';
 import { canManageKey, expiryText, keyRows, keyStateView, KIND_LABEL, kindsAllowed } from './keyRules';
 

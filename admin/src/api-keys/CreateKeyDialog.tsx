@@ -18,7 +18,7 @@ import {
 } from 'react-admin';
 import { useFormContext, useWatch, type FieldValues } from 'react-hook-form';
 import { formErrorsOrNotify } from '../common/errors';
-import type { ApiKeyKind, ApiKeyWithSecret } from '../api/views';
+import type { ApiKeyKind, ApiKeyWithSecret } from '../views/sdk';
 import { buildKeyPayload, DEFAULT_SCOPES, EXPIRY_CHOICES, keyFormErrors, KIND_LABEL, SCOPE_INFO, type KeyFormValues } from './keyRules';
 import { SecretReveal } from './SecretReveal';
 import { monoFont } from '../theme';

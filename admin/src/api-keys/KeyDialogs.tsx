@@ -1,6 +1,6 @@
 import { createContext, useCallback, useContext, useMemo, useState, type ReactNode } from 'react';
 import { useRefresh } from 'react-admin';
-import type { ApiKey, ApiKeyKind } from '../api/views';
+import type { ApiKey, ApiKeyKind } from '../views/sdk';
 import { CreateKeyDialog } from './CreateKeyDialog';
 import { RotateKeyDialog } from './RotateKeyDialog';
 

@@ -7,7 +7,7 @@ import type { PourgateDataProvider } from '../dataProvider';
 import { formatDateTime } from '../format/dates';
 import { formatDuration } from '../format/quantities';
 import { monoFont } from '../theme';
-import type { ApiKey, ApiKeyWithSecret } from '../api/views';
+import type { ApiKey, ApiKeyWithSecret } from '../views/sdk';
 import { DEFAULT_GRACE_SECONDS, GRACE_CHOICES } from './keyRules';
 import { SecretReveal } from './SecretReveal';
 

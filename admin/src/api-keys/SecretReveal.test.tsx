@@ -1,6 +1,6 @@
 import { fireEvent, render, screen, waitFor } from '@testing-library/react';
 import { describe, expect, it, vi } from 'vitest';
-import type { ApiKeyWithSecret } from '../api/views';
+import type { ApiKeyWithSecret } from '../views/sdk';
 import { SecretReveal } from './SecretReveal';
 
 const key: ApiKeyWithSecret = {

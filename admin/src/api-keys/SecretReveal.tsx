@@ -4,7 +4,7 @@ import VisibilityOffOutlined from '@mui/icons-material/VisibilityOffOutlined';
 import { Alert, AlertTitle, Box, Button, Checkbox, FormControlLabel, Typography } from '@mui/material';
 import { useRef, useState, type ReactNode } from 'react';
 import { monoFont } from '../theme';
-import type { ApiKeyWithSecret } from '../api/views';
+import type { ApiKeyWithSecret } from '../views/sdk';
 
 async function copyText(text: string, fallback: HTMLElement | null): Promise<boolean> {
   try {

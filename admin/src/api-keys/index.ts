@@ -1,6 +1,6 @@
 import { lazy } from 'react';
 import { menuIcons } from '../layout/icons';
-import type { ApiKey } from '../api/views';
+import type { ApiKey } from '../views/sdk';
 
 export default {
   list: lazy(() => import('./ApiKeyList')),

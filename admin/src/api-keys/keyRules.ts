@@ -1,7 +1,7 @@
 import type { ApiKeyScope, Role } from '@pourgate/permissions';
 import type { Tone } from '../common/StatusChip';
 import { addDaysIso, expiryLabel, formatDateTime, formatRelative } from '../format/dates';
-import type { ApiKey, ApiKeyEnvironment, ApiKeyKind } from '../api/views';
+import type { ApiKey, ApiKeyEnvironment, ApiKeyKind } from '../views/sdk';
 
 export const SCOPE_INFO: Readonly<Record<ApiKeyScope, string>> = {
   'readings:write': 'Post readings (mass, temperature, humidity)',

@@ -12,7 +12,7 @@ import { PageHeader } from '../common/PageHeader';
 import { RelativeTime } from '../common/RelativeTime';
 import { dayEndIso, dayStartIso, formatDateTime, isoToDay } from '../format/dates';
 import { monoFont } from '../theme';
-import type { ActorType, AuditEntry, User } from '../api/views';
+import type { ActorType, AuditEntry, User } from '../views/sdk';
 import { ACTION_CHOICES, actionLabel, ACTOR_LABEL, detailRows, TARGET_LABEL, TARGET_RESOURCE } from './auditFormat';
 
 const ACTOR_ICON: Record<ActorType, typeof PersonOutline> = {

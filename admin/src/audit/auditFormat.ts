@@ -1,4 +1,4 @@
-import type { ActorType } from '../api/views';
+import type { ActorType } from '../views/sdk';
 
 export const ACTOR_LABEL: Readonly<Record<ActorType, string>> = {
   user: 'Person',

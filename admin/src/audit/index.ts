@@ -1,6 +1,6 @@
 import { lazy } from 'react';
 import { menuIcons } from '../layout/icons';
-import type { AuditEntry } from '../api/views';
+import type { AuditEntry } from '../views/sdk';
 
 export default {
   list: lazy(() => import('./AuditList')),

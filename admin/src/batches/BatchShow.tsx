@@ -17,7 +17,7 @@ import { monoFont, palette } from '../theme';
 import { BatchStateChip } from './BatchList';
 import { CautionList, ComponentTable, ProcessFigures, TargetSummary, WarningList, massDecimals } from './TargetFigures';
 import { ToleranceBars, type BarRow } from './ToleranceBars';
-import type { BatchTransition as Transition, ReleaseCheck, TargetsView } from '../api/views';
+import type { BatchTransition as Transition, ReleaseCheck, TargetsView } from '../views/sdk';
 import { BATCH_STATE, batchTitle, shortRef, type Batch, } from './labels';
 import { readableReason } from './timeline';
 

@@ -11,7 +11,7 @@ import { formatDisplay, formatNumber, formatQuantity } from '../format/quantitie
 import { monoFont } from '../theme';
 import { useBatchTargets } from './BatchShow';
 import { CautionList, massDecimals, ratioText, SdsLine } from './TargetFigures';
-import type { ComponentTarget } from '../api/views';
+import type { ComponentTarget } from '../views/sdk';
 import { batchTitle, shortRef, type Batch } from './labels';
 
 /** Print: only the sheet, on white, without the console's frame. */

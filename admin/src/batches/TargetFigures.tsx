@@ -3,7 +3,7 @@ import { Alert, Box, Table, TableBody, TableCell, TableHead, TableRow, Typograph
 import type { ReactNode } from 'react';
 import { monoFont } from '../theme';
 import { decimalsForStep, formatDisplay, formatNumber, formatQuantity, type DisplayQuantity } from '../format/quantities';
-import type { Caution, ComponentTarget, TargetsView, TargetWarning } from '../api/views';
+import type { Caution, ComponentTarget, TargetsView, TargetWarning } from '../views/sdk';
 
 /** Decimals for masses: one scale division when the scale is known. */
 export function massDecimals(t: Pick<TargetsView, 'scaleReadability'>): number | undefined {

@@ -1,4 +1,4 @@
-import type { Batch, BatchState } from '../api/views';
+import type { Batch, BatchState } from '../views/sdk';
 
 export type { Batch, BatchState };
 

@@ -25,7 +25,7 @@ import { PageHeader } from '../common/PageHeader';
 import { SafetyNote } from '../common/SafetyNote';
 import { problemOf } from '../dataProvider/problem';
 import { CautionList, ComponentTable, ProcessFigures, SdsLine, TargetSummary, WarningList } from '../batches/TargetFigures';
-import type { Device, TargetsView } from '../api/views';
+import type { Device, TargetsView } from '../views/sdk';
 import { postCommand } from '../review/commands';
 import { useUnitSystem } from '../review/hooks';
 import { formatNumber } from '../format/quantities';

@@ -1,7 +1,7 @@
 import { render, screen, waitFor } from '@testing-library/react';
 import { CoreAdminContext } from 'react-admin';
 import { beforeAll, describe, expect, it, vi } from 'vitest';
-import type { Overview } from '../api/views';
+import type { Overview } from '../views/sdk';
 import FloorPanel from './FloorPanel';
 
 beforeAll(() => {

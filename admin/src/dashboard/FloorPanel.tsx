@@ -5,7 +5,7 @@ import { LineChart } from '@mui/x-charts/LineChart';
 import { useCallback, useEffect, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { useDataProvider } from 'react-admin';
-import type { Overview } from '../api/views';
+import type { Overview } from '../views/sdk';
 import { shortRef } from '../batches/labels';
 import type { PourgateDataProvider } from '../dataProvider';
 import { formatDateTime, formatDayShort } from '../format/dates';

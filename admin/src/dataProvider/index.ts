@@ -18,7 +18,7 @@ import type {
   ProfileUpdate,
   WebhookDelivery,
   WebhookEndpointWithSecret,
-} from '../api/views';
+} from '../views/sdk';
 
 export interface AcceptInvitationInput {
   token: string;

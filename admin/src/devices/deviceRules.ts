@@ -1,5 +1,5 @@
 import type { Tone } from '../common/StatusChip';
-import type { Device } from '../api/views';
+import type { Device } from '../views/sdk';
 
 export type DeviceKind = Device['kind'];
 

@@ -5,7 +5,7 @@
  */
 import { problemToHttpError } from '../dataProvider/problem';
 import { accessTokenLapsing, type TokenStore } from '../dataProvider/session';
-import type { ImportJob } from '../api/views';
+import type { ImportJob } from '../views/sdk';
 
 export type ImportStatus = ImportJob['status'];
 

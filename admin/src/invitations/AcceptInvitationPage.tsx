@@ -2,7 +2,7 @@ import CheckCircle from '@mui/icons-material/CheckCircleOutline';
 import { Alert, Box, Button, CircularProgress, Skeleton, TextField, Typography } from '@mui/material';
 import { useEffect, useState, type ChangeEvent, type FormEvent } from 'react';
 import { useDataProvider, useLogin } from 'react-admin';
-import type { InvitationPreview } from '../api/views';
+import type { InvitationPreview } from '../views/sdk';
 import { roleLabel } from '../auth/roles';
 import type { TokenResponse } from '../dataProvider/session';
 import { Link as RouterLink, useSearchParams } from 'react-router-dom';

@@ -22,7 +22,7 @@ import { Guarded } from '../common/Guarded';
 import { PageHeader } from '../common/PageHeader';
 import { RelativeTime } from '../common/RelativeTime';
 import { StatusChip, type Tone } from '../common/StatusChip';
-import type { Invitation, InvitationState } from '../api/views';
+import type { Invitation, InvitationState } from '../views/sdk';
 import { InviteButton } from './InviteDialog';
 
 const STATE: Record<InvitationState, { label: string; tone: Tone }> = {

@@ -6,7 +6,7 @@ import type { FieldValues } from 'react-hook-form';
 import { roleChoices } from '../auth/roles';
 import { formErrorsOrNotify } from '../common/errors';
 import { roleOptionText } from '../common/RoleOption';
-import type { Invitation } from '../api/views';
+import type { Invitation } from '../views/sdk';
 
 /** "Invite someone": e-mail and role; the API sends the mail with a link to accept. */
 export function InviteDialog({ open, onClose }: { open: boolean; onClose: () => void }) {

@@ -1,6 +1,6 @@
 import { lazy } from 'react';
 import { menuIcons } from '../layout/icons';
-import type { Invitation } from '../api/views';
+import type { Invitation } from '../views/sdk';
 
 export default {
   list: lazy(() => import('./InvitationList')),

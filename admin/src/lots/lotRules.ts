@@ -1,6 +1,6 @@
 import type { Tone } from '../common/StatusChip';
 import { daysUntil } from '../devices/deviceRules';
-import type { Lot } from '../api/views';
+import type { Lot } from '../views/sdk';
 
 export type { Lot };
 

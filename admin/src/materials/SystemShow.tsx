@@ -8,7 +8,7 @@ import { Show, useCanAccess, useDataProvider, useNotify, useRecordContext } from
 import { Guarded } from '../common/Guarded';
 import { PageHeader } from '../common/PageHeader';
 import type { PourgateDataProvider } from '../dataProvider';
-import type { MaterialSystemDocument, MaterialSystemRevision } from '../api/views';
+import type { MaterialSystemDocument, MaterialSystemRevision } from '../views/sdk';
 import { formatDate, formatDateTime } from '../format/dates';
 import { DetailGrid, Section } from '../shop/DetailGrid';
 import { SdsCaution } from '../shop/SdsCaution';

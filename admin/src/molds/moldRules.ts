@@ -1,6 +1,6 @@
 import { formatNumber } from '../format/quantities';
 import { MEASUREMENT_FIELDS, MEASUREMENT_KINDS, type MeasurementKind } from './volumeHelper';
-import type { Mold } from '../api/views';
+import type { Mold } from '../views/sdk';
 
 export interface MeasurementRecord {
   kind: MeasurementKind;

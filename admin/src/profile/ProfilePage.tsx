@@ -4,7 +4,7 @@ import { useEffect, useState } from 'react';
 import { Form, Loading, PasswordInput, RadioButtonGroupInput, required, SaveButton, TextInput, Title, useDataProvider, useNotify } from 'react-admin';
 import type { FieldValues } from 'react-hook-form';
 import { roleLabel, ROLE_INFO } from '../auth/roles';
-import type { Profile } from '../api/views';
+import type { Profile } from '../views/sdk';
 import { formErrorsOrNotify } from '../common/errors';
 import { PageHeader } from '../common/PageHeader';
 import type { PourgateDataProvider } from '../dataProvider';

@@ -1,4 +1,4 @@
-import type { NotifyRejections, ProfileUpdate } from '../api/views';
+import type { NotifyRejections, ProfileUpdate } from '../views/sdk';
 
 export const UNIT_CHOICES = [
   { id: 'metric', name: 'Metric (g, kg, mm, L, kg/m³, °C)' },

@@ -28,7 +28,7 @@ import { SdsCaution } from '../shop/SdsCaution';
 import { formatSiAs, formatSeconds } from '../format/quantities';
 import { useDisplayUnits } from '../shop/useDisplayUnits';
 import { useSaved } from '../shop/useSaved';
-import type { CupTest } from '../api/views';
+import type { CupTest } from '../views/sdk';
 
 export type { CupTest };
 

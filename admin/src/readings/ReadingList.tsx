@@ -1,7 +1,7 @@
 import { Box, Typography } from '@mui/material';
 import { DataTable, DateTimeInput, List, ReferenceField, ReferenceInput, SelectInput, TextField, useGetIdentity } from 'react-admin';
 import { Link } from 'react-router-dom';
-import type { Reading } from '../api/views';
+import type { Reading } from '../views/sdk';
 import type { PourgateIdentity } from '../authProvider';
 import { shortRef } from '../batches/labels';
 import { Guarded } from '../common/Guarded';

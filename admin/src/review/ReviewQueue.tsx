@@ -31,7 +31,7 @@ import { useHolds, useUnitSystem } from './hooks';
 import { describeReason, REASON_FILTER_CODES, reasonTitle } from './reasons';
 import { ReviewDialog, type Decision } from './ReviewDialog';
 import { READING_STATUS, readingTitle, readingValue, type Reading } from './labels';
-import type { Device } from '../api/views';
+import type { Device } from '../views/sdk';
 import { formatSi } from '../format/quantities';
 
 /** The keys of the queue; the same list is printed on the page. */

@@ -1,4 +1,4 @@
-import type { Reading, ReadingQuantity, ReadingStatus, ReadingSubject } from '../api/views';
+import type { Reading, ReadingQuantity, ReadingStatus, ReadingSubject } from '../views/sdk';
 
 export type { Reading };
 

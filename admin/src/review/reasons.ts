@@ -5,7 +5,7 @@
  */
 import type { UnitSystem } from '../auth/me';
 import { formatNumber, formatSeconds, formatSi } from '../format/quantities';
-import type { ReadingReason } from '../api/views';
+import type { ReadingReason } from '../views/sdk';
 
 export type Reason = ReadingReason;
 

@@ -4,7 +4,7 @@ import type { FieldValues } from 'react-hook-form';
 import { roleChoices, roleLabel } from '../auth/roles';
 import { formErrorsOrNotify } from '../common/errors';
 import { roleOptionText } from '../common/RoleOption';
-import type { User } from '../api/views';
+import type { User } from '../views/sdk';
 
 /** Name and role of one person. PUT sends the whole record, as the list protocol expects. */
 export function UserEditDialog({ user, onClose }: { user: User; onClose: () => void }) {

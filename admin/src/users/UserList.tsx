@@ -25,7 +25,7 @@ import { RelativeTime } from '../common/RelativeTime';
 import { StatusChip } from '../common/StatusChip';
 import { formatDate } from '../format/dates';
 import { InviteButton } from '../invitations/InviteDialog';
-import type { User } from '../api/views';
+import type { User } from '../views/sdk';
 import { UserEditDialog } from './UserEditDialog';
 
 const filters = [

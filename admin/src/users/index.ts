@@ -1,6 +1,6 @@
 import { lazy } from 'react';
 import { menuIcons } from '../layout/icons';
-import type { User } from '../api/views';
+import type { User } from '../views/sdk';
 
 export default {
   list: lazy(() => import('./UserList')),

@@ -1,7 +1,7 @@
 import { Alert, Box, Button, Dialog, DialogActions, DialogContent, DialogTitle, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import { useEffect, useState } from 'react';
 import { useDataProvider } from 'react-admin';
-import type { DeliveryDetail, WebhookDelivery } from '../api/views';
+import type { DeliveryDetail, WebhookDelivery } from '../views/sdk';
 import { formatDateTime } from '../format/dates';
 import { monoFont } from '../theme';
 

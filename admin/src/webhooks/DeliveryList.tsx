@@ -9,7 +9,7 @@ import { PageHeader } from '../common/PageHeader';
 import { RelativeTime } from '../common/RelativeTime';
 import { StatusChip } from '../common/StatusChip';
 import type { PourgateDataProvider } from '../dataProvider';
-import type { WebhookDelivery, WebhookEndpoint } from '../api/views';
+import type { WebhookDelivery, WebhookEndpoint } from '../views/sdk';
 import { formatDateTime } from '../format/dates';
 import { monoFont } from '../theme';
 import { AttemptsDialog } from './AttemptsDialog';

@@ -7,7 +7,7 @@ import type { FieldValues } from 'react-hook-form';
 import { SecretReveal } from '../api-keys/SecretReveal';
 import { formErrorsOrNotify } from '../common/errors';
 import type { PourgateDataProvider } from '../dataProvider';
-import type { EndpointTestResult, WebhookEndpoint, WebhookEndpointWithSecret } from '../api/views';
+import type { EndpointTestResult, WebhookEndpoint, WebhookEndpointWithSecret } from '../views/sdk';
 import { formatDateTime } from '../format/dates';
 import { formatDuration } from '../format/quantities';
 import { monoFont } from '../theme';

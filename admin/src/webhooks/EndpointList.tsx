@@ -14,7 +14,7 @@ import { EmptyState } from '../common/EmptyState';
 import { Guarded } from '../common/Guarded';
 import { PageHeader } from '../common/PageHeader';
 import { StatusChip } from '../common/StatusChip';
-import type { WebhookEndpoint } from '../api/views';
+import type { WebhookEndpoint } from '../views/sdk';
 import { formatDate, formatDateTime } from '../format/dates';
 import { monoFont } from '../theme';
 import { CreateEndpointDialog, EditEndpointDialog, RotateSecretDialog, TestEndpointDialog } from './EndpointDialogs';

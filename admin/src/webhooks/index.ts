@@ -1,6 +1,6 @@
 import { lazy } from 'react';
 import { menuIcons } from '../layout/icons';
-import type { WebhookDelivery, WebhookEndpoint } from '../api/views';
+import type { WebhookDelivery, WebhookEndpoint } from '../views/sdk';
 
 export const webhookEndpoints = {
   list: lazy(() => import('./EndpointList')),

@@ -1,5 +1,5 @@
 import type { Tone } from '../common/StatusChip';
-import type { DeliveryStatus, EndpointTestResult, WebhookDelivery, WebhookEndpoint } from '../api/views';
+import type { DeliveryStatus, EndpointTestResult, WebhookDelivery, WebhookEndpoint } from '../views/sdk';
 import endpointSchema from '../../../schemas/webhook-endpoint.create.schema.json';
 
 /** Every event type an endpoint can subscribe to, as the API's schema lists them. */

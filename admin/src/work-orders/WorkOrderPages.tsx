@@ -30,7 +30,7 @@ import { localToday } from '../devices/deviceRules';
 import { formatDate } from '../format/dates';
 import { useSaved } from '../shop/useSaved';
 import { monoFont } from '../theme';
-import type { WorkOrder } from '../api/views';
+import type { WorkOrder } from '../views/sdk';
 
 export type { WorkOrder };
 
