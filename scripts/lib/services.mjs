@@ -222,5 +222,5 @@ export function isStale(target, srcDirs) {
     }
     return false;
   };
-  return srcDirs.some((d) => walk(path.join(ROOT, d)));
+  return srcDirs.some((d) => walk(path.resolve(ROOT, d)));
 }
