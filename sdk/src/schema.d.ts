@@ -2502,15 +2502,18 @@ export interface components {
             limitsKind: "frozen" | "trial";
             limits: null | {
                 centre: number;
-                mrBar: number;
+                mrBar: number | null;
                 sigma: number;
                 ucl: number;
                 lcl: number;
-                mrUcl: number;
+                mrUcl: number | null;
                 zones: {
                     oneSigma: number[];
                     twoSigma: number[];
                 };
+                rBar: number | null;
+                /** @description X̄–R: the subgroup size ucl, lcl and zones are drawn for (the most common); each subgroup carries its own */
+                subgroupSize: number | null;
             };
             points: {
                 id: string;
@@ -2537,6 +2540,8 @@ export interface components {
                 mean: number | null;
                 mrBar: number | null;
                 sdOverall: number | null;
+                /** @description X̄–R: subgroups charted */
+                subgroups?: number | null;
             };
             specification: {
                 lsl: number | null;
@@ -2554,6 +2559,30 @@ export interface components {
                 warnings: string[];
             };
             warnings: string[];
+            /** @description X̄–R charts: each batch's values as one subgroup (2 to 10 values; others are left out and counted in warnings), oldest first, with its own limits; null on individuals charts */
+            subgroups: null | {
+                /** @description the subgroup's first point */
+                id: string;
+                /** Format: uuid */
+                batchId: string;
+                n: number;
+                mean: number;
+                range: number;
+                /** Format: date-time */
+                at: string;
+                ucl: number | null;
+                lcl: number | null;
+                rCentre: number | null;
+                rUcl: number | null;
+                rLcl: number | null;
+                signals: {
+                    /** Format: uuid */
+                    id: string;
+                    /** @enum {unknown} */
+                    rule: "WE1" | "WE2" | "WE3" | "WE4" | "N1" | "N2" | "N3" | "N4" | "N5" | "N6" | "N7" | "N8";
+                    acknowledged: boolean;
+                }[];
+            }[];
         };
         /**
          * Freeze a chart’s limits
@@ -2575,14 +2604,14 @@ export interface components {
         };
         /**
          * Define a control chart
-         * @description At most one of stationId, deviceId, lotId narrows the chart. Rules default to WE1–WE4.
+         * @description At most one of stationId, deviceId, lotId narrows the chart. Rules default to WE1–WE4. Kind defaults to individuals.
          */
         "control-chart.create": {
             name?: string;
             /** Format: uuid */
             materialSystemId: string;
             /** @enum {unknown} */
-            metric: "ratio_error_percent" | "shot_mass_error_percent" | "component_temperature_a_c" | "component_temperature_b_c" | "free_rise_density_kg_m3";
+            metric: "ratio_error_percent" | "shot_mass_error_percent" | "component_temperature_a_c" | "component_temperature_b_c" | "free_rise_density_kg_m3" | "part_density_kg_m3";
             /** Format: uuid */
             stationId?: string | null;
             /** Format: uuid */
@@ -2591,6 +2620,12 @@ export interface components {
             lotId?: string | null;
             /** @description WE1–WE4: Western Electric (1956); N1–N8: Nelson (1984) */
             rules?: ("WE1" | "WE2" | "WE3" | "WE4" | "N1" | "N2" | "N3" | "N4" | "N5" | "N6" | "N7" | "N8")[];
+            /**
+             * @description individuals: one value per point with moving ranges; xbar_r: a batch's values as one subgroup (means and ranges; for metrics a batch gives several of: component temperatures, part density)
+             * @default individuals
+             * @enum {unknown}
+             */
+            kind?: "individuals" | "xbar_r";
         };
         /** Rename a control chart or change its rules */
         "control-chart.update": {
@@ -2606,7 +2641,7 @@ export interface components {
             /** Format: uuid */
             materialSystemId: string;
             /** @enum {unknown} */
-            metric: "ratio_error_percent" | "shot_mass_error_percent" | "component_temperature_a_c" | "component_temperature_b_c" | "free_rise_density_kg_m3";
+            metric: "ratio_error_percent" | "shot_mass_error_percent" | "component_temperature_a_c" | "component_temperature_b_c" | "free_rise_density_kg_m3" | "part_density_kg_m3";
             metricLabel: string;
             unit: string;
             /** Format: uuid */
@@ -2623,11 +2658,13 @@ export interface components {
             limitsKind: "frozen" | "trial";
             baseline: null | {
                 centre: number;
-                mrBar: number;
+                /** @description mean moving range (individuals charts); null on X̄–R charts */
+                mrBar: number | null;
+                /** @description σ of one value (MR̄/d2, or the mean of Rᵢ/d2(nᵢ) on X̄–R charts) */
                 sigma: number;
                 ucl: number;
                 lcl: number;
-                mrUcl: number;
+                mrUcl: number | null;
                 zones: {
                     oneSigma: number[];
                     twoSigma: number[];
@@ -2648,10 +2685,16 @@ export interface components {
                 /** Format: date-time */
                 frozenAt: string;
                 frozenBy: string | null;
+                /** @description mean subgroup range (X̄–R charts); null on individuals charts */
+                rBar: number | null;
+                /** @description X̄–R: the most common subgroup size in the baseline, which ucl/lcl/zones are drawn for; each subgroup has its own limits in the chart data */
+                subgroupSize: number | null;
             };
             /** Format: date-time */
             createdAt: string;
             createdBy: string | null;
+            /** @enum {unknown} */
+            kind: "individuals" | "xbar_r";
         };
         /** Acknowledge a run-rule signal */
         "control-signal.acknowledge": {
@@ -2667,7 +2710,7 @@ export interface components {
             /** Format: uuid */
             materialSystemId: string;
             /** @enum {unknown} */
-            metric: "ratio_error_percent" | "shot_mass_error_percent" | "component_temperature_a_c" | "component_temperature_b_c" | "free_rise_density_kg_m3";
+            metric: "ratio_error_percent" | "shot_mass_error_percent" | "component_temperature_a_c" | "component_temperature_b_c" | "free_rise_density_kg_m3" | "part_density_kg_m3";
             /** @enum {unknown} */
             rule: "WE1" | "WE2" | "WE3" | "WE4" | "N1" | "N2" | "N3" | "N4" | "N5" | "N6" | "N7" | "N8";
             ruleDescription: string;
@@ -2863,7 +2906,7 @@ export interface components {
             /** Format: uuid */
             materialSystemId: string;
             /** @enum {unknown} */
-            metric: "ratio_error_percent" | "shot_mass_error_percent" | "component_temperature_a_c" | "component_temperature_b_c" | "free_rise_density_kg_m3";
+            metric: "ratio_error_percent" | "shot_mass_error_percent" | "component_temperature_a_c" | "component_temperature_b_c" | "free_rise_density_kg_m3" | "part_density_kg_m3";
             /** @enum {unknown} */
             rule: "WE1" | "WE2" | "WE3" | "WE4" | "N1" | "N2" | "N3" | "N4" | "N5" | "N6" | "N7" | "N8";
             note: string;
@@ -2882,7 +2925,7 @@ export interface components {
             /** Format: uuid */
             materialSystemId: string;
             /** @enum {unknown} */
-            metric: "ratio_error_percent" | "shot_mass_error_percent" | "component_temperature_a_c" | "component_temperature_b_c" | "free_rise_density_kg_m3";
+            metric: "ratio_error_percent" | "shot_mass_error_percent" | "component_temperature_a_c" | "component_temperature_b_c" | "free_rise_density_kg_m3" | "part_density_kg_m3";
             /** @enum {unknown} */
             rule: "WE1" | "WE2" | "WE3" | "WE4" | "N1" | "N2" | "N3" | "N4" | "N5" | "N6" | "N7" | "N8";
             ruleDescription: string;
@@ -3619,13 +3662,18 @@ export interface components {
             /** @enum {unknown} */
             unitSystem: "metric" | "imperial";
             /** @enum {unknown} */
-            notifyRejections?: "each" | "digest" | "off";
+            notifyRejections: "each" | "digest" | "off";
+            /**
+             * @description E-mail for each drift signal a control chart raises (engineers), or none
+             * @enum {unknown}
+             */
+            notifyDrift: "each" | "off";
             organization: {
                 /** Format: uuid */
                 id: string;
                 name: string;
                 /** @enum {unknown} */
-                unitSystem?: "metric" | "imperial";
+                unitSystem: "metric" | "imperial";
             };
             /** @description What this person may do, from the role x action matrix */
             actions: string[];
@@ -3640,6 +3688,11 @@ export interface components {
              * @enum {unknown}
              */
             notifyRejections?: "each" | "digest" | "off";
+            /**
+             * @description E-mail for each drift signal of a control chart, or none
+             * @enum {unknown}
+             */
+            notifyDrift?: "each" | "off";
             currentPassword?: string;
             newPassword?: string;
         };

@@ -58,7 +58,7 @@ export class AuthController {
   @Requires('profile:read')
   @ApiOperation({ summary: 'Change one’s own name, unit system, notification setting or password' })
   @Responds(200, 'me')
-  updateMe(@Caller() c: RequestContext, @SchemaBody('me.update') body: { name?: string; unitSystem?: 'metric' | 'imperial'; notifyRejections?: 'each' | 'digest' | 'off'; currentPassword?: string; newPassword?: string }) {
+  updateMe(@Caller() c: RequestContext, @SchemaBody('me.update') body: { name?: string; unitSystem?: 'metric' | 'imperial'; notifyRejections?: 'each' | 'digest' | 'off'; notifyDrift?: 'each' | 'off'; currentPassword?: string; newPassword?: string }) {
     return this.users.updateMe(c, body);
   }
 }

@@ -38,6 +38,7 @@ export interface MeView {
   role: UserRow['role'];
   unitSystem: UserRow['unit_system'];
   notifyRejections: UserRow['notify_rejections'];
+  notifyDrift: UserRow['notify_drift'];
   organization: { id: string; name: string; unitSystem: 'metric' | 'imperial' };
   actions: string[];
 }
@@ -160,6 +161,7 @@ export class TokensService implements OnApplicationShutdown {
       role: u.role,
       unitSystem: u.unit_system,
       notifyRejections: u.notify_rejections,
+      notifyDrift: u.notify_drift,
       organization: { id: org.id, name: org.name, unitSystem: org.unit_system },
       actions: actionsOf(u.role),
     };

@@ -3,7 +3,7 @@ import type { Knex } from 'knex';
 import { listPage } from '../common/lists/knex-list.js';
 import type { ListQuery, ListSpec } from '../common/lists/list-query.js';
 import { KNEX } from '../database/database.module.js';
-import type { ControlMetric } from './control.metrics.js';
+import type { ChartKind, ControlMetric } from './control.metrics.js';
 
 export const signalsListSpec: ListSpec = {
   resource: 'control-signals',
@@ -25,11 +25,16 @@ const chartColumns = { createdAt: 'created_at', name: 'name', metric: 'metric', 
 
 export interface BaselineRecord {
   method: 'first_n' | 'period';
+  /** X̄–R charts: the within-subgroup σ, mean range and most common subgroup size of the baseline. */
+  sigmaWithin?: number;
+  rBar?: number;
+  subgroupSize?: number;
   firstN: number | null;
   from: string | null;
   to: string | null;
   n: number;
   centre: number;
+  /** Individuals charts; 0 on X̄–R charts (which keep `sigmaWithin`). */
   mrBar: number;
   sdOverall: number | null;
   firstPointAt: string;
@@ -44,6 +49,7 @@ export interface ChartRow {
   name: string;
   material_system_id: string;
   metric: ControlMetric;
+  kind: ChartKind;
   station_id: string | null;
   device_id: string | null;
   lot_id: string | null;
@@ -115,6 +121,16 @@ export interface ReadingFacts {
   lot_a_id: string | null;
   lot_b_id: string | null;
   targets: { targets?: { components?: Record<string, { mass?: { value: number } }>; totalMass?: { value: number } } } | null;
+}
+
+/** A batch's values on an X̄–R chart, as PostgreSQL groups them. */
+export interface SubgroupRow {
+  first_id: string;
+  batch_id: string;
+  n: number;
+  mean: number;
+  range: number;
+  at: Date;
 }
 
 type Db = Knex | Knex.Transaction;
@@ -227,6 +243,32 @@ export class ControlRepository {
     )) as { rows: (PointRow & { n: string; mean: number; mr_bar: number | null; sd: number | null })[] };
     const first = rows[0];
     return { points: rows, n: rows.length, mean: first ? Number(first.mean) : null, mrBar: first?.mr_bar ?? null, sd: first?.sd ?? null };
+  }
+
+  /**
+   * A chart's subgroups (a batch's points; only sizes 2 … 10, which the constants cover), oldest
+   * first: the newest `limit` of a period, the first `limit` (`oldest`), or the newest up to and
+   * including one batch's subgroup (`upTo`, for the rule check). `left` counts the batches left out.
+   */
+  async subgroups(db: Db, chart: Scope, pick: { from?: Date | null; to?: Date | null; limit: number; oldest?: boolean; upToBatch?: string }): Promise<{ rows: SubgroupRow[]; left: number }> {
+    const inner = this.scoped(db, chart)
+      .whereNotNull('p.batch_id')
+      .modify((q) => {
+        if (pick.from) q.where('p.at', '>=', pick.from);
+        if (pick.to) q.where('p.at', '<', pick.to);
+      })
+      .groupBy('p.batch_id')
+      .select('p.batch_id', db.raw('count(*)::int AS n'), db.raw('avg(p.value) AS mean'), db.raw('max(p.value) - min(p.value) AS range'), db.raw('min(p.at) AS at'), db.raw('min(p.id) AS first_id'));
+    const upTo = pick.upToBatch ? 'WHERE (g.at, g.first_id) <= (SELECT at, first_id FROM g WHERE batch_id = ?)' : '';
+    const order = pick.oldest ? 'ASC' : 'DESC';
+    const { rows } = (await db.raw(
+      `WITH g AS (?), kept AS (SELECT * FROM g ${upTo ? upTo + ' AND' : 'WHERE'} g.n BETWEEN 2 AND 10)
+       SELECT first_id::text, batch_id, n, mean, range, at, (SELECT count(*)::int FROM g WHERE n NOT BETWEEN 2 AND 10) AS left_out
+         FROM kept ORDER BY at ${order}, first_id ${order} LIMIT ?`,
+      pick.upToBatch ? [inner, pick.upToBatch, pick.limit] : [inner, pick.limit],
+    )) as { rows: (SubgroupRow & { left_out: number })[] };
+    const out = rows.map((r) => ({ first_id: r.first_id, batch_id: r.batch_id, n: r.n, mean: Number(r.mean), range: Number(r.range), at: r.at }));
+    return { rows: pick.oldest ? out : out.reverse(), left: rows[0]?.left_out ?? 0 };
   }
 
   /** A baseline's figures: the first N points of the chart, or those of a period, in PostgreSQL. */

@@ -1,19 +1,20 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
-import { capability, evaluateRunRules, historyNeeded, MOVING_RANGE_CONSTANTS, RUN_RULES, type RunRuleId } from '@pourgate/batching';
+import { capability, chartableSubgroup, evaluateRunRules, grandMean, historyNeeded, MOVING_RANGE_CONSTANTS, RUN_RULES, type RunRuleId, subgroupLimits, withinSigma } from '@pourgate/batching';
 import { AuditService } from '../audit/audit.service.js';
 import { actorOf, type RequestContext } from '../auth/principal.js';
 import type { ListQuery } from '../common/lists/list-query.js';
 import { type FieldError, malformed, ProblemException, validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
 import { EventsService } from '../events/events.service.js';
-import { CONTROL_METRICS, type ControlMetric, DEFAULT_CHART_POINTS, DEFAULT_RULES, MAX_CHART_POINTS, MIN_BASELINE_POINTS } from './control.metrics.js';
-import { type BaselineRecord, type ChartRow, ControlRepository, type NewPoint, type ReadingFacts, type SignalRow } from './control.repository.js';
+import { type ChartKind, CONTROL_METRICS, type ControlMetric, DEFAULT_CHART_POINTS, DEFAULT_RULES, MAX_CHART_POINTS, MIN_BASELINE_POINTS } from './control.metrics.js';
+import { type BaselineRecord, type ChartRow, ControlRepository, type NewPoint, type ReadingFacts, type SignalRow, type SubgroupRow } from './control.repository.js';
 
 export interface ChartInput {
   name?: string;
   materialSystemId: string;
   metric: ControlMetric;
+  kind?: ChartKind;
   stationId?: string | null;
   deviceId?: string | null;
   lotId?: string | null;
@@ -39,6 +40,11 @@ export interface ChartDataQuery {
 
 const ms = (d: Date | string) => new Date(d).toISOString();
 
+type SignalMark = { id: string; rule: RunRuleId; acknowledged: boolean };
+
+/** Subgroups a period's baseline takes at most (a year of batches fits many times over). */
+const MAX_BASELINE_SUBGROUPS = 100_000;
+
 /** Points a baseline must hold for the chart's rules to mean anything. */
 export function minBaselinePoints(rules: readonly RunRuleId[]): number {
   return Math.max(MIN_BASELINE_POINTS, ...rules.map((r) => RUN_RULES[r].span));
@@ -49,13 +55,43 @@ function limitsFrom(centre: number, mrBar: number) {
   const sigma = mrBar / d2;
   return {
     centre,
-    mrBar,
+    mrBar: mrBar as number | null,
     sigma,
     ucl: centre + E2 * mrBar,
     lcl: centre - E2 * mrBar,
-    mrUcl: D4 * mrBar,
+    mrUcl: (D4 * mrBar) as number | null,
+    rBar: null as number | null,
+    subgroupSize: null as number | null,
     zones: { oneSigma: [centre - sigma, centre + sigma], twoSigma: [centre - 2 * sigma, centre + 2 * sigma] },
   };
+}
+
+/** X̄–R limits drawn for subgroups of n (each subgroup gets its own in the chart data). */
+function subgroupLimitsFrom(centre: number, sigma: number, n: number) {
+  const l = subgroupLimits(centre, sigma, n);
+  const s = l.sigmaMean;
+  return {
+    centre,
+    mrBar: null as number | null,
+    sigma,
+    ucl: l.ucl,
+    lcl: l.lcl,
+    mrUcl: null as number | null,
+    rBar: l.rCentre as number | null,
+    subgroupSize: n as number | null,
+    zones: { oneSigma: [centre - s, centre + s], twoSigma: [centre - 2 * s, centre + 2 * s] },
+  };
+}
+
+/** The most common subgroup size (the larger on a tie): the one a chart's drawn limits are for. */
+function commonSize(rows: readonly SubgroupRow[]): number {
+  const counts = new Map<number, number>();
+  for (const r of rows) counts.set(r.n, (counts.get(r.n) ?? 0) + 1);
+  return [...counts].sort((a, b) => b[1] - a[1] || b[0] - a[0])[0]![0];
+}
+
+function baselineLimits(c: ChartRow, b: BaselineRecord) {
+  return c.kind === 'xbar_r' ? subgroupLimitsFrom(b.centre, b.sigmaWithin!, b.subgroupSize!) : limitsFrom(b.centre, b.mrBar);
 }
 
 export function chartView(c: ChartRow) {
@@ -66,6 +102,7 @@ export function chartView(c: ChartRow) {
     name: c.name,
     materialSystemId: c.material_system_id,
     metric: c.metric,
+    kind: c.kind,
     metricLabel: meta.label,
     unit: meta.unit,
     stationId: c.station_id,
@@ -73,10 +110,15 @@ export function chartView(c: ChartRow) {
     lotId: c.lot_id,
     rules: c.rules,
     limitsKind: b ? 'frozen' : 'trial',
-    baseline: b ? { ...b, ...limitsFrom(b.centre, b.mrBar) } : null,
+    baseline: b ? baselineView(c, b) : null,
     createdAt: c.created_at,
     createdBy: c.created_by_label,
   };
+}
+
+function baselineView(c: ChartRow, b: BaselineRecord) {
+  const { sigmaWithin: _s, rBar: _r, subgroupSize: _n, ...rest } = b;
+  return { ...rest, ...baselineLimits(c, b) };
 }
 
 export function signalView(s: SignalRow) {
@@ -117,12 +159,41 @@ export class ControlService {
   async evaluateReading(trx: Knex.Transaction, readingId: string): Promise<{ signals: number }> {
     const r = await this.repo.readingFacts(trx, readingId);
     if (!r || (r.status !== 'accepted' && r.status !== 'rejected')) return { signals: 0 };
+    return { signals: await this.takePoints(trx, await this.pointsOf(trx, r)) };
+  }
+
+  /** In the cup test's transaction: its free-rise density becomes a point of the system's charts. */
+  async recordCupTest(trx: Knex.Transaction, t: { id: string; organizationId: string; materialSystemId: string; lotAId: string | null; lotBId: string | null; freeRiseDensityKgM3: number; testedAt: Date | string }): Promise<{ signals: number }> {
+    const point: NewPoint = {
+      organization_id: t.organizationId, material_system_id: t.materialSystemId, metric: 'free_rise_density_kg_m3', station_id: null, device_id: null,
+      lot_a_id: t.lotAId, lot_b_id: t.lotBId, batch_id: null, reading_id: null, cup_test_id: t.id, value: t.freeRiseDensityKgM3, at: new Date(t.testedAt), source_key: t.id,
+    };
+    return { signals: await this.takePoints(trx, [point]) };
+  }
+
+  /**
+   * In the transaction that records a demolded part's mass: its molded density becomes a point (one
+   * per part; the parts of a batch are one subgroup on an X̄–R chart). A re-weighed part moves its point.
+   */
+  async recordPartDensity(trx: Knex.Transaction, p: { partId: string; organizationId: string; materialSystemId: string; batchId: string; stationId: string | null; deviceId: string | null; readingId: string | null; lotAId: string | null; lotBId: string | null; densityKgM3: number; at: Date | string }): Promise<{ signals: number }> {
+    const point: NewPoint = {
+      organization_id: p.organizationId, material_system_id: p.materialSystemId, metric: 'part_density_kg_m3', station_id: p.stationId, device_id: p.deviceId,
+      lot_a_id: p.lotAId, lot_b_id: p.lotBId, batch_id: p.batchId, reading_id: p.readingId, cup_test_id: null, value: p.densityKgM3, at: new Date(p.at), source_key: `part:${p.partId}`,
+    };
+    return { signals: await this.takePoints(trx, [point]) };
+  }
+
+  /** Stores points and checks every frozen chart that takes one: its individuals, or its batch's subgroup. */
+  private async takePoints(trx: Knex.Transaction, points: NewPoint[]): Promise<number> {
     let raised = 0;
-    for (const p of await this.pointsOf(trx, r)) {
+    for (const p of points) {
       const stored = await this.repo.upsertPoint(trx, p);
-      for (const chart of await this.repo.chartsForPoint(trx, p)) raised += await this.checkRules(trx, chart, stored);
+      for (const chart of await this.repo.chartsForPoint(trx, p)) {
+        if (chart.kind !== 'xbar_r') raised += await this.checkRules(trx, chart, stored);
+        else if (p.batch_id) raised += await this.checkSubgroupRules(trx, chart, p);
+      }
     }
-    return { signals: raised };
+    return raised;
   }
 
   private async pointsOf(trx: Knex.Transaction, r: ReadingFacts): Promise<NewPoint[]> {
@@ -175,18 +246,48 @@ export class ControlService {
       const row = await this.repo.insertSignal(trx, { organization_id: chart.organization_id, chart_id: chart.id, rule: s.rule, point_id: String(last.id), reading_id: last.reading_id, batch_id: last.batch_id, value: Number(last.value), points });
       if (!row) continue;
       n++;
-      await this.events.emit(trx, {
-        organizationId: chart.organization_id,
-        type: 'drift.detected',
-        subjectType: 'control_signal',
-        subjectId: row.id,
-        data: {
-          signalId: row.id, chartId: chart.id, chartName: chart.name, materialSystemId: chart.material_system_id, metric: chart.metric, rule: s.rule, ruleDescription: RUN_RULES[s.rule].description,
-          readingId: last.reading_id, batchId: last.batch_id, value: Number(last.value), centre: limits.centre, ucl: limits.ucl, lcl: limits.lcl,
-        },
-      });
+      await this.emitDrift(trx, chart, row.id, s.rule, { readingId: last.reading_id, batchId: last.batch_id, value: Number(last.value), centre: limits.centre, ucl: limits.ucl, lcl: limits.lcl });
     }
     return n;
+  }
+
+  /**
+   * An X̄–R chart's rules on the subgroup of the point's batch: each mean standardised against its
+   * own limits (σ/√n), so subgroups of different sizes share one scale of zones. The subgroup is
+   * checked as it grows (a new value of the batch can complete a pattern); a signal is raised once
+   * per rule and subgroup.
+   */
+  private async checkSubgroupRules(trx: Knex.Transaction, chart: ChartRow, p: NewPoint): Promise<number> {
+    const b = chart.baseline!;
+    const rules = chart.rules as RunRuleId[];
+    await this.repo.lockChart(trx, chart.id);
+    const { rows } = await this.repo.subgroups(trx, chart, { limit: historyNeeded(rules), upToBatch: p.batch_id! });
+    const last = rows[rows.length - 1];
+    // the batch's subgroup is not chartable yet (one value so far) or no longer (more than ten)
+    if (!last || last.batch_id !== p.batch_id) return 0;
+    const sigmaOf = (g: SubgroupRow) => subgroupLimits(b.centre, b.sigmaWithin!, g.n).sigmaMean;
+    const z = rows.map((g) => (g.mean - b.centre) / sigmaOf(g));
+    let n = 0;
+    for (const s of evaluateRunRules(z, { centre: 0, sigma: 1 }, rules)) {
+      if (s.index !== rows.length - 1) continue;
+      const points = s.points.map((i) => rows[i]!).map((g) => ({ id: g.first_id, value: g.mean, at: ms(g.at), readingId: null, batchId: g.batch_id }));
+      const row = await this.repo.insertSignal(trx, { organization_id: chart.organization_id, chart_id: chart.id, rule: s.rule, point_id: last.first_id, reading_id: p.reading_id, batch_id: last.batch_id, value: last.mean, points });
+      if (!row) continue;
+      n++;
+      const own = subgroupLimits(b.centre, b.sigmaWithin!, last.n);
+      await this.emitDrift(trx, chart, row.id, s.rule, { readingId: p.reading_id, batchId: last.batch_id, value: last.mean, centre: b.centre, ucl: own.ucl, lcl: own.lcl });
+    }
+    return n;
+  }
+
+  private async emitDrift(trx: Knex.Transaction, chart: ChartRow, signalId: string, rule: RunRuleId, at: { readingId: string | null; batchId: string | null; value: number; centre: number; ucl: number; lcl: number }): Promise<void> {
+    await this.events.emit(trx, {
+      organizationId: chart.organization_id,
+      type: 'drift.detected',
+      subjectType: 'control_signal',
+      subjectId: signalId,
+      data: { signalId, chartId: chart.id, chartName: chart.name, materialSystemId: chart.material_system_id, metric: chart.metric, rule, ruleDescription: RUN_RULES[rule].description, ...at },
+    });
   }
 
   private async checkScope(c: RequestContext, body: ChartInput): Promise<void> {
@@ -198,6 +299,9 @@ export class ControlService {
       if (id && !(await this.repo.exists(table, orgId, id))) errors.push({ pointer: `/${field}`, detail: 'nothing with that id in your organization', code: 'reference' });
     }
     if ([body.stationId, body.deviceId, body.lotId].filter(Boolean).length > 1) errors.push({ pointer: '/stationId', detail: 'a chart narrows to one of station, device or lot', code: 'conflicting' });
+    if (body.kind === 'xbar_r' && !CONTROL_METRICS[body.metric].subgroups) {
+      errors.push({ pointer: '/kind', detail: `a batch gives one ${CONTROL_METRICS[body.metric].label.toLowerCase()} value (one per ${CONTROL_METRICS[body.metric].per}), so it has no subgroups: chart it as individuals`, code: 'conflicting' });
+    }
     if (body.lotId && body.metric === 'free_rise_density_kg_m3') errors.push({ pointer: '/lotId', detail: 'cup-test density is charted per system', code: 'conflicting' });
     if (errors.length) throw validationProblem(errors);
   }
@@ -212,13 +316,14 @@ export class ControlService {
         name: body.name?.trim() || CONTROL_METRICS[body.metric].label,
         material_system_id: body.materialSystemId,
         metric: body.metric,
+        kind: body.kind ?? 'individuals',
         station_id: body.stationId ?? null,
         device_id: body.deviceId ?? null,
         lot_id: body.lotId ?? null,
         rules,
         created_by_label: actor.actorLabel,
       });
-      await this.audit.record({ organizationId: row.organization_id, ...actor, action: 'control_chart.created', targetType: 'control_chart', targetId: row.id, details: { metric: row.metric, rules }, ip: c.ip, userAgent: c.userAgent }, trx);
+      await this.audit.record({ organizationId: row.organization_id, ...actor, action: 'control_chart.created', targetType: 'control_chart', targetId: row.id, details: { metric: row.metric, kind: row.kind, rules }, ip: c.ip, userAgent: c.userAgent }, trx);
       return chartView(row);
     });
   }
@@ -267,31 +372,43 @@ export class ControlService {
     return this.db.transaction(async (trx) => {
       const chart = await this.chart(c, id, trx);
       const need = minBaselinePoints(chart.rules as RunRuleId[]);
-      const f = await this.repo.baselineFigures(chart, hasN ? { firstN: body.firstN } : { from, to });
-      if (f.n < need || f.centre === null || f.mr_bar === null) {
-        throw validationProblem([{ pointer: hasN ? '/firstN' : '/from', detail: `the baseline would hold ${f.n} points; this chart's rules need at least ${need}`, code: 'minimum' }], 'Too few points for a baseline.');
-      }
-      if (hasN && f.n < body.firstN!) {
-        throw validationProblem([{ pointer: '/firstN', detail: `the chart has only ${f.n} points so far`, code: 'maximum' }], 'Too few points for a baseline.');
-      }
-      const baseline: BaselineRecord = {
-        method: hasN ? 'first_n' : 'period',
-        firstN: body.firstN ?? null,
-        from: from ? from.toISOString() : null,
-        to: to ? to.toISOString() : null,
-        n: f.n,
-        centre: Number(f.centre),
-        mrBar: Number(f.mr_bar),
-        sdOverall: f.sd === null ? null : Number(f.sd),
-        firstPointAt: ms(f.first_at!),
-        lastPointAt: ms(f.last_at!),
-        frozenAt: new Date().toISOString(),
-        frozenBy: actor.actorLabel,
-      };
+      const how = { method: hasN ? ('first_n' as const) : ('period' as const), firstN: body.firstN ?? null, from: from ? from.toISOString() : null, to: to ? to.toISOString() : null, frozenAt: new Date().toISOString(), frozenBy: actor.actorLabel };
+      const baseline = chart.kind === 'xbar_r' ? await this.subgroupBaseline(trx, chart, need, hasN ? { firstN: body.firstN! } : { from: from!, to: to! }, how) : await this.individualsBaseline(chart, need, hasN ? { firstN: body.firstN! } : { from: from!, to: to! }, how);
       const row = await this.repo.updateChart(trx, chart.id, { baseline });
       await this.audit.record({ organizationId: chart.organization_id, ...actor, action: 'control_chart.baseline_frozen', targetType: 'control_chart', targetId: chart.id, details: { ...baseline }, ip: c.ip, userAgent: c.userAgent }, trx);
       return chartView(row);
     });
+  }
+
+  private async individualsBaseline(chart: ChartRow, need: number, pick: { firstN: number } | { from: Date; to: Date }, how: Pick<BaselineRecord, 'method' | 'firstN' | 'from' | 'to' | 'frozenAt' | 'frozenBy'>): Promise<BaselineRecord> {
+    const hasN = 'firstN' in pick;
+    {
+      const f = await this.repo.baselineFigures(chart, pick);
+      if (f.n < need || f.centre === null || f.mr_bar === null) {
+        throw validationProblem([{ pointer: hasN ? '/firstN' : '/from', detail: `the baseline would hold ${f.n} points; this chart's rules need at least ${need}`, code: 'minimum' }], 'Too few points for a baseline.');
+      }
+      if (hasN && f.n < pick.firstN) {
+        throw validationProblem([{ pointer: '/firstN', detail: `the chart has only ${f.n} points so far`, code: 'maximum' }], 'Too few points for a baseline.');
+      }
+      return { ...how, n: f.n, centre: Number(f.centre), mrBar: Number(f.mr_bar), sdOverall: f.sd === null ? null : Number(f.sd), firstPointAt: ms(f.first_at!), lastPointAt: ms(f.last_at!) };
+    }
+  }
+
+  /** An X̄–R baseline: the first N subgroups (batches) or those of a period; x̿ and σ from their means and ranges. */
+  private async subgroupBaseline(trx: Knex.Transaction, chart: ChartRow, need: number, pick: { firstN: number } | { from: Date; to: Date }, how: Pick<BaselineRecord, 'method' | 'firstN' | 'from' | 'to' | 'frozenAt' | 'frozenBy'>): Promise<BaselineRecord> {
+    const hasN = 'firstN' in pick;
+    const { rows } = await this.repo.subgroups(trx, chart, hasN ? { limit: pick.firstN, oldest: true } : { from: pick.from, to: pick.to, limit: MAX_BASELINE_SUBGROUPS, oldest: true });
+    if (rows.length < need) {
+      throw validationProblem([{ pointer: hasN ? '/firstN' : '/from', detail: `the baseline would hold ${rows.length} subgroups (batches with 2 to 10 values); this chart's rules need at least ${need}`, code: 'minimum' }], 'Too few subgroups for a baseline.');
+    }
+    if (hasN && rows.length < pick.firstN) {
+      throw validationProblem([{ pointer: '/firstN', detail: `the chart has only ${rows.length} subgroups so far`, code: 'maximum' }], 'Too few subgroups for a baseline.');
+    }
+    const rBar = rows.reduce((t, g) => t + g.range, 0) / rows.length;
+    return {
+      ...how, n: rows.length, centre: grandMean(rows), mrBar: 0, sigmaWithin: withinSigma(rows), rBar, subgroupSize: commonSize(rows), sdOverall: null,
+      firstPointAt: ms(rows[0]!.at), lastPointAt: ms(rows[rows.length - 1]!.at),
+    };
   }
 
   /** The chart's points, moving ranges, limits (frozen, or trial from the points shown), signals and capability. */
@@ -313,18 +430,18 @@ export class ControlService {
     if (errors.length) throw malformed('The chart query is not valid.', errors);
     const s = await this.repo.series(chart, from, to, limit);
     const frozen = chart.baseline;
-    const limits = frozen ? limitsFrom(frozen.centre, frozen.mrBar) : s.mean !== null && s.mrBar !== null ? limitsFrom(s.mean, Number(s.mrBar)) : null;
-    const marks = await this.repo.signalsOnPoints(chart.id, s.points.map((p) => String(p.id)));
-    const byPoint = new Map<string, { id: string; rule: string; acknowledged: boolean }[]>();
-    for (const m of marks) byPoint.set(m.point_id, [...(byPoint.get(m.point_id) ?? []), { id: m.id, rule: m.rule, acknowledged: m.acknowledged_at !== null }]);
+    const warnings: string[] = [];
+    const xbar = chart.kind === 'xbar_r' ? await this.subgroupData(chart, from, to, limit, warnings) : null;
+    const limits = xbar ? xbar.limits : frozen ? limitsFrom(frozen.centre, frozen.mrBar) : s.mean !== null && s.mrBar !== null ? limitsFrom(s.mean, Number(s.mrBar)) : null;
+    const byPoint = xbar ? new Map<string, SignalMark[]>() : await this.marksOn(chart.id, s.points.map((p) => String(p.id)));
     const values = s.points.map((p) => Number(p.value));
     const spec = await this.specLimits(c, chart);
-    const warnings: string[] = [];
-    if (!frozen) warnings.push('trial limits: computed from the points shown; freeze a baseline to watch the process against fixed limits');
+    if (!frozen) warnings.push(`trial limits: computed from the ${xbar ? 'subgroups' : 'points'} shown; freeze a baseline to watch the process against fixed limits`);
     return {
       chart: chartView(chart),
       limitsKind: frozen ? 'frozen' : 'trial',
       limits,
+      subgroups: xbar ? xbar.subgroups : null,
       points: s.points.map((p) => ({
         id: String(p.id),
         value: Number(p.value),
@@ -335,11 +452,31 @@ export class ControlService {
         cupTestId: p.cup_test_id,
         signals: byPoint.get(String(p.id)) ?? [],
       })),
-      summary: { n: s.n, mean: s.mean, mrBar: s.mrBar === null ? null : Number(s.mrBar), sdOverall: s.sd === null ? null : Number(s.sd) },
+      summary: { n: s.n, mean: s.mean, mrBar: xbar || s.mrBar === null ? null : Number(s.mrBar), sdOverall: s.sd === null ? null : Number(s.sd), subgroups: xbar ? xbar.subgroups.length : null },
       specification: spec,
       capability: values.length && limits ? capability(values, spec, limits.sigma) : null,
       warnings,
     };
+  }
+
+  private async marksOn(chartId: string, pointIds: string[]): Promise<Map<string, SignalMark[]>> {
+    const byPoint = new Map<string, SignalMark[]>();
+    for (const m of await this.repo.signalsOnPoints(chartId, pointIds)) byPoint.set(m.point_id, [...(byPoint.get(m.point_id) ?? []), { id: m.id, rule: m.rule as RunRuleId, acknowledged: m.acknowledged_at !== null }]);
+    return byPoint;
+  }
+
+  /** An X̄–R chart's subgroups in the period, each with its own limits (frozen, or trial from those shown). */
+  private async subgroupData(chart: ChartRow, from: Date | null, to: Date | null, limit: number, warnings: string[]) {
+    const g = await this.repo.subgroups(this.db, chart, { from, to, limit });
+    const b = chart.baseline;
+    const basis = b ? { centre: b.centre, sigma: b.sigmaWithin!, n: b.subgroupSize! } : g.rows.length >= 2 ? { centre: grandMean(g.rows), sigma: withinSigma(g.rows), n: commonSize(g.rows) } : null;
+    if (g.left) warnings.push(`${g.left} batch${g.left === 1 ? '' : 'es'} left out of the subgroups: a subgroup needs 2 to 10 values`);
+    const marks = await this.marksOn(chart.id, g.rows.map((r) => r.first_id));
+    const subgroups = g.rows.map((r) => {
+      const l = basis && chartableSubgroup(r.n) ? subgroupLimits(basis.centre, basis.sigma, r.n) : null;
+      return { id: r.first_id, batchId: r.batch_id, n: r.n, mean: r.mean, range: r.range, at: ms(r.at), ucl: l?.ucl ?? null, lcl: l?.lcl ?? null, rCentre: l?.rCentre ?? null, rUcl: l?.rUcl ?? null, rLcl: l?.rLcl ?? null, signals: marks.get(r.first_id) ?? [] };
+    });
+    return { subgroups, limits: basis ? subgroupLimitsFrom(basis.centre, basis.sigma, basis.n) : null };
   }
 
   /** The system's tolerance as specification limits of the chart's metric (null when it has none). */
@@ -357,6 +494,8 @@ export class ControlService {
         return { lsl: num('component_temperature_min_c'), usl: num('component_temperature_max_c') };
       case 'free_rise_density_kg_m3':
         return { lsl: num('free_rise_density_min_kg_m3'), usl: num('free_rise_density_max_kg_m3') };
+      case 'part_density_kg_m3':
+        return { lsl: null, usl: null };
     }
   }
 

@@ -4,6 +4,7 @@ import type { Knex } from 'knex';
 import type { Env } from '../config/env.js';
 import { KNEX } from '../database/database.module.js';
 import { MailService } from '../mail/mail.service.js';
+import { type DriftFacts, driftMail } from './drift-mail.js';
 import { digestMail, type NoticeFacts, rejectionMail } from './rejection-mail.js';
 
 const MAX_ATTEMPTS = 6;
@@ -16,7 +17,10 @@ interface NoticeRow {
   email: string;
 }
 
-/** Engineers' e-mail about rejected readings: one per reading, or a digest, or none (their choice). */
+/**
+ * Engineers' e-mail about rejected readings (one per reading, a digest, or none) and about drift
+ * signals of control charts (one per signal, or none): each person's choice on their profile.
+ */
 @Injectable()
 export class NotificationsService {
   private readonly log = new Logger('notifications');
@@ -28,6 +32,26 @@ export class NotificationsService {
 
   /** In the relay's transaction: a notice row per engineer who wants one, for each reading.rejected. */
   async fanOut(trx: Knex.Transaction, events: { id: string; organization_id: string; type: string; subject_id: string }[]): Promise<number> {
+    return (await this.fanOutRejections(trx, events)) + (await this.fanOutDrift(trx, events));
+  }
+
+  /** A notice per engineer who wants drift mail, for each drift.detected; the event's data is kept for the mail. */
+  private async fanOutDrift(trx: Knex.Transaction, events: { id: string; organization_id: string; type: string }[]): Promise<number> {
+    const drift = events.filter((e) => e.type === 'drift.detected');
+    if (!drift.length) return 0;
+    const people = await trx('users').whereIn('organization_id', [...new Set(drift.map((e) => e.organization_id))]).where({ role: 'engineer', disabled: false, notify_drift: 'each' }).select('id', 'organization_id');
+    if (!people.length) return 0;
+    const payloads = new Map<string, DriftFacts>((await trx('events').whereIn('id', drift.map((e) => e.id)).select('id', 'payload')).map((e) => [e.id, e.payload]));
+    const rows = drift.flatMap((e) => {
+      const facts = payloads.get(e.id);
+      if (!facts) return [];
+      return people.filter((p) => p.organization_id === e.organization_id).map((p) => ({ organization_id: e.organization_id, user_id: p.id, event_id: e.id, signal_id: facts.signalId, facts: JSON.stringify(facts) }));
+    });
+    if (rows.length) await trx('drift_notices').insert(rows).onConflict(['user_id', 'event_id']).ignore();
+    return rows.length;
+  }
+
+  private async fanOutRejections(trx: Knex.Transaction, events: { id: string; organization_id: string; type: string; subject_id: string }[]): Promise<number> {
     const rejected = events.filter((e) => e.type === 'reading.rejected');
     if (!rejected.length) return 0;
     const people = await trx('users').whereIn('organization_id', [...new Set(rejected.map((e) => e.organization_id))]).where({ role: 'engineer', disabled: false }).whereNot('notify_rejections', 'off').select('id', 'organization_id', 'notify_rejections');
@@ -36,16 +60,24 @@ export class NotificationsService {
     return rows.length;
   }
 
-  /** Sends due one-by-one notices; a failed send is retried with backoff, then given up. */
+  /** Sends due one-by-one notices (rejections, then drift); a failed send is retried with backoff, then given up. */
   async sendEach(limit = 20): Promise<number> {
-    return this.db.transaction(async (trx) => {
+    const rejections = await this.db.transaction(async (trx) => {
       const due = await this.claimDue(trx, 'each', limit);
       for (const n of due) {
         const [facts] = await this.facts(trx, [n.reading_id]);
-        await this.deliver(trx, [n], () => (facts ? rejectionMail(facts, this.publicUrl) : null), n.email);
+        await this.deliver(trx, 'rejection_notices', [n], () => (facts ? rejectionMail(facts, this.publicUrl) : null), n.email);
       }
       return due.length;
     });
+    const drift = await this.db.transaction(async (trx) => {
+      const due = await trx('drift_notices as n').join('users as u', 'u.id', 'n.user_id')
+        .where('n.status', 'pending').where('n.next_attempt_at', '<=', trx.fn.now())
+        .orderBy('n.created_at').limit(limit).forUpdate('n').skipLocked().select('n.id', 'n.attempts', 'n.facts', 'u.email');
+      for (const n of due) await this.deliver(trx, 'drift_notices', [n], () => driftMail(n.facts as DriftFacts, this.publicUrl), n.email);
+      return due.length;
+    });
+    return rejections + drift;
   }
 
   /** One message per person gathering every pending digest notice. */
@@ -56,7 +88,7 @@ export class NotificationsService {
       for (const n of due) byUser.set(n.user_id, [...(byUser.get(n.user_id) ?? []), n]);
       for (const notices of byUser.values()) {
         const facts = await this.facts(trx, notices.map((n) => n.reading_id));
-        await this.deliver(trx, notices, () => (facts.length ? digestMail(facts, this.publicUrl) : null), notices[0]!.email);
+        await this.deliver(trx, 'rejection_notices', notices, () => (facts.length ? digestMail(facts, this.publicUrl) : null), notices[0]!.email);
       }
       return byUser.size;
     });
@@ -69,19 +101,19 @@ export class NotificationsService {
       .orderBy('n.created_at').limit(limit).forUpdate('n').skipLocked().select('n.id', 'n.user_id', 'n.reading_id', 'n.attempts', 'u.email');
   }
 
-  private async deliver(trx: Knex.Transaction, notices: NoticeRow[], compose: () => { subject: string; text: string } | null, to: string): Promise<void> {
+  private async deliver(trx: Knex.Transaction, table: 'rejection_notices' | 'drift_notices', notices: Pick<NoticeRow, 'id' | 'attempts'>[], compose: () => { subject: string; text: string } | null, to: string): Promise<void> {
     const ids = notices.map((n) => n.id);
     const m = compose();
     // the reading is gone (its organization deleted): nothing to say
-    if (!m) return void (await trx('rejection_notices').whereIn('id', ids).update({ status: 'failed', last_error: 'reading not found' }));
+    if (!m) return void (await trx(table).whereIn('id', ids).update({ status: 'failed', last_error: 'reading not found' }));
     try {
       await this.mail.send({ to, ...m });
-      await trx('rejection_notices').whereIn('id', ids).update({ status: 'sent', sent_at: trx.fn.now(), attempts: trx.raw('attempts + 1') });
+      await trx(table).whereIn('id', ids).update({ status: 'sent', sent_at: trx.fn.now(), attempts: trx.raw('attempts + 1') });
     } catch (e) {
       const attempts = Math.max(...notices.map((n) => n.attempts)) + 1;
       const delayS = Math.min(3600, 5 * 2 ** attempts);
-      this.log.warn(`rejection notice to ${to} not sent (attempt ${attempts}): ${(e as Error).message}`);
-      await trx('rejection_notices').whereIn('id', ids).update({
+      this.log.warn(`${table === 'drift_notices' ? 'drift' : 'rejection'} notice to ${to} not sent (attempt ${attempts}): ${(e as Error).message}`);
+      await trx(table).whereIn('id', ids).update({
         attempts,
         last_error: (e as Error).message.slice(0, 500),
         ...(attempts >= MAX_ATTEMPTS ? { status: 'failed' } : { next_attempt_at: trx.raw(`now() + make_interval(secs => ${delayS})`) }),

@@ -1,6 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
 import { fitFreeRiseDensity, fitRejection, FIT_TRUST, forReader, judgeCupTest, parametersOf, type Finding, type UnitSystem } from '@pourgate/batching';
+import { ControlService } from '../control/control.service.js';
 import { MaterialSystemsService } from '../materials/material-systems.service.js';
 import { AuditService } from '../audit/audit.service.js';
 import { actorOf, type RequestContext } from '../auth/principal.js';
@@ -85,7 +86,7 @@ export function cupTestView(r: CupTestRow, units: UnitSystem = 'metric') {
 
 @Injectable()
 export class QcCupTestsService {
-  constructor(@Inject(KNEX) private readonly db: Knex, private readonly audit: AuditService, private readonly lots: LotsService, private readonly systems: MaterialSystemsService) {}
+  constructor(@Inject(KNEX) private readonly db: Knex, private readonly audit: AuditService, private readonly lots: LotsService, private readonly systems: MaterialSystemsService, private readonly control: ControlService) {}
 
   base(orgId: string) {
     return this.db('qc_cup_tests')
@@ -191,6 +192,8 @@ export class QcCupTestsService {
       if (judged.verdict === 'failed') {
         await this.lots.holdForCupTest(trx, orgId, [body.lotAId, body.lotBId].filter((x): x is string => !!x), row.id, judged.findings);
       }
+      // the free-rise density is a point of the system's control charts (a drift signal rides on this transaction)
+      await this.control.recordCupTest(trx, { id: row.id, organizationId: orgId, materialSystemId: ms.id, lotAId: body.lotAId ?? null, lotBId: body.lotBId ?? null, freeRiseDensityKgM3: density!, testedAt: body.testedAt });
       await this.audit.record({ organizationId: orgId, ...actorOf(c.principal), action: 'qc_cup_test.recorded', targetType: 'qc_cup_test', targetId: row.id, details: { materialSystemId: ms.id, freeRiseDensityKgM3: density }, ip: c.ip, userAgent: c.userAgent }, trx);
       return row.id as string;
     });

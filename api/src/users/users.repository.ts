@@ -13,6 +13,7 @@ export interface UserRow {
   disabled: boolean;
   unit_system: 'metric' | 'imperial';
   notify_rejections: 'each' | 'digest' | 'off';
+  notify_drift: 'each' | 'off';
   last_sign_in_at: Date | null;
   created_at: Date;
   updated_at: Date;

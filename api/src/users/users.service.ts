@@ -78,12 +78,13 @@ export class UsersService {
     return this.tokens.me(c.principal.id);
   }
 
-  async updateMe(c: RequestContext, body: { name?: string; unitSystem?: 'metric' | 'imperial'; notifyRejections?: 'each' | 'digest' | 'off'; currentPassword?: string; newPassword?: string }): Promise<MeView> {
+  async updateMe(c: RequestContext, body: { name?: string; unitSystem?: 'metric' | 'imperial'; notifyRejections?: 'each' | 'digest' | 'off'; notifyDrift?: 'each' | 'off'; currentPassword?: string; newPassword?: string }): Promise<MeView> {
     const u = (await this.users.findById(c.principal.id))!;
     const patch: Partial<UserRow> = {};
     if (body.name) patch.name = body.name;
     if (body.unitSystem) patch.unit_system = body.unitSystem;
     if (body.notifyRejections) patch.notify_rejections = body.notifyRejections;
+    if (body.notifyDrift) patch.notify_drift = body.notifyDrift;
     if (body.newPassword) {
       if (!u.password_hash || !(await argon2.verify(u.password_hash, body.currentPassword ?? ''))) {
         throw validationProblem([{ pointer: '/currentPassword', detail: 'is not your current password', code: 'password' }]);

@@ -1,7 +1,7 @@
 import { describe, expect, it } from '@jest/globals';
 import { capability, MIN_CAPABILITY_POINTS } from './capability.js';
 import { MOVING_RANGE_CONSTANTS, shewhartConstants } from './constants.js';
-import { individualsLimits, movingRanges, xbarRLimits } from './limits.js';
+import { chartableSubgroup, grandMean, individualsLimits, movingRanges, subgroupLimits, withinSigma, xbarRLimits } from './limits.js';
 
 describe('limits and capability', () => {
   it('E2 is 3 / d2 as the handbook rounds it, and the table refuses subgroups it does not hold', () => {
@@ -39,5 +39,29 @@ describe('limits and capability', () => {
     const upperOnly = capability([1, 2, 3], { usl: 5 }, 1);
     expect(upperOnly.cp).toBeNull();
     expect(upperOnly.cpk).toBeCloseTo(1, 12);
+  });
+});
+
+describe('X̄–R with subgroups of several sizes', () => {
+  it('with equal sizes, the per-subgroup limits are x̿ ± A2·R̄ and D3·R̄ … D4·R̄ of the equal-size chart', () => {
+    const groups = [[9, 10, 11, 10, 10], [10, 12, 9, 10, 11], [11, 10, 10, 8, 10], [10, 10, 11, 12, 9]];
+    const eq = xbarRLimits(groups);
+    const figs = groups.map((g) => ({ n: g.length, mean: g.reduce((a, b) => a + b) / g.length, range: Math.max(...g) - Math.min(...g) }));
+    const sigma = withinSigma(figs);
+    const l = subgroupLimits(grandMean(figs), sigma, 5);
+    expect(grandMean(figs)).toBeCloseTo(eq.centre, 12);
+    // A2 is printed to three decimals, so the limits agree to the table's rounding
+    expect(l.ucl).toBeCloseTo(eq.ucl, 2);
+    expect(l.lcl).toBeCloseTo(eq.lcl, 2);
+    expect(l.rUcl).toBeCloseTo(eq.rUcl, 10);
+    expect(l.rCentre).toBeCloseTo(eq.rBar, 10);
+  });
+
+  it('weighs each mean by its size and skips subgroups the table does not cover', () => {
+    const figs = [{ n: 2, mean: 10, range: 1 }, { n: 4, mean: 13, range: 2 }, { n: 1, mean: 100, range: 0 }];
+    expect(grandMean(figs)).toBeCloseTo((2 * 10 + 4 * 13) / 6, 12);
+    expect(withinSigma(figs)).toBeCloseTo((1 / 1.128 + 2 / 2.059) / 2, 12);
+    expect(() => withinSigma([{ n: 2, mean: 1, range: 1 }])).toThrow(RangeError);
+    expect(chartableSubgroup(11)).toBe(false);
   });
 });

@@ -77,3 +77,56 @@ export function xbarRLimits(subgroups: readonly (readonly number[])[]): XbarRLim
 export function zScore(value: number, limits: Pick<ChartLimits, 'centre' | 'sigma'>): number {
   return limits.sigma > 0 ? (value - limits.centre) / limits.sigma : value === limits.centre ? 0 : Math.sign(value - limits.centre) * Infinity;
 }
+
+/** A subgroup as PostgreSQL reports it: its size, mean and range. */
+export interface SubgroupFigures {
+  n: number;
+  mean: number;
+  range: number;
+}
+
+/** Limits of one subgroup's mean and range on an X̄–R chart whose subgroups differ in size. */
+export interface SubgroupLimits {
+  /** σ of a mean of n values: σ / √n. */
+  sigmaMean: number;
+  ucl: number;
+  lcl: number;
+  rCentre: number;
+  rUcl: number;
+  rLcl: number;
+}
+
+/** Whether a subgroup can be charted: the constants are tabulated for 2 … 10 values. */
+export function chartableSubgroup(n: number): boolean {
+  return Number.isInteger(n) && n >= MIN_SUBGROUP_SIZE_FOR_RANGE && n <= 10;
+}
+const MIN_SUBGROUP_SIZE_FOR_RANGE = 2;
+
+/**
+ * Within-subgroup σ from subgroups of several sizes: the mean of Rᵢ / d2(nᵢ). With equal sizes it is
+ * R̄ / d2, so the limits below are those of `xbarRLimits` (x̿ ± A2·R̄, D3·R̄ … D4·R̄).
+ */
+export function withinSigma(subgroups: readonly SubgroupFigures[]): number {
+  const usable = subgroups.filter((g) => chartableSubgroup(g.n));
+  if (usable.length < 2) throw new RangeError('an X̄–R chart needs at least 2 subgroups of 2 to 10 values');
+  return mean(usable.map((g) => g.range / shewhartConstants(g.n).d2));
+}
+
+/** The grand mean x̿ of subgroups of several sizes, each mean weighed by its size. */
+export function grandMean(subgroups: readonly SubgroupFigures[]): number {
+  const usable = subgroups.filter((g) => chartableSubgroup(g.n));
+  const total = usable.reduce((s, g) => s + g.n, 0);
+  if (total === 0) throw new RangeError('no chartable subgroup');
+  return usable.reduce((s, g) => s + g.n * g.mean, 0) / total;
+}
+
+/**
+ * One subgroup's limits from x̿ and the within σ: x̿ ± 3σ/√n; the range chart's centre d2·σ and
+ * limits D3·d2·σ … D4·d2·σ (NIST/SEMATECH e-Handbook §6.3.2 with σ = R̄ / d2).
+ */
+export function subgroupLimits(centre: number, sigma: number, n: number): SubgroupLimits {
+  const k = shewhartConstants(n);
+  const sigmaMean = sigma / Math.sqrt(n);
+  const rCentre = k.d2 * sigma;
+  return { sigmaMean, ucl: centre + 3 * sigmaMean, lcl: centre - 3 * sigmaMean, rCentre, rUcl: k.D4 * rCentre, rLcl: k.D3 * rCentre };
+}
