@@ -832,6 +832,23 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/v1/control/catalogue": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** What a chart can watch (metric, unit, chart kinds) and the run rules it can use, with their sources */
+        get: operations["Control_catalogue"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/v1/control/charts": {
         parameters: {
             query?: never;
@@ -2494,6 +2511,31 @@ export interface components {
              */
             code: string;
             text: string;
+        };
+        /** What a control chart can watch and the run rules it can use */
+        "control-catalogue.view": {
+            metrics: {
+                /** @enum {unknown} */
+                metric: "ratio_error_percent" | "shot_mass_error_percent" | "component_temperature_a_c" | "component_temperature_b_c" | "free_rise_density_kg_m3" | "part_density_kg_m3";
+                label: string;
+                unit: string;
+                /** @description what gives one value: a batch, a reading, a cup test or a part */
+                per: string;
+                /** @description chart kinds the metric can be drawn as (X̄–R only where a batch gives several values) */
+                kinds: ("individuals" | "xbar_r")[];
+            }[];
+            rules: {
+                /** @enum {unknown} */
+                rule: "WE1" | "WE2" | "WE3" | "WE4" | "N1" | "N2" | "N3" | "N4" | "N5" | "N6" | "N7" | "N8";
+                /** @enum {unknown} */
+                source: "Western Electric" | "Nelson";
+                description: string;
+                /** @description points the rule's pattern spans */
+                span: number;
+            }[];
+            defaultRules: ("WE1" | "WE2" | "WE3" | "WE4" | "N1" | "N2" | "N3" | "N4" | "N5" | "N6" | "N7" | "N8")[];
+            /** @description fewest points (or subgroups) a frozen baseline holds with the default rules */
+            minBaselinePoints: number;
         };
         /** A control chart’s points, limits, signals and capability */
         "control-chart-data.view": {
@@ -8105,6 +8147,59 @@ export interface operations {
                 };
                 content: {
                     "text/event-stream": string;
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Control_catalogue: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["control-catalogue.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action control:read (roles: admin, engineer, integrator, viewer) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
                 };
             };
             /** @description An error, as RFC 9457 problem details */

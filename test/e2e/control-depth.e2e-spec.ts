@@ -123,6 +123,18 @@ afterAll(async () => {
 describe('X̄–R charts: a batch’s values as one subgroup', () => {
   let chartId: string;
 
+  it('the catalogue says which metrics can be drawn as X̄–R and which rules exist, from their sources', async () => {
+    const res = await t.http.get('/v1/control/catalogue').set(as('viewer'));
+    expect(res.status).toBe(200);
+    const kinds = Object.fromEntries(res.body.metrics.map((m: { metric: string; kinds: string[] }) => [m.metric, m.kinds]));
+    expect(kinds.ratio_error_percent).toEqual(['individuals']);
+    expect(kinds.component_temperature_a_c).toEqual(['individuals', 'xbar_r']);
+    expect(kinds.part_density_kg_m3).toEqual(['individuals', 'xbar_r']);
+    expect(res.body.rules).toHaveLength(12);
+    expect(res.body.rules.find((r: { rule: string }) => r.rule === 'N7')).toMatchObject({ source: 'Nelson', span: 15 });
+    expect(res.body.defaultRules).toEqual(['WE1', 'WE2', 'WE3', 'WE4']);
+  });
+
   it('refuses X̄–R for a metric a batch gives once, storing nothing', async () => {
     expectProblem(await t.http.post('/v1/control/charts').set(as('engineer')).send({ materialSystemId: systemId, metric: 'ratio_error_percent', kind: 'xbar_r' }), 422, '/kind');
     expectProblem(await t.http.post('/v1/control/charts').set(as('engineer')).send({ materialSystemId: systemId, metric: 'component_temperature_a_c', kind: 'pareto' }), 422, '/kind');

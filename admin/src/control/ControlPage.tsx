@@ -2,9 +2,13 @@ import { Alert, Box, Button, Card, CardContent, Chip, Dialog, DialogActions, Dia
 import { ChartsReferenceLine } from '@mui/x-charts/ChartsReferenceLine';
 import { LineChart } from '@mui/x-charts/LineChart';
 import { useCallback, useEffect, useState } from 'react';
+import { usePermissions } from 'react-admin';
 import { Link, useNavigate } from 'react-router-dom';
+import { knownActions } from '../auth/access';
 import { palette } from '../theme';
 import { type ControlChart, type ControlChartData, type ControlSignal, controlApi, readingHref } from './controlApi';
+import { NewChartDialog } from './NewChartDialog';
+import { SubgroupCharts } from './SubgroupCharts';
 
 const fmt = (v: number | null | undefined, d = 3) => (v === null || v === undefined ? '—' : v.toLocaleString(undefined, { maximumFractionDigits: d }));
 const LIMIT = '#b3261e';
@@ -120,7 +124,7 @@ function Capability({ data }: { data: ControlChartData }) {
   );
 }
 
-function SignalsTable({ signals, onAcknowledge }: { signals: ControlSignal[]; onAcknowledge: (s: ControlSignal) => void }) {
+function SignalsTable({ signals, onAcknowledge, canManage }: { signals: ControlSignal[]; onAcknowledge: (s: ControlSignal) => void; canManage: boolean }) {
   if (signals.length === 0) return <Typography variant="body2" color="text.secondary">No signals.</Typography>;
   return (
     <Table size="small" data-testid="signals-table">
@@ -139,8 +143,10 @@ function SignalsTable({ signals, onAcknowledge }: { signals: ControlSignal[]; on
               <TableCell>
                 {s.acknowledgement ? (
                   <Typography variant="body2" title={s.acknowledgement.note ?? ''}>acknowledged by {s.acknowledgement.by}: {s.acknowledgement.note}</Typography>
-                ) : (
+                ) : canManage ? (
                   <Button size="small" variant="outlined" onClick={() => onAcknowledge(s)} data-testid="ack-open">Acknowledge</Button>
+                ) : (
+                  'open'
                 )}
               </TableCell>
             </TableRow>
@@ -158,16 +164,20 @@ export default function ControlPage() {
   const [data, setData] = useState<ControlChartData | null>(null);
   const [signals, setSignals] = useState<ControlSignal[]>([]);
   const [acking, setAcking] = useState<ControlSignal | null>(null);
+  const [defining, setDefining] = useState(false);
+  const { permissions } = usePermissions<string[]>();
+  const canManage = knownActions(permissions).has('control:manage');
   const [error, setError] = useState<string | null>(null);
   const [tick, setTick] = useState(0);
   const reload = useCallback(() => setTick((t) => t + 1), []);
 
+  const [chartsTick, setChartsTick] = useState(0);
   useEffect(() => {
     controlApi.charts().then((c) => {
       setCharts(c);
       setChosen((cur) => cur || c[0]?.id || '');
     }, (e: Error) => setError(e.message));
-  }, []);
+  }, [chartsTick]);
   useEffect(() => {
     if (!chosen) return;
     let live = true;
@@ -192,18 +202,31 @@ export default function ControlPage() {
   };
   const freeze = async () => {
     try {
-      await controlApi.freeze(chosen, data?.points.length ?? 0);
+      await controlApi.freeze(chosen, baselineCount);
       reload();
     } catch (e) {
       setError((e as Error).message);
     }
   };
 
+  const subgrouped = data?.chart.kind === 'xbar_r';
+  const baselineCount = (subgrouped ? data?.subgroups?.length : data?.points.length) ?? 0;
+  const created = (c: ControlChart) => {
+    setDefining(false);
+    setChosen(c.id);
+    setChartsTick((t) => t + 1);
+  };
+
   return (
     <Box component="section" aria-label="Control charts" sx={{ display: 'grid', gap: 2, p: 2 }} data-testid="control-page">
       <Typography variant="h5" component="h1">Control charts</Typography>
       {error ? <Alert severity="error">{error}</Alert> : null}
-      {charts && charts.length === 0 ? <Alert severity="info">No control chart yet. An engineer defines one per material system with POST /v1/control/charts.</Alert> : null}
+      {canManage ? (
+        <Box sx={{ '@media print': { display: 'none' } }}>
+          <Button variant="contained" onClick={() => setDefining(true)} data-testid="new-chart">New chart</Button>
+        </Box>
+      ) : null}
+      {charts && charts.length === 0 ? <Alert severity="info">No control chart yet.{canManage ? ' Define one with New chart: a metric of a material system and the run rules to watch.' : ' An engineer defines them.'}</Alert> : null}
       {charts && charts.length > 0 ? (
         <Box sx={{ display: 'flex', gap: 1, flexWrap: 'wrap', alignItems: 'center', '@media print': { display: 'none' } }}>
           <FormControl size="small" sx={{ minWidth: 280 }}>
@@ -214,7 +237,7 @@ export default function ControlPage() {
           </FormControl>
           <Button onClick={downloadCsv} disabled={!chosen} data-testid="csv">Export CSV</Button>
           <Button onClick={() => window.print()} disabled={!data}>Print</Button>
-          {data && data.limitsKind === 'trial' ? <Button onClick={freeze} disabled={(data.points.length ?? 0) < 20}>Freeze these {data.points.length} points as the baseline</Button> : null}
+          {data && data.limitsKind === 'trial' && canManage ? <Button onClick={freeze} disabled={baselineCount < 20}>Freeze these {baselineCount} {subgrouped ? 'subgroups' : 'points'} as the baseline</Button> : null}
         </Box>
       ) : null}
       {data ? (
@@ -222,11 +245,12 @@ export default function ControlPage() {
           <CardContent sx={{ display: 'grid', gap: 2 }}>
             <Box sx={{ display: 'flex', gap: 1, alignItems: 'center', flexWrap: 'wrap' }}>
               <Typography variant="h6" component="h2">{data.chart.name}</Typography>
-              <Chip size="small" label={data.limitsKind === 'frozen' ? `frozen baseline · ${data.chart.baseline?.n ?? ''} points` : 'trial limits'} color={data.limitsKind === 'frozen' ? 'primary' : 'warning'} data-testid="limits-kind" />
+              <Chip size="small" label={data.limitsKind === 'frozen' ? `frozen baseline · ${data.chart.baseline?.n ?? ''} ${subgrouped ? 'subgroups' : 'points'}` : 'trial limits'} color={data.limitsKind === 'frozen' ? 'primary' : 'warning'} data-testid="limits-kind" />
               <Chip size="small" label={`rules ${data.chart.rules.join(' ')}`} variant="outlined" />
+              <Chip size="small" label={subgrouped ? 'X̄–R, a batch per subgroup' : 'individuals'} variant="outlined" />
             </Box>
             {data.warnings.map((w) => <Alert key={w} severity="warning">{w}</Alert>)}
-            {data.points.length ? <ChartView data={data} /> : <Typography color="text.secondary">No points yet.</Typography>}
+            {subgrouped ? (data.subgroups?.length ? <SubgroupCharts data={data} /> : <Typography color="text.secondary">No subgroup yet: a batch needs 2 to 10 values.</Typography>) : data.points.length ? <ChartView data={data} /> : <Typography color="text.secondary">No points yet.</Typography>}
             <Capability data={data} />
           </CardContent>
         </Card>
@@ -235,10 +259,11 @@ export default function ControlPage() {
         <Card>
           <CardContent>
             <Typography variant="h6" component="h2" gutterBottom>Signals</Typography>
-            <SignalsTable signals={signals} onAcknowledge={setAcking} />
+            <SignalsTable signals={signals} onAcknowledge={setAcking} canManage={canManage} />
           </CardContent>
         </Card>
       ) : null}
+      <NewChartDialog open={defining} onClose={() => setDefining(false)} onCreated={created} />
       <AcknowledgeDialog signal={acking} onClose={() => setAcking(null)} onDone={() => { setAcking(null); reload(); }} />
     </Box>
   );

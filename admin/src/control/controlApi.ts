@@ -6,11 +6,24 @@ export type ControlChart = Schemas['control-chart.view'];
 export type ControlChartData = Schemas['control-chart-data.view'];
 export type ControlSignal = Schemas['control-signal.view'];
 export type ChartPoint = ControlChartData['points'][number];
+export type Subgroup = NonNullable<ControlChartData['subgroups']>[number];
+export type ControlCatalogue = Schemas['control-catalogue.view'];
+export type NewChart = Schemas['control-chart.create'];
+type MaterialSystem = Schemas['material-system.view'];
 
 const q = (v: unknown) => encodeURIComponent(JSON.stringify(v));
 
 /** The API's control routes; every figure is the server's (the console draws, it does not compute). */
 export const controlApi = {
+  async catalogue(): Promise<ControlCatalogue> {
+    return (await http.fetchJson(`${API_BASE}/control/catalogue`)).json as ControlCatalogue;
+  },
+  async systems(): Promise<Pick<MaterialSystem, 'id' | 'name'>[]> {
+    return (await http.fetchJson(`${API_BASE}/material-systems?range=${q([0, 199])}&sort=${q(['name', 'ASC'])}`)).json as MaterialSystem[];
+  },
+  async createChart(body: NewChart): Promise<ControlChart> {
+    return (await http.fetchJson(`${API_BASE}/control/charts`, { method: 'POST', body: JSON.stringify(body) })).json as ControlChart;
+  },
   async charts(): Promise<ControlChart[]> {
     return (await http.fetchJson(`${API_BASE}/control/charts?range=${q([0, 99])}&sort=${q(['name', 'ASC'])}`)).json as ControlChart[];
   },

@@ -9,7 +9,7 @@ import { formErrorsOrNotify } from '../common/errors';
 import { PageHeader } from '../common/PageHeader';
 import type { PourgateDataProvider } from '../dataProvider';
 import { Section, DetailGrid } from '../shop/DetailGrid';
-import { NOTIFY_CHOICES, UNIT_CHOICES, preferencesPatch, passwordPatch } from './profileRules';
+import { DRIFT_CHOICES, NOTIFY_CHOICES, UNIT_CHOICES, preferencesPatch, passwordPatch } from './profileRules';
 
 export default function ProfilePage() {
   const dataProvider = useDataProvider<PourgateDataProvider>();
@@ -30,7 +30,7 @@ export default function ProfilePage() {
   if (!me) return <Loading />;
 
   const savePreferences = async (values: FieldValues) => {
-    const patch = preferencesPatch({ fullName: me.name, unitSystem: me.unitSystem, notifyRejections: me.notifyRejections }, values);
+    const patch = preferencesPatch({ fullName: me.name, unitSystem: me.unitSystem, notifyRejections: me.notifyRejections, notifyDrift: me.notifyDrift }, values);
     if (!patch) {
       notify('Nothing changed.', { type: 'info' });
       return undefined;
@@ -75,11 +75,15 @@ export default function ProfilePage() {
         </Typography>
       </Section>
       <Section title="Name and preferences">
-        <Form onSubmit={savePreferences} record={{ name: me.name, unitSystem: me.unitSystem, notifyRejections: me.notifyRejections ?? 'each' }}>
+        <Form onSubmit={savePreferences} record={{ name: me.name, unitSystem: me.unitSystem, notifyRejections: me.notifyRejections, notifyDrift: me.notifyDrift }}>
           <TextInput source="name" label="Name" validate={required()} sx={{ maxWidth: 420 }} fullWidth />
           <RadioButtonGroupInput source="unitSystem" label="Units on screens and pour sheets" choices={UNIT_CHOICES} />
-          {me.notifyRejections !== undefined ? (
-            <RadioButtonGroupInput source="notifyRejections" label="E-mail about rejected readings" choices={NOTIFY_CHOICES} row={false} data-testid="notify-rejections" />
+          {/* engineers are the ones mailed about rejections and drift */}
+          {me.role === 'engineer' ? (
+            <>
+              <RadioButtonGroupInput source="notifyRejections" label="E-mail about rejected readings" choices={NOTIFY_CHOICES} row={false} data-testid="notify-rejections" />
+              <RadioButtonGroupInput source="notifyDrift" label="E-mail about drift on control charts" choices={DRIFT_CHOICES} row={false} data-testid="notify-drift" />
+            </>
           ) : null}
           <Box sx={{ mt: 1 }}>
             <SaveButton label="Save preferences" />

@@ -22,4 +22,10 @@ describe('passwordPatch', () => {
     expect(passwordPatch({ currentPassword: 'x', newPassword: 'long enough 1', confirmPassword: 'long enough 2' })).toEqual({ errors: { confirmPassword: 'The two new passwords differ.' } });
     expect(passwordPatch({ currentPassword: 'old-one', newPassword: 'long enough 1', confirmPassword: 'long enough 1' })).toEqual({ currentPassword: 'old-one', newPassword: 'long enough 1' });
   });
+  it('sends the drift mail choice only when it changed', () => {
+    const current = { fullName: 'A', unitSystem: 'metric', notifyRejections: 'each', notifyDrift: 'each' };
+    expect(preferencesPatch(current, { name: 'A', unitSystem: 'metric', notifyRejections: 'each', notifyDrift: 'off' })).toEqual({ notifyDrift: 'off' });
+    expect(preferencesPatch(current, { name: 'A', unitSystem: 'metric', notifyRejections: 'each', notifyDrift: 'each' })).toBeNull();
+    expect(preferencesPatch(current, { name: 'A', unitSystem: 'metric', notifyRejections: 'each', notifyDrift: 'weekly' })).toBeNull();
+  });
 });

@@ -1,4 +1,4 @@
-import type { NotifyRejections, ProfileUpdate } from '../views/sdk';
+import type { NotifyDrift, NotifyRejections, ProfileUpdate } from '../views/sdk';
 
 export const UNIT_CHOICES = [
   { id: 'metric', name: 'Metric (g, kg, mm, L, kg/m³, °C)' },
@@ -11,10 +11,15 @@ export const NOTIFY_CHOICES: { id: NotifyRejections; name: string }[] = [
   { id: 'off', name: 'No mail (I check the review queue)' },
 ];
 
+export const DRIFT_CHOICES: { id: NotifyDrift; name: string }[] = [
+  { id: 'each', name: 'A mail for each drift signal of a control chart' },
+  { id: 'off', name: 'No mail (I check the control charts)' },
+];
+
 /** Only what changed, as `PATCH /v1/me` takes it; null when nothing did. */
 export function preferencesPatch(
-  current: { fullName?: string; unitSystem?: string; notifyRejections?: string },
-  values: { name?: unknown; unitSystem?: unknown; notifyRejections?: unknown },
+  current: { fullName?: string; unitSystem?: string; notifyRejections?: string; notifyDrift?: string },
+  values: { name?: unknown; unitSystem?: unknown; notifyRejections?: unknown; notifyDrift?: unknown },
 ): ProfileUpdate | null {
   const patch: ProfileUpdate = {};
   const name = typeof values.name === 'string' ? values.name.trim() : '';
@@ -23,6 +28,7 @@ export function preferencesPatch(
   if (current.notifyRejections !== undefined && typeof values.notifyRejections === 'string' && values.notifyRejections !== current.notifyRejections) {
     patch.notifyRejections = values.notifyRejections as NotifyRejections;
   }
+  if (current.notifyDrift !== undefined && (values.notifyDrift === 'each' || values.notifyDrift === 'off') && values.notifyDrift !== current.notifyDrift) patch.notifyDrift = values.notifyDrift;
   return Object.keys(patch).length ? patch : null;
 }
 

@@ -4,7 +4,7 @@
  * touches.
  */
 // the generated file alone: the SDK's runtime client is not the console's concern
-import type { components, operations } from '@pourgate/sdk/src/schema';
+import type { components } from '@pourgate/sdk/src/schema';
 
 type Schemas = components['schemas'];
 
@@ -66,21 +66,7 @@ export type Overview = Schemas['overview.view'];
 export type ReleaseCheck = Schemas['batch-release-check.view'];
 export type OverviewQuery = Schemas['overview.query'];
 
-type MeAnswer = operations['Auth_me']['responses'] extends { 200: { content: { 'application/json': infer T } } } ? T : MeFallback;
-/**
- * GET /v1/me has no view schema yet: until it does, the fields the console reads of it (the person,
- * the organization, the allowed actions), which the SDK replaces as soon as the schema lands.
- */
-interface MeFallback {
-  id: string;
-  email: string;
-  name: string;
-  role: 'admin' | 'engineer' | 'integrator' | 'viewer';
-  unitSystem: 'metric' | 'imperial';
-  notifyRejections?: NotifyRejections;
-  organization: { id: string; name: string; unitSystem?: 'metric' | 'imperial' };
-  actions: string[];
-}
-export type Profile = MeAnswer;
+export type Profile = Schemas['me'];
 export type ProfileUpdate = Schemas['me.update'];
 export type NotifyRejections = NonNullable<ProfileUpdate['notifyRejections']>;
+export type NotifyDrift = NonNullable<ProfileUpdate['notifyDrift']>;

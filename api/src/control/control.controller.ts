@@ -24,6 +24,14 @@ const PeriodQuery = (): MethodDecorator => (target, key, d) => {
 export class ControlController {
   constructor(private readonly control: ControlService) {}
 
+  @Get('catalogue')
+  @Requires('control:read')
+  @ApiOperation({ summary: 'What a chart can watch (metric, unit, chart kinds) and the run rules it can use, with their sources' })
+  @Responds(200, 'control-catalogue.view')
+  catalogue() {
+    return this.control.catalogue();
+  }
+
   @Get('charts')
   @Requires('control:read')
   @ListRoute(chartsListSpec, 'control-chart.view')

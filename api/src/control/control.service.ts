@@ -1,13 +1,13 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
-import { capability, chartableSubgroup, evaluateRunRules, grandMean, historyNeeded, MOVING_RANGE_CONSTANTS, RUN_RULES, type RunRuleId, subgroupLimits, withinSigma } from '@pourgate/batching';
+import { capability, chartableSubgroup, RUN_RULE_IDS, evaluateRunRules, grandMean, historyNeeded, MOVING_RANGE_CONSTANTS, RUN_RULES, type RunRuleId, subgroupLimits, withinSigma } from '@pourgate/batching';
 import { AuditService } from '../audit/audit.service.js';
 import { actorOf, type RequestContext } from '../auth/principal.js';
 import type { ListQuery } from '../common/lists/list-query.js';
 import { type FieldError, malformed, ProblemException, validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
 import { EventsService } from '../events/events.service.js';
-import { type ChartKind, CONTROL_METRICS, type ControlMetric, DEFAULT_CHART_POINTS, DEFAULT_RULES, MAX_CHART_POINTS, MIN_BASELINE_POINTS } from './control.metrics.js';
+import { type ChartKind, CONTROL_METRIC_NAMES, CONTROL_METRICS, type ControlMetric, DEFAULT_CHART_POINTS, DEFAULT_RULES, MAX_CHART_POINTS, MIN_BASELINE_POINTS } from './control.metrics.js';
 import { type BaselineRecord, type ChartRow, ControlRepository, type NewPoint, type ReadingFacts, type SignalRow, type SubgroupRow } from './control.repository.js';
 
 export interface ChartInput {
@@ -304,6 +304,19 @@ export class ControlService {
     }
     if (body.lotId && body.metric === 'free_rise_density_kg_m3') errors.push({ pointer: '/lotId', detail: 'cup-test density is charted per system', code: 'conflicting' });
     if (errors.length) throw validationProblem(errors);
+  }
+
+  /** The metrics, chart kinds and run rules, in words, for a console or an integrator defining a chart. */
+  catalogue() {
+    return {
+      metrics: CONTROL_METRIC_NAMES.map((metric) => {
+        const m = CONTROL_METRICS[metric];
+        return { metric, label: m.label, unit: m.unit, per: m.per, kinds: m.subgroups ? ['individuals', 'xbar_r'] : ['individuals'] };
+      }),
+      rules: RUN_RULE_IDS.map((rule) => ({ rule, source: RUN_RULES[rule].source, description: RUN_RULES[rule].description, span: RUN_RULES[rule].span })),
+      defaultRules: DEFAULT_RULES,
+      minBaselinePoints: minBaselinePoints(DEFAULT_RULES),
+    };
   }
 
   async createChart(c: RequestContext, body: ChartInput) {
