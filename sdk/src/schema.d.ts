@@ -4623,8 +4623,7 @@ export interface components {
             /** @description The part's mass (mass) */
             mass: components["schemas"]["quantity"];
             /**
-             * @description scale: read off a registered scale (deviceId, or the calling device key's scale); entered: typed in
-             * @default entered
+             * @description scale: read off a registered scale (deviceId, or the calling device key's scale); entered: typed in. scale when a deviceId is given, else entered
              * @enum {unknown}
              */
             source?: "scale" | "entered";
