@@ -3674,7 +3674,7 @@ export interface components {
             /** Format: uuid */
             id: string;
             /** @enum {unknown} */
-            type: "webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed" | "drift.detected" | "drift.acknowledged";
+            type: "webhook.test" | "reading.accepted" | "reading.rejected" | "reading.waived" | "reading.upheld" | "batch.created" | "batch.state_changed" | "batch.released" | "batch.on_hold" | "batch.scrapped" | "lot.held" | "lot.hold_released" | "work_order.created" | "work_order.changed" | "work_order.completed" | "batch.disposed" | "lot.recalled" | "drift.detected" | "drift.acknowledged";
             /** Format: date-time */
             occurredAt: string;
             subject: {
