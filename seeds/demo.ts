@@ -2,6 +2,7 @@ import argon2 from 'argon2';
 import type { Knex } from 'knex';
 import { seedShopDemo } from './shop-demo.js';
 import { seedControlDemo } from './control-demo.js';
+import { seedPlanToPartDemo } from './plan-to-part-demo.js';
 
 /** The password of every demo account. Local demo only: the seed refuses to run in production. */
 export const DEMO_PASSWORD = 'pourgate-demo';
@@ -52,6 +53,7 @@ export async function seedDemo(db: Knex): Promise<string> {
     }
     if (org.slug === 'demo-shop') added += await seedShopDemo(db, row.id);
     if (org.slug === 'demo-shop') added += await seedControlDemo(db, row.id);
+    if (org.slug === 'demo-shop') added += await seedPlanToPartDemo(db, row.id);
   }
   return added ? `${added} rows added` : 'up to date';
 }

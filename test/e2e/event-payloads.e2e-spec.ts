@@ -5,7 +5,7 @@ import { schemaRegistry } from '../../api/src/common/schemas/schema-registry.js'
 import { EVENT_TYPE_NAMES } from '../../api/src/events/event-types.js';
 import { closeTestDb, makeOrg, type OrgFixture, testDb, tokensFor } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/app.js';
-import { flexSystem } from './support/shop.js';
+import { boxMold, flexSystem } from './support/shop.js';
 
 // Every event the API writes to the outbox carries a `data` that its published schema accepts.
 
@@ -61,6 +61,15 @@ describe('event payloads', () => {
     const failed = await t.http.post('/v1/qc-cup-tests').set('authorization', auth.engineer).send({ materialSystemId: qc.body.id, lotBId: lot.body.id, componentTemperatureA: { value: 22, unit: 'degC' }, componentTemperatureB: { value: 22, unit: 'degC' }, creamTime: { value: 20, unit: 's' }, freeRiseDensity: { value: 40, unit: 'kg/m3' }, testedAt: '2026-03-02T09:00:00Z' });
     expect(failed.body.verdict).toBe('failed');
     expect((await t.http.post(`/v1/lots/${lot.body.id}/release-hold`).set('authorization', auth.engineer).send({ note: 'repeat cup passed' })).status).toBe(200);
+
+    // a molded batch disposed of, its work order completed (the back-flush event), a lot recalled
+    const mold = await t.http.post('/v1/molds').set('authorization', auth.engineer).send(boxMold());
+    const molded = await t.http.post('/v1/work-orders').set('authorization', auth.engineer).send({ externalRef: `WO-${randomUUID()}`, quantity: 1, materialSystemId: sys.body.id, moldId: mold.body.id });
+    const lotA = await t.http.post('/v1/lots').set('authorization', auth.engineer).send({ part: 'A', materialSystemId: sys.body.id, lotNumber: `EV-${randomUUID().slice(0, 8)}`, receivedOn: '2026-01-05', expiresOn: '2099-01-05' });
+    const pour = await t.http.post('/v1/batches').set('authorization', auth.engineer).send({ workOrderId: molded.body.id, options: { lots: { A: lotA.body.id } } });
+    expect((await t.http.post(`/v1/batches/${pour.body.id}/disposition`).set('authorization', auth.engineer).send({ decision: 'scrap', defectCauses: ['voids'] })).status).toBe(201);
+    expect((await t.http.post(`/v1/work-orders/${molded.body.id}/complete`).set('authorization', auth.engineer).send({})).status).toBe(200);
+    expect((await t.http.post(`/v1/lots/${lotA.body.id}/recall`).set('authorization', auth.engineer).send({ reason: 'supplier notice' })).status).toBe(200);
 
     const events = await testDb()('events').where({ organization_id: org.id }).select('type', 'payload');
     const registry = schemaRegistry();
