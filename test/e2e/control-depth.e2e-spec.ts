@@ -6,7 +6,7 @@ import { startErpReceiver, type ErpReceiver } from '../../fakes/src/erp-receiver
 import { startSmtpCatcher, type SmtpCatcher } from '../../fakes/src/smtp-catcher.js';
 import { closeTestDb, makeOrg, type OrgFixture, testDb, tokensFor } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/app.js';
-import { expectProblem, flexSystem } from './support/shop.js';
+import { boxMold, expectProblem, flexSystem } from './support/shop.js';
 
 // X̄–R with a batch's values as one subgroup: x̿ ± 3σ/√n with σ = R̄/d2, so for subgroups of three the
 // limits are x̿ ± A2·R̄ with A2 = 1.023 and the range limit D4·R̄ with D4 = 2.574 (NIST/SEMATECH
@@ -250,6 +250,28 @@ describe('cup-test free-rise density on a chart', () => {
     const before = await count('control_points', { metric: 'free_rise_density_kg_m3' });
     expectProblem(await post(-5), 422, '/freeRiseDensity/value');
     expect(await count('control_points', { metric: 'free_rise_density_kg_m3' })).toBe(before);
+  });
+});
+
+describe('molded part density on a chart', () => {
+  it('each recorded part is a point; the parts of one batch are one subgroup of an X̄–R chart', async () => {
+    const c = await t.http.post('/v1/control/charts').set(as('engineer')).send({ materialSystemId: systemId, metric: 'part_density_kg_m3', kind: 'xbar_r' });
+    expect(c.status).toBe(201);
+    const mold = await t.http.post('/v1/molds').set(as('engineer')).send(boxMold({ cavities: 3 }));
+    expect(mold.status).toBe(201);
+    const b = await t.http.post('/v1/batches').set(as('engineer')).send({ materialSystemId: systemId, moldId: mold.body.id });
+    expect(b.status).toBe(201);
+    // a 3 L cavity (300 × 200 × 50 mm): 0.180, 0.186 and 0.174 kg are 60, 62 and 58 kg/m³ (density = mass ÷ volume)
+    for (const [cavity, grams] of [[1, 180], [2, 186], [3, 174]] as const) {
+      expect((await t.http.post(`/v1/batches/${b.body.id}/parts`).set(as('engineer')).send({ cavity, mass: { value: grams, unit: 'g' } })).status).toBe(201);
+    }
+    const d = await t.http.get(`/v1/control/charts/${c.body.id}/data`).set(as('viewer'));
+    expect(d.status).toBe(200);
+    expect(d.body.points.map((p: { value: number }) => p.value.toFixed(6))).toEqual(['60.000000', '62.000000', '58.000000']);
+    expect(d.body.subgroups).toHaveLength(1);
+    expect(d.body.subgroups[0]).toMatchObject({ batchId: b.body.id, n: 3 });
+    expect(d.body.subgroups[0].mean).toBeCloseTo(60, 9);
+    expect(d.body.subgroups[0].range).toBeCloseTo(4, 9);
   });
 });
 

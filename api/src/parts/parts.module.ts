@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { ControlModule } from '../control/control.module.js';
 import { DevicesModule } from '../devices/devices.module.js';
 import { LotsModule } from '../lots/lots.module.js';
 import { MoldsModule } from '../molds/molds.module.js';
@@ -10,7 +11,7 @@ import { PartsService } from './parts.service.js';
 import { ProductionService } from './production.service.js';
 
 @Module({
-  imports: [DevicesModule, LotsModule, MoldsModule, WorkOrdersModule],
+  imports: [ControlModule, DevicesModule, LotsModule, MoldsModule, WorkOrdersModule],
   controllers: [PartsController, BatchPartsController, DefectCausesController, WorkOrderProductionController, LotTraceController, DefectsController],
   providers: [PartsRepository, PartsService, DefectCausesService, ProductionService],
 })

@@ -69,6 +69,7 @@ export interface BatchFacts {
   mold_name: string | null;
   cavities: number | null;
   station_code: string | null;
+  station_id: string | null;
   material_system_id: string;
   material_system_name: string;
   planned_for: Date | string;
@@ -116,7 +117,7 @@ export class PartsRepository {
       .leftJoin('batch_dispositions as d', 'd.batch_id', 'batches.id')
       .where('batches.organization_id', orgId)
       .select(
-        'batches.id', 'batches.state', 'batches.subject', 'batches.work_order_id', 'batches.mold_id', 'batches.material_system_id', 'batches.planned_for', 'batches.targets',
+        'batches.id', 'batches.state', 'batches.subject', 'batches.work_order_id', 'batches.mold_id', 'batches.station_id', 'batches.material_system_id', 'batches.planned_for', 'batches.targets',
         'batches.lot_a_id', 'batches.lot_b_id', 'batches.lot_pigment_id', 'la.lot_number as lot_a_number', 'lb.lot_number as lot_b_number', 'lp.lot_number as lot_pigment_number',
         'work_orders.external_ref as work_order_external_ref', 'molds.name as mold_name', 'molds.cavities', 'stations.code as station_code', 'material_systems.name as material_system_name',
         'rev.part_density_tolerance_percent', 'rev.core_density_min_kg_m3', 'rev.core_density_max_kg_m3', 'rev.indentation_force_min_n', 'rev.indentation_force_max_n',

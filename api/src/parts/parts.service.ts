@@ -7,6 +7,7 @@ import { AuditService } from '../audit/audit.service.js';
 import { actorOf, type RequestContext } from '../auth/principal.js';
 import type { ListQuery } from '../common/lists/list-query.js';
 import { type FieldError, ProblemException, validationProblem } from '../common/problems.js';
+import { ControlService } from '../control/control.service.js';
 import { EventsService } from '../events/events.service.js';
 import { DevicesService } from '../devices/devices.service.js';
 import { notFound } from '../shop/errors.js';
@@ -111,7 +112,7 @@ export function dispositionView(d: Record<string, unknown>, b: BatchFacts, parts
  */
 @Injectable()
 export class PartsService {
-  constructor(private readonly repo: PartsRepository, private readonly devices: DevicesService, private readonly audit: AuditService, private readonly events: EventsService) {}
+  constructor(private readonly repo: PartsRepository, private readonly devices: DevicesService, private readonly audit: AuditService, private readonly events: EventsService, private readonly control: ControlService) {}
 
   async batch(orgId: string, id: string): Promise<BatchFacts> {
     const b = await this.repo.batch(orgId, id);
@@ -180,6 +181,8 @@ export class PartsService {
         cavity_volume_m3: volume, molded_density_kg_m3: density, target_density_kg_m3: target, tolerance_percent: tolerance, density_verdict: judged.verdict,
         created_by_label: actor.actorLabel, ...(body.demoldedAt ? { demolded_at: body.demoldedAt } : {}),
       });
+      // the molded density is a point of the system's control charts (the parts of a batch are one subgroup)
+      await this.control.recordPartDensity(trx, { partId: id, organizationId: orgId, materialSystemId: b.material_system_id, batchId: b.id, stationId: b.station_id, deviceId, readingId: null, lotAId: b.lot_a_id, lotBId: b.lot_b_id, densityKgM3: density, at: body.demoldedAt ?? new Date() });
       await this.audit.record({ organizationId: orgId, ...actor, action: 'part.recorded', targetType: 'part', targetId: id, details: { batchId: b.id, massKg: mass, moldedDensityKgM3: density, verdict: judged.verdict }, ip: c.ip, userAgent: c.userAgent }, trx);
       return id;
     });
