@@ -2,7 +2,7 @@
  * Control-chart limits recomputed from published worked examples and tables.
  */
 import { describe, expect, it } from '@jest/globals';
-import { individualsLimits, MOVING_RANGE_CONSTANTS, movingRanges, shewhartConstants, xbarRLimits } from '@pourgate/batching';
+import { grandMean, individualsLimits, MOVING_RANGE_CONSTANTS, movingRanges, shewhartConstants, subgroupLimits, withinSigma, xbarRLimits } from '@pourgate/batching';
 
 describe('individuals and moving-range chart', () => {
   it('constants for moving ranges of two: d2 = 1.128, E2 = 2.660, D4 = 3.267 (NIST/SEMATECH e-Handbook of Statistical Methods §6.3.2.2)', () => {
@@ -50,5 +50,20 @@ describe('X̄–R chart', () => {
     expect(l.ucl).toBeCloseTo(10 + 0.577 * 2, 12);
     expect(l.rUcl).toBeCloseTo(2.114 * 2, 12);
     expect(l.rLcl).toBe(0);
+  });
+
+  it('subgroups of unequal size: σ̂ = mean of Rᵢ/d2(nᵢ), limits x̿ ± 3σ̂/√nᵢ, range limits D3·d2σ̂ … D4·d2σ̂ (the usual treatment of varying n, as in ASTM MNL 7; from memory)', () => {
+    // constructed: two subgroups of 2 with R = 1.128 and two of 5 with R = 2.326 give σ̂ = 1 exactly
+    const groups = [{ n: 2, mean: 10, range: 1.128 }, { n: 2, mean: 10, range: 1.128 }, { n: 5, mean: 10, range: 2.326 }, { n: 5, mean: 10, range: 2.326 }];
+    expect(withinSigma(groups)).toBeCloseTo(1, 12);
+    expect(grandMean(groups)).toBeCloseTo(10, 12);
+    const two = subgroupLimits(10, 1, 2);
+    const five = subgroupLimits(10, 1, 5);
+    expect(two.ucl).toBeCloseTo(10 + 3 / Math.SQRT2, 12);
+    expect(five.ucl).toBeCloseTo(10 + 3 / Math.sqrt(5), 12);
+    // with σ = R̄/d2 the limits are the table's: A2(5)·R̄ = 0.577 × 2.326 ≈ 3/√5, D4(2)·R̄ = 3.267 × 1.128
+    expect(five.ucl - 10).toBeCloseTo(0.577 * 2.326, 2);
+    expect(two.rUcl).toBeCloseTo(3.267 * 1.128, 12);
+    expect(five.rLcl).toBe(0);
   });
 });
