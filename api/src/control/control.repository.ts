@@ -150,6 +150,11 @@ export class ControlRepository {
     return q;
   }
 
+  /**
+   * A read model inside the judging transaction: the readings module calls this module as it stores a
+   * verdict, so it cannot be called back through its service (a module cycle); these two queries read
+   * the reading, its batch and its device rows where that transaction sees them.
+   */
   async readingFacts(trx: Db, readingId: string): Promise<ReadingFacts | undefined> {
     return trx('readings as r')
       .join('batches as b', 'b.id', 'r.batch_id')
@@ -339,16 +344,4 @@ export class ControlRepository {
     await trx('control_signals').where({ id }).update({ acknowledged_at: trx.fn.now(), acknowledged_by: a.by, acknowledged_by_label: a.label, acknowledgement_note: a.note });
   }
 
-  /** Whether each referenced row exists in the organization (for a chart's scope). */
-  async exists(table: 'material_systems' | 'stations' | 'devices' | 'lots', orgId: string, id: string): Promise<boolean> {
-    return !!(await this.db(table).where({ organization_id: orgId, id }).first('id'));
-  }
-
-  /** The current revision's tolerance figures of a system, for capability. */
-  async systemTolerances(orgId: string, systemId: string) {
-    return this.db('material_systems as m')
-      .join('material_system_revisions as r', (j) => j.on('r.material_system_id', 'm.id').andOn('r.revision', 'm.current_revision'))
-      .where({ 'm.organization_id': orgId, 'm.id': systemId })
-      .first('r.*') as Promise<Record<string, number | null> | undefined>;
-  }
 }

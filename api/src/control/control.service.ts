@@ -6,7 +6,10 @@ import { actorOf, type RequestContext } from '../auth/principal.js';
 import type { ListQuery } from '../common/lists/list-query.js';
 import { type FieldError, malformed, ProblemException, validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
+import { DevicesService } from '../devices/devices.service.js';
 import { EventsService } from '../events/events.service.js';
+import { LotsService } from '../lots/lots.service.js';
+import { MaterialSystemsService } from '../materials/material-systems.service.js';
 import { type ChartKind, CONTROL_METRIC_NAMES, CONTROL_METRICS, type ControlMetric, DEFAULT_CHART_POINTS, DEFAULT_RULES, MAX_CHART_POINTS, MIN_BASELINE_POINTS } from './control.metrics.js';
 import { type BaselineRecord, type ChartRow, ControlRepository, type NewPoint, type ReadingFacts, type SignalRow, type SubgroupRow } from './control.repository.js';
 
@@ -148,6 +151,9 @@ export class ControlService {
     private readonly repo: ControlRepository,
     private readonly audit: AuditService,
     private readonly events: EventsService,
+    private readonly systems: MaterialSystemsService,
+    private readonly devices: DevicesService,
+    private readonly lots: LotsService,
   ) {}
 
   /**
@@ -293,10 +299,16 @@ export class ControlService {
   private async checkScope(c: RequestContext, body: ChartInput): Promise<void> {
     const orgId = c.principal.organizationId;
     const errors: FieldError[] = [];
-    const refs: [keyof ChartInput, 'material_systems' | 'stations' | 'devices' | 'lots'][] = [['materialSystemId', 'material_systems'], ['stationId', 'stations'], ['deviceId', 'devices'], ['lotId', 'lots']];
-    for (const [field, table] of refs) {
-      const id = body[field] as string | null | undefined;
-      if (id && !(await this.repo.exists(table, orgId, id))) errors.push({ pointer: `/${field}`, detail: 'nothing with that id in your organization', code: 'reference' });
+    // each reference through the module that owns it
+    const known: Record<'materialSystemId' | 'stationId' | 'deviceId' | 'lotId', (id: string) => Promise<boolean>> = {
+      materialSystemId: async (id) => !!(await this.systems.revision(orgId, id)),
+      stationId: (id) => this.devices.stationExists(orgId, id),
+      deviceId: async (id) => (await this.devices.existingIds(orgId, [id])).has(id),
+      lotId: async (id) => (await this.lots.rows(orgId, [id])).has(id),
+    };
+    for (const [field, exists] of Object.entries(known) as [keyof typeof known, (id: string) => Promise<boolean>][]) {
+      const id = body[field];
+      if (id && !(await exists(id))) errors.push({ pointer: `/${field}`, detail: 'nothing with that id in your organization', code: 'reference' });
     }
     if ([body.stationId, body.deviceId, body.lotId].filter(Boolean).length > 1) errors.push({ pointer: '/stationId', detail: 'a chart narrows to one of station, device or lot', code: 'conflicting' });
     if (body.kind === 'xbar_r' && !CONTROL_METRICS[body.metric].subgroups) {
@@ -494,7 +506,7 @@ export class ControlService {
 
   /** The system's tolerance as specification limits of the chart's metric (null when it has none). */
   private async specLimits(c: RequestContext, chart: ChartRow): Promise<{ lsl: number | null; usl: number | null }> {
-    const t = (await this.repo.systemTolerances(c.principal.organizationId, chart.material_system_id)) ?? {};
+    const t = ((await this.systems.revision(c.principal.organizationId, chart.material_system_id)) ?? {}) as Record<string, unknown>;
     const num = (k: string) => (t[k] === null || t[k] === undefined ? null : Number(t[k]));
     switch (chart.metric) {
       case 'ratio_error_percent':

@@ -102,6 +102,11 @@ export class DevicesService {
     return new Set(rows.map((d) => d.id));
   }
 
+  /** Whether a station (where devices stand) is the organization's. */
+  async stationExists(orgId: string, id: string): Promise<boolean> {
+    return !!(await this.db('stations').where({ organization_id: orgId, id }).first('id'));
+  }
+
   /** What judging needs to know of a device: its capacity and when its calibration is due. */
   judgingFacts(orgId: string, id: string, db: Knex | Knex.Transaction = this.db): Promise<{ capacity_kg: number | null; calibration_due: Date | string | null } | undefined> {
     return db('devices').where({ organization_id: orgId, id }).first('capacity_kg', 'calibration_due');
