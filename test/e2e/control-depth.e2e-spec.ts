@@ -192,7 +192,7 @@ describe('X̄–R charts: a batch’s values as one subgroup', () => {
 
     const m = await mail.waitFor((x) => x.to.includes(org.people.engineer.email) && x.subject.startsWith('Drift on'), 20_000);
     expect(m.subject).toContain('Drum A temperature by batch');
-    expect(m.text).toContain('#/control');
+    expect(m.text).toContain(`#/control?chart=${chartId}`);
 
     const ack = await t.http.post(`/v1/control/signals/${list.body[0].id}/acknowledge`).set(as('engineer')).send({ note: 'Drum left on the heater band.' });
     expect(ack.status).toBe(200);

@@ -3,7 +3,7 @@ import { ChartsReferenceLine } from '@mui/x-charts/ChartsReferenceLine';
 import { LineChart } from '@mui/x-charts/LineChart';
 import { useCallback, useEffect, useState } from 'react';
 import { usePermissions } from 'react-admin';
-import { Link, useNavigate } from 'react-router-dom';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { knownActions } from '../auth/access';
 import { palette } from '../theme';
 import { type ControlChart, type ControlChartData, type ControlSignal, controlApi, readingHref } from './controlApi';
@@ -160,7 +160,10 @@ function SignalsTable({ signals, onAcknowledge, canManage }: { signals: ControlS
 /** Control charts: pick a chart, see the process against its limits, and work the signals. */
 export default function ControlPage() {
   const [charts, setCharts] = useState<ControlChart[] | null>(null);
-  const [chosen, setChosen] = useState('');
+  // the chart in view is in the address (#/control?chart=…): a reload or a mailed link keeps it
+  const [params, setParams] = useSearchParams();
+  const chosen = params.get('chart') ?? '';
+  const setChosen = useCallback((id: string) => setParams(id ? { chart: id } : {}, { replace: true }), [setParams]);
   const [data, setData] = useState<ControlChartData | null>(null);
   const [signals, setSignals] = useState<ControlSignal[]>([]);
   const [acking, setAcking] = useState<ControlSignal | null>(null);
@@ -175,7 +178,7 @@ export default function ControlPage() {
   useEffect(() => {
     controlApi.charts().then((c) => {
       setCharts(c);
-      setChosen((cur) => cur || c[0]?.id || '');
+      if (!chosen || !c.some((x) => x.id === chosen)) setChosen(c[0]?.id ?? '');
     }, (e: Error) => setError(e.message));
   }, [chartsTick]);
   useEffect(() => {
@@ -218,7 +221,7 @@ export default function ControlPage() {
   };
 
   return (
-    <Box component="section" aria-label="Control charts" sx={{ display: 'grid', gap: 2, p: 2 }} data-testid="control-page">
+    <Box component="section" aria-label="Control charts" sx={{ display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', gap: 2, p: 2 }} data-testid="control-page">
       <Typography variant="h5" component="h1">Control charts</Typography>
       {error ? <Alert severity="error">{error}</Alert> : null}
       {canManage ? (
@@ -229,7 +232,7 @@ export default function ControlPage() {
       {charts && charts.length === 0 ? <Alert severity="info">No control chart yet.{canManage ? ' Define one with New chart: a metric of a material system and the run rules to watch.' : ' An engineer defines them.'}</Alert> : null}
       {charts && charts.length > 0 ? (
         <Box sx={{ display: 'flex', gap: 1, flexWrap: 'wrap', alignItems: 'center', '@media print': { display: 'none' } }}>
-          <FormControl size="small" sx={{ minWidth: 280 }}>
+          <FormControl size="small" sx={{ width: { xs: '100%', sm: 420 } }}>
             <InputLabel id="chart-pick">Chart</InputLabel>
             <Select labelId="chart-pick" label="Chart" value={chosen} onChange={(e) => setChosen(String(e.target.value))} data-testid="chart-pick">
               {charts.map((c) => <MenuItem key={c.id} value={c.id}>{c.name} · {c.metricLabel}</MenuItem>)}

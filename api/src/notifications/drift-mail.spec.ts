@@ -21,8 +21,8 @@ describe('drift e-mail', () => {
     expect(m.subject).toBe('Drift on Station 2 ratio error: WE2 — Two of three points in a row beyond 2σ, on the same side');
     expect(m.text).toContain('Value: 2.35 % (centre line 0.123 %, control limits -2.74 to 2.99 %)');
     expect(m.text).toContain('Batch: b-1');
-    expect(m.text).toContain(controlLink('http://127.0.0.1:3000'));
-    expect(controlLink('http://x/')).toBe('http://x/#/control');
+    expect(m.text).toContain(controlLink('http://127.0.0.1:3000', 'c-1'));
+    expect(controlLink('http://x/', 'c-1')).toBe('http://x/#/control?chart=c-1');
     expect(m.text).toMatch(/SDS/);
   });
 

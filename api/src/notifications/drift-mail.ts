@@ -27,9 +27,9 @@ const UNITS: Record<string, string> = {
 /** Three significant digits: what a chart reader compares, not a column of decimals. */
 const num = (v: number) => Number(v.toPrecision(3)).toString();
 
-/** The console's control page (its signals list shows the open ones first). */
-export function controlLink(publicUrl: string): string {
-  return `${publicUrl.replace(/\/$/, '')}/#/control`;
+/** The chart on the console's control page, with its signals to acknowledge. */
+export function controlLink(publicUrl: string, chartId: string): string {
+  return `${publicUrl.replace(/\/$/, '')}/#/control?chart=${encodeURIComponent(chartId)}`;
 }
 
 export function driftMail(f: DriftFacts, publicUrl: string): { subject: string; text: string } {
@@ -42,7 +42,7 @@ export function driftMail(f: DriftFacts, publicUrl: string): { subject: string; 
       `  Rule: ${f.rule} — ${f.ruleDescription}`,
       `  Value: ${num(f.value)}${u} (centre line ${num(f.centre)}${u}, control limits ${num(f.lcl)} to ${num(f.ucl)}${u})`,
       ...(f.batchId ? [`  Batch: ${f.batchId}`] : []),
-      `  Look into it and acknowledge it: ${controlLink(publicUrl)}`,
+      `  Look into it and acknowledge it: ${controlLink(publicUrl, f.chartId)}`,
       `  Signal: ${f.signalId}`,
       '',
       'Before adjusting a dispenser or handling components: wear the protective equipment their SDS names (isocyanates sensitise skin and lungs) and follow your local rules.',
