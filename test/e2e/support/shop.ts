@@ -53,6 +53,15 @@ export const shopFixtures: Record<string, (org: OrgFixture) => Promise<string>> 
         .returning('id')
     )[0].id;
   },
+  parts: async (org) => {
+    const batchId = await shopFixtures.batches!(org);
+    return (
+      await testDb()('parts')
+        .insert({ organization_id: org.id, batch_id: batchId, mass_kg: 0.1, mass_source: 'entered', cavity_volume_m3: 0.002, molded_density_kg_m3: 50, target_density_kg_m3: 50, tolerance_percent: 10, density_verdict: 'within' })
+        .returning('id')
+    )[0].id;
+  },
+  'defect-causes': async (org) => (await testDb()('defect_causes').insert({ organization_id: org.id, code: `f_${randomUUID().slice(0, 8)}`, name: 'foreign cause' }).returning('id'))[0].id,
   imports: async (org) =>
     (await testDb()('reading_imports').insert({ organization_id: org.id, file_name: 'fixture.csv', sha256: randomUUID(), size_bytes: 1, content: Buffer.from('x'), status: 'done', actor_type: 'system' }).returning('id'))[0].id,
   'qc-cup-tests': async (org) => {
