@@ -32,7 +32,7 @@ export function PageLoadingFull() {
 export function DataProgress() {
   const loading = useLoading();
   return (
-    <Box sx={{ position: 'sticky', top: 0, height: 3, mx: -2, mb: -0.375, zIndex: 2 }} aria-live="off">
+    <Box sx={{ position: 'sticky', top: 0, height: 3, mb: -0.375, zIndex: 2 }} aria-live="off">
       {loading ? <LinearProgress aria-label="Loading data" data-testid="data-progress" sx={{ height: 3 }} /> : null}
     </Box>
   );

@@ -57,7 +57,12 @@ function ReadingListView() {
   return (
     <>
       <PageHeader title="Readings" lead="Everything the scales and loggers sent, newest first, with the verdict on each. Filter by device to check a new connection." />
-      <List resource="readings" title="Readings" filters={filters} sort={{ field: 'receivedAt', order: 'DESC' }} perPage={50} storeKey="readings.log" actions={false} disableSyncWithLocation>
+      <List resource="readings" title="Readings" filters={filters} sort={{ field: 'receivedAt', order: 'DESC' }} perPage={50} storeKey="readings.log"
+        actions={false}
+        disableSyncWithLocation
+        // a one-column grid: the list is never wider than the screen, however wide its table
+        sx={{ display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', '& .RaList-main': { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', minWidth: 0 } }}
+      >
         {/* the columns keep a readable width and the region scrolls sideways on a narrow screen */}
         <Box sx={{ overflowX: 'auto', maxWidth: '100%', '& table': { minWidth: 820 } }} tabIndex={0} role="region" aria-label="Readings table, scrolls sideways">
           <DataTable bulkActionButtons={false} rowClick={false}>
