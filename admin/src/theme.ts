@@ -112,7 +112,13 @@ export const theme: RaThemeOptions = {
     },
     RaLayout: {
       styleOverrides: {
-        root: { '& .RaLayout-content': { padding: '16px 24px 32px', backgroundColor: palette.paper } },
+        // react-admin sizes the frame to fit its widest content: a wide table then widened the whole
+        // page past a phone's screen (clipped at the right); wide tables scroll in their own region
+        root: {
+          minWidth: 0,
+          '& .RaLayout-contentWithSidebar, & .RaLayout-content': { minWidth: 0 },
+          '& .RaLayout-content': { padding: '16px 24px 32px', backgroundColor: palette.paper, '@media (max-width: 599.95px)': { padding: '12px 12px 24px' } },
+        },
       },
     },
     RaSidebar: {

@@ -87,8 +87,8 @@ export async function menuEntries(page: Page) {
 
 const axeSource = () => fs.readFileSync(AXE, 'utf8');
 
-/** Runs axe-core in the page; fails on serious or critical violations. */
-export async function axeScan(page: Page, label: string) {
+/** Runs axe-core in the page: its serious and critical findings, one line each (minor ones are logged). */
+export async function axeFindings(page: Page, label = page.url()): Promise<string[]> {
   // evaluated through the DevTools protocol: the console's CSP (script-src 'self') would refuse a script tag
   await page.evaluate(axeSource());
   const result = await page.evaluate(async () => {
@@ -99,7 +99,12 @@ export async function axeScan(page: Page, label: string) {
   const bad = result.filter((v) => v.impact === 'serious' || v.impact === 'critical');
   const minor = result.filter((v) => !bad.includes(v));
   if (minor.length) console.log(`    axe (${label}): ${minor.length} minor/moderate: ${minor.map((v) => v.id).join(', ')}`);
-  expect(bad.map((v) => `${v.id} (${v.impact}: ${v.help}) at ${v.nodes.join(' | ')}`), `axe: serious or critical problems on ${label}`).toEqual([]);
+  return bad.map((v) => `${v.id} (${v.impact}: ${v.help}) at ${v.nodes.join(' | ')}`);
+}
+
+/** Runs axe-core in the page; fails on serious or critical violations. */
+export async function axeScan(page: Page, label: string) {
+  expect(await axeFindings(page, label), `axe: serious or critical problems on ${label}`).toEqual([]);
 }
 
 /** Waits until the page has stopped loading: no requests in flight and the app bar's spinner gone. */

@@ -244,7 +244,7 @@ function BatchShow() {
         All batches
       </Button>
       <Box sx={{ display: 'flex', alignItems: 'flex-end', gap: 2, mt: 0.5, mb: 2, flexWrap: 'wrap' }}>
-        <Box sx={{ flex: 1, minWidth: 280 }}>
+        <Box sx={{ flex: 1, minWidth: { xs: '100%', sm: 280 } }}>
           <Box sx={{ display: 'flex', alignItems: 'center', gap: 1.25, flexWrap: 'wrap' }}>
             <Typography variant="h1" sx={{ fontSize: '1.5rem' }}>
               {batchTitle(batch)}
@@ -258,9 +258,9 @@ function BatchShow() {
           </Typography>
         </Box>
         <Box sx={{ display: 'flex', gap: 1, flexWrap: 'wrap' }}>
-          {open.length ? (
-            <Button component={Link} to={`/readings?filter=${encodeURIComponent(JSON.stringify({ status: 'rejected', batchId: batch.id }))}`} variant="outlined" startIcon={<FactCheckOutlined />}>
-              {open.length} to review
+          {releaseCheck && releaseCheck.openRejections > 0 ? (
+            <Button component={Link} to={`/readings?filter=${encodeURIComponent(JSON.stringify({ status: 'rejected', reviewed: false, batchId: batch.id }))}`} variant="outlined" startIcon={<FactCheckOutlined />} data-testid="open-rejections">
+              {releaseCheck.openRejections} to review
             </Button>
           ) : null}
           <Button component={Link} to={`/batches/${batch.id}/pour-sheet`} variant="outlined" startIcon={<PrintOutlined />} data-testid="open-pour-sheet">

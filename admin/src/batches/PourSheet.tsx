@@ -14,19 +14,29 @@ import { CautionList, massDecimals, ratioText, SdsLine } from './TargetFigures';
 import type { ComponentTarget } from '../views/sdk';
 import { batchTitle, shortRef, type Batch } from './labels';
 
-/** Print: only the sheet, on white, without the console's frame. */
+/**
+ * Print: only the sheet, on white, without the console's frame, on one page of A4 (210 × 297 mm) or
+ * US Letter (216 × 279 mm): no fixed paper size, margins and type sized for the smaller of the two.
+ */
 const printStyles = (
   <GlobalStyles
     styles={{
       '@media print': {
-        '@page': { size: 'A4', margin: '12mm' },
+        '@page': { size: 'auto', margin: '10mm' },
         'html, body, #root': { background: '#fff !important' },
-        'header.MuiAppBar-root, .RaSidebar-root, .MuiDrawer-root, .no-print, .RaNotification-root': { display: 'none !important' },
+        'header.MuiAppBar-root, .RaSidebar-root, .MuiDrawer-root, .no-print, .RaNotification-root, .MuiSnackbar-root, [data-testid="data-progress"]': { display: 'none !important' },
+        // the frame's full-height boxes would push an empty second page
+        '.RaLayout-root, .RaLayout-appFrame, .RaLayout-contentWithSidebar, .RaLayout-content, #root': { minHeight: '0 !important', height: 'auto !important', margin: '0 !important', padding: '0 !important' },
         '.RaLayout-appFrame': { marginTop: '0 !important' },
-        '.RaLayout-content': { padding: '0 !important', background: '#fff !important' },
-        '.pour-sheet': { boxShadow: 'none !important', border: 'none !important', maxWidth: 'none !important', padding: '0 !important' },
+        '.pour-sheet': { boxShadow: 'none !important', border: 'none !important', maxWidth: 'none !important', padding: '0 !important', fontSize: '10pt' },
         '.pour-sheet *': { printColorAdjust: 'exact', WebkitPrintColorAdjust: 'exact' },
-        '.pour-sheet table, .pour-sheet .keep': { breakInside: 'avoid' },
+        '.pour-sheet .MuiTypography-body2, .pour-sheet .MuiTableCell-root': { fontSize: '9.5pt', lineHeight: 1.3 },
+        '.pour-sheet .MuiTypography-caption': { fontSize: '8pt', lineHeight: 1.3 },
+        '.pour-sheet .MuiTableCell-root': { paddingTop: '3px', paddingBottom: '3px' },
+        '.pour-sheet h1': { fontSize: '16pt !important' },
+        '.pour-sheet .sheet-gap': { marginBottom: '8px !important' },
+        '.pour-sheet .signature-line': { height: '28px !important' },
+        '.pour-sheet table, .pour-sheet .keep, .pour-sheet .sheet-footer': { breakInside: 'avoid' },
       },
     }}
   />
@@ -50,7 +60,7 @@ function Field({ label, value, wide }: { label: string; value?: React.ReactNode;
 function Signature({ label }: { label: string }) {
   return (
     <Box sx={{ display: 'grid', gap: 0.5 }}>
-      <Box sx={{ borderBottom: '1px solid #222', height: 40 }} />
+      <Box className="signature-line" sx={{ borderBottom: '1px solid #222', height: 40 }} />
       <Typography variant="caption" sx={{ color: '#444' }}>
         {label} — name, signature, date and time
       </Typography>
@@ -133,7 +143,7 @@ function PourSheet() {
           </Box>
         </Box>
 
-        <Box sx={{ display: 'grid', gridTemplateColumns: 'repeat(4, minmax(0, 1fr))', gap: 1.5, mb: 2.5 }} className="keep">
+        <Box sx={{ display: 'grid', gridTemplateColumns: 'repeat(4, minmax(0, 1fr))', gap: 1.5, mb: 2.5 }} className="keep sheet-gap">
           <Field label="Material system" value={`${batch.materialSystemName} (rev. ${batch.materialSystemRevision})`} wide />
           <Field label={batch.subject === 'free_rise_cup' ? 'Free-rise cup' : 'Mold'} value={batch.subject === 'free_rise_cup' ? formatDisplay(t.cavityVolume) : `${batch.moldName ?? '—'}${t.cavities && t.cavities > 1 ? ` · ${t.cavities} cavities` : ''}`} wide />
           <Field label="Work order" value={batch.workOrderExternalRef ?? 'ad hoc'} />
@@ -199,12 +209,12 @@ function PourSheet() {
             </TableRow>
           </TableBody>
         </Table>
-        <Typography variant="caption" sx={{ color: '#555', display: 'block', mb: 2.5 }}>
+        <Typography variant="caption" className="sheet-gap" sx={{ color: '#555', display: 'block', mb: 2.5 }}>
           Masses are net, rounded to the scale’s readability{t.scaleReadability ? ` (${formatDisplay(t.scaleReadability, { decimals: (md ?? 2) + 1 })})` : ''}. The A and B bands are the ±
           {formatNumber(t.ratioTolerancePercent, { decimals: 1, trim: true })} % ratio tolerance with the other part on target.
         </Typography>
 
-        <Box className="keep" sx={{ display: 'grid', gridTemplateColumns: 'repeat(3, minmax(0, 1fr))', gap: 2, mb: 2.5 }}>
+        <Box className="keep sheet-gap" sx={{ display: 'grid', gridTemplateColumns: 'repeat(3, minmax(0, 1fr))', gap: 2, mb: 2.5 }}>
           <Box sx={{ border: '1px solid #bbb', borderRadius: 1, p: 1.25 }}>
             <Typography variant="caption" sx={{ color: '#555', display: 'block' }}>
               Components between
@@ -241,7 +251,7 @@ function PourSheet() {
         </Box>
 
         {t.warnings.length ? (
-          <Box className="keep" sx={{ border: '2px solid #b3261e', borderRadius: 1, p: 1.25, mb: 2 }} data-testid="sheet-warnings">
+          <Box className="keep sheet-gap" sx={{ border: '2px solid #b3261e', borderRadius: 1, p: 1.25, mb: 2 }} data-testid="sheet-warnings">
             <Typography variant="body2" sx={{ fontWeight: 700, color: '#8c1d17' }}>
               Check with the engineer before pouring
             </Typography>
@@ -255,7 +265,7 @@ function PourSheet() {
           </Box>
         ) : null}
 
-        <Box className="keep" sx={{ mb: 3 }}>
+        <Box className="keep sheet-gap" sx={{ mb: 3 }}>
           <CautionList cautions={t.cautions} compact />
           <Box sx={{ mt: 0.75 }}>
             <SdsLine t={t} />
@@ -270,7 +280,7 @@ function PourSheet() {
           <Signature label="Poured by" />
           <Signature label="Checked by (engineer)" />
         </Box>
-        <Box sx={{ mt: 2, pt: 1, borderTop: '1px solid #ccc', display: 'flex', justifyContent: 'space-between', color: '#666', fontSize: '0.7rem' }}>
+        <Box className="sheet-footer" data-testid="sheet-footer" sx={{ mt: 2, pt: 1, borderTop: '1px solid #ccc', display: 'flex', justifyContent: 'space-between', gap: 2, color: '#666', fontSize: '0.7rem' }}>
           <span>
             Batch {batch.id} · targets version {t.computationVersion}
           </span>

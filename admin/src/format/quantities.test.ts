@@ -1,6 +1,7 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import {
   decimalsForStep,
+  formatAsSent,
   formatDisplay,
   formatDisplayBand,
   formatDuration,
@@ -146,5 +147,18 @@ describe('durations', () => {
     expect(formatDuration(7 * 86400)).toBe('7 days');
     expect(formatDuration(90)).toBe('90 seconds');
     expect(formatDuration(0)).toBe('no overlap');
+  });
+});
+
+describe('formatAsSent', () => {
+  it('keeps every decimal a device sent, with the unit sign', () => {
+    expect(formatAsSent(412.63, 'g')).toBe('412.63 g');
+    expect(formatAsSent(22, 'degC')).toBe('22 °C');
+    expect(formatAsSent(1520.5, 'g')).toBe('1,520.5 g');
+  });
+  it('never writes a 300-digit number: an absurd value reads in powers of ten', () => {
+    const text = formatAsSent(Number('9'.repeat(300)), 'g');
+    expect(text).toBe('1 × 10³⁰⁰ g');
+    expect(text.length).toBeLessThan(20);
   });
 });

@@ -207,6 +207,16 @@ export function formatNumber(value: number | null | undefined, opts: NumberForma
   return `${sign}${text}`;
 }
 
+/**
+ * A value as a device sent it, every decimal it gave (`412.63 g`), but never a 300-digit string: past
+ * `LARGEST_PLAIN` it reads in powers of ten like every other figure.
+ */
+export function formatAsSent(value: number | null | undefined, unit: string | null | undefined): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return '—';
+  const given = /\.(\d+)$/.exec(String(value));
+  return formatQuantity(value, unit, { decimals: Math.min(6, given ? given[1]!.length : 0) });
+}
+
 /** `16.2 °C`, `486.7 g`, `−7.88 %`, `1.80` (a pure number): a value already in `unit`. */
 export function formatQuantity(value: number | null | undefined, unit: string | null | undefined, opts: NumberFormat = {}): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '—';

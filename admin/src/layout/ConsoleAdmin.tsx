@@ -7,7 +7,6 @@ import {
   CoreAdminUI,
   defaultI18nProvider,
   Error as ErrorPage,
-  LoadingPage,
   localStorageStore,
   Notification,
   type AuthProvider,
@@ -16,6 +15,7 @@ import {
   type LoginComponent,
   type RaThemeOptions,
 } from 'react-admin';
+import { PageLoadingFull } from '../common/PageLoading';
 import { NoAccessPage, NotFoundPage } from '../common/StatusPages';
 import { SESSION_KEY } from '../dataProvider/session';
 
@@ -38,7 +38,7 @@ function guardedLayout(isSignedIn: () => boolean) {
       return <Navigate to="/login" replace state={{ nextPathname: location.pathname, nextSearch: location.search }} />;
     }
     return (
-      <Suspense fallback={<LoadingPage />}>
+      <Suspense fallback={<PageLoadingFull />}>
         <LazyLayout>{children}</LazyLayout>
       </Suspense>
     );
@@ -74,7 +74,7 @@ export function ConsoleAdmin({ children, dataProvider, authProvider, theme, logi
           loginPage={loginPage}
           dashboard={dashboard}
           catchAll={NotFoundPage}
-          loading={LoadingPage}
+          loading={PageLoadingFull}
           error={ErrorPage}
           accessDenied={NoAccessPage}
           authenticationError={AuthenticationError}

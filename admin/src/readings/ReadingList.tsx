@@ -23,7 +23,7 @@ const SUBJECT_CHOICES = Object.entries(SUBJECT_LABEL).map(([id, name]) => ({ id,
 
 const filters = [
   <SelectInput key="status" source="status" label="Verdict" choices={STATUS_CHOICES} emptyText="Any verdict" alwaysOn />,
-  <ReferenceInput key="deviceId" source="deviceId" reference="devices" alwaysOn>
+  <ReferenceInput key="deviceId" source="deviceId" reference="devices" sort={{ field: 'name', order: 'ASC' }} perPage={200} alwaysOn>
     <SelectInput label="Device" optionText={(d: { name: string; serial: string }) => `${d.name} · ${d.serial}`} emptyText="Any device" />
   </ReferenceInput>,
   <SelectInput key="quantity" source="quantity" label="Quantity" choices={QUANTITY_CHOICES} emptyText="Any" />,
@@ -57,8 +57,14 @@ function ReadingListView() {
   return (
     <>
       <PageHeader title="Readings" lead="Everything the scales and loggers sent, newest first, with the verdict on each. Filter by device to check a new connection." />
-      <List resource="readings" title="Readings" filters={filters} sort={{ field: 'receivedAt', order: 'DESC' }} perPage={50} storeKey="readings.log" actions={false} disableSyncWithLocation>
-        <Box sx={{ overflowX: 'auto' }} tabIndex={0} role="region" aria-label="Readings table, scrolls sideways">
+      <List resource="readings" title="Readings" filters={filters} sort={{ field: 'receivedAt', order: 'DESC' }} perPage={50} storeKey="readings.log"
+        actions={false}
+        disableSyncWithLocation
+        // a one-column grid: the list is never wider than the screen, however wide its table
+        sx={{ display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', '& .RaList-main': { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', minWidth: 0 } }}
+      >
+        {/* the columns keep a readable width and the region scrolls sideways on a narrow screen */}
+        <Box sx={{ overflowX: 'auto', maxWidth: '100%', '& table': { minWidth: 820 } }} tabIndex={0} role="region" aria-label="Readings table, scrolls sideways">
           <DataTable bulkActionButtons={false} rowClick={false}>
             <DataTable.Col source="receivedAt" label="Received" render={(r: Reading) => <span style={{ whiteSpace: 'nowrap' }}>{formatDateTime(r.receivedAt)}</span>} />
             <DataTable.Col label="Reading" disableSort render={(r: Reading) => readingTitle(r)} />

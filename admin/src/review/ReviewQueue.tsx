@@ -3,12 +3,33 @@ import FactCheckOutlined from '@mui/icons-material/FactCheckOutlined';
 import GavelOutlined from '@mui/icons-material/GavelOutlined';
 import KeyboardOutlined from '@mui/icons-material/KeyboardOutlined';
 import OpenInNewOutlined from '@mui/icons-material/ArrowForward';
-import { Box, Button, Card, CardContent, Divider, Stack, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
+import ArrowBack from '@mui/icons-material/ArrowBack';
+import FilterListOutlined from '@mui/icons-material/FilterListOutlined';
+import {
+  Alert,
+  Box,
+  Button,
+  Card,
+  CardContent,
+  Dialog,
+  Divider,
+  IconButton,
+  Stack,
+  Table,
+  TableBody,
+  TableCell,
+  TableHead,
+  TableRow,
+  Typography,
+  useMediaQuery,
+  type Theme,
+} from '@mui/material';
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
 import {
   DateInput,
   List,
+  NullableBooleanInput,
   Pagination,
   SelectInput,
   useDataProvider,
@@ -69,7 +90,19 @@ const filters = [
   <DeviceFilter key="deviceId" source="deviceId" label="Device" alwaysOn />,
   <DateInput key="from" source="receivedAfter" label="From" alwaysOn parse={dayStartIso} format={isoToDay} />,
   <DateInput key="to" source="receivedBefore" label="To" alwaysOn parse={dayEndIso} format={isoToDay} />,
+  <NullableBooleanInput key="reviewed" source="reviewed" label="Decision" alwaysOn nullLabel="Any" falseLabel="Waiting for a decision" trueLabel="Decided" />,
 ];
+
+/** What the queue shows unless told otherwise: rejections nobody has decided yet. */
+export const QUEUE_DEFAULT_FILTER = { status: 'rejected', reviewed: false } as const;
+
+/** Keyboard hints mean nothing on a touch screen with no keyboard (a phone, a tablet on the bench). */
+export const hiddenOnTouch = { '@media (hover: none) and (pointer: coarse)': { display: 'none' } } as const;
+
+/** Below this width the queue is one column: a row's detail opens over the list instead of beside it. */
+const useOneColumn = () => useMediaQuery((t: Theme) => t.breakpoints.down('lg'));
+/** A phone: the filters fold away behind a button, rows become a tappable list. */
+const usePhone = () => useMediaQuery((t: Theme) => t.breakpoints.down('sm'));
 
 function typingIn(target: EventTarget | null): boolean {
   if (!(target instanceof HTMLElement)) return false;
@@ -82,7 +115,7 @@ function typingIn(target: EventTarget | null): boolean {
 
 export function KeyHints() {
   return (
-    <Box component="aside" aria-label="Keyboard shortcuts" data-testid="queue-keys" sx={{ display: 'flex', alignItems: 'center', flexWrap: 'wrap', gap: 1.5, color: 'text.secondary', fontSize: '0.8rem' }}>
+    <Box component="aside" aria-label="Keyboard shortcuts" data-testid="queue-keys" sx={{ display: 'flex', alignItems: 'center', flexWrap: 'wrap', gap: 1.5, color: 'text.secondary', fontSize: '0.8rem', ...hiddenOnTouch }}>
       <KeyboardOutlined sx={{ fontSize: 18 }} aria-hidden />
       {QUEUE_KEYS.map((k) => (
         <Box key={k.does} component="span" sx={{ display: 'inline-flex', alignItems: 'center', gap: 0.5 }}>
@@ -309,7 +342,7 @@ function ReadingPanel({
             <Typography variant="body2" sx={{ flex: 1, minWidth: 180 }}>
               If every rejection of this batch is waived, it can be released now.
             </Typography>
-            <Button size="small" variant="contained" color="success" onClick={release} disabled={releasing} data-testid="release-from-queue">
+            <Button size="small" variant="contained" color="success" onClick={release} disabled={releasing} data-testid="release-from-panel">
               Release batch
             </Button>
           </Box>
@@ -324,20 +357,135 @@ function ReadingPanel({
   );
 }
 
-const kbdOnButton = { fontFamily: monoFont, fontSize: '0.7rem', ml: 0.75, px: 0.5, border: '1px solid currentColor', borderRadius: 0.5, opacity: 0.7, lineHeight: 1.4 } as const;
+const kbdOnButton = { fontFamily: monoFont, fontSize: '0.7rem', ml: 0.75, px: 0.5, border: '1px solid currentColor', borderRadius: 0.5, opacity: 0.7, lineHeight: 1.4, ...hiddenOnTouch } as const;
 
-function QueueBody() {
+/** The decision just taken: the reading has left the queue, and its batch may be releasable now. */
+function JustDecided({ reading, batch, scrapped, canReview, onReleased }: { reading: Reading; batch?: Batch; scrapped: boolean; canReview: boolean; onReleased: () => void }) {
+  const dataProvider = useDataProvider();
+  const notify = useNotify();
+  const [busy, setBusy] = useState(false);
+  const [released, setReleased] = useState(false);
+  const waived = reading.review?.decision === 'waive';
+  const name = batch ? `${batchTitle(batch)} (${shortRef(batch.id)})` : 'The batch';
+  const release = async () => {
+    if (!batch) return;
+    setBusy(true);
+    try {
+      await releaseBatch(dataProvider, batch.id);
+      notify(`Batch ${shortRef(batch.id)} is released.`, { type: 'success' });
+      setReleased(true);
+      onReleased();
+    } catch (error) {
+      notify((error as Error).message, { type: 'warning' });
+    } finally {
+      setBusy(false);
+    }
+  };
+  const releasable = canReview && waived && !released && batch && (batch.state === 'on_hold' || batch.state === 'weighing');
+  return (
+    <Alert
+      severity={waived ? 'success' : 'info'}
+      data-testid="just-decided"
+      sx={{ mb: 1.5, alignItems: 'center', '& .MuiAlert-message': { flex: 1, minWidth: 0, overflowWrap: 'anywhere' } }}
+      action={
+        releasable ? (
+          <Button size="small" variant="contained" color="success" onClick={release} disabled={busy} data-testid="release-from-queue">
+            Release batch
+          </Button>
+        ) : undefined
+      }
+    >
+      <strong>{waived ? 'Waived' : 'Upheld'}</strong>: {readingTitle(reading)} of {name}
+      {released ? ', released.' : waived ? '. The batch can be released once every rejection is waived.' : scrapped ? '; the batch is scrapped.' : '; the batch stays on hold.'}
+    </Alert>
+  );
+}
+
+/** A reading as one tappable block (phones): reason, what was measured, the batch, when. */
+function PhoneRow({ reading, batch, device, unitSystem, selected, onOpen }: { reading: Reading; batch?: Batch; device?: Device; unitSystem: UnitSystem; selected: boolean; onOpen: () => void }) {
+  return (
+    <Box component="li" sx={{ borderBottom: '1px solid', borderColor: 'divider', '&:last-of-type': { borderBottom: 'none' } }}>
+      <Box
+        component="button"
+        type="button"
+        onClick={onOpen}
+        data-testid="queue-row"
+        data-reading-id={reading.id}
+        aria-current={selected ? 'true' : undefined}
+        sx={{
+          all: 'unset',
+          boxSizing: 'border-box',
+          display: 'grid',
+          gridTemplateColumns: 'minmax(0, 1fr) auto',
+          columnGap: 1,
+          rowGap: 0.5,
+          width: '100%',
+          minHeight: 64,
+          px: 1.5,
+          py: 1.25,
+          cursor: 'pointer',
+          bgcolor: selected ? '#e7f0f0' : undefined,
+          boxShadow: selected ? (t) => `inset 3px 0 0 ${t.palette.primary.main}` : undefined,
+          '&:focus-visible': { outline: '2px solid', outlineColor: 'primary.main', outlineOffset: -2 },
+        }}
+      >
+        <Box sx={{ minWidth: 0, overflowWrap: 'anywhere' }}>
+          <ReasonCell reading={reading} unitSystem={unitSystem} />
+        </Box>
+        <Box sx={{ justifySelf: 'end' }}>
+          <DecisionCell reading={reading} />
+        </Box>
+        <Typography variant="caption" color="text.secondary" component="div" sx={{ minWidth: 0, overflowWrap: 'anywhere' }}>
+          {readingTitle(reading)}{' '}
+          <Box component="span" sx={{ color: 'text.primary', fontVariantNumeric: 'tabular-nums' }}>
+            {readingValue(reading)}
+          </Box>
+          {' · '}
+          {batch ? batchTitle(batch) : shortRef(reading.batchId)}
+          {device ? ` · ${device.name}` : ''}
+        </Typography>
+        <Typography variant="caption" color="text.secondary" component="div" sx={{ justifySelf: 'end', whiteSpace: 'nowrap' }}>
+          <RelativeTime value={reading.receivedAt} />
+        </Typography>
+      </Box>
+    </Box>
+  );
+}
+
+/** The list's filters on a phone: folded behind one button so the readings fill the first screen. */
+function PhoneFilterToggle({ open, onToggle }: { open: boolean; onToggle: () => void }) {
+  const { filterValues } = useListContext<Reading>();
+  const active = Object.keys(filterValues ?? {}).length;
+  return (
+    <Button
+      variant={open ? 'contained' : 'outlined'}
+      size="small"
+      startIcon={<FilterListOutlined />}
+      onClick={onToggle}
+      aria-expanded={open}
+      data-testid="queue-filters-toggle"
+      sx={{ mb: 1 }}
+    >
+      {open ? 'Hide filters' : `Filters${active ? ` (${active})` : ''}`}
+    </Button>
+  );
+}
+
+function QueueBody({ phone, filtersOpen, onToggleFilters }: { phone: boolean; filtersOpen: boolean; onToggleFilters: () => void }) {
   const { data, isPending, filterValues } = useListContext<Reading>();
   const unitSystem = useUnitSystem();
   const canReview = useHolds('readings:review');
   const refresh = useRefresh();
   const notify = useNotify();
+  const oneColumn = useOneColumn();
   const rows = useMemo(() => data ?? [], [data]);
   const [selectedId, setSelectedId] = useState<string | null>(null);
+  const [detailOpen, setDetailOpen] = useState(false);
   const [dialog, setDialog] = useState<{ reading: Reading; decision: Decision } | null>(null);
+  const [decided, setDecided] = useState<{ reading: Reading; scrapped: boolean } | null>(null);
   const tableRef = useRef<HTMLTableSectionElement>(null);
 
-  const batchIds = useMemo(() => [...new Set(rows.map((r) => r.batchId))], [rows]);
+  const batchIds = useMemo(() => [...new Set(rows.map((r) => r.batchId).concat(decided ? [decided.reading.batchId] : []))], [rows, decided]);
   const deviceIds = useMemo(() => [...new Set(rows.map((r) => r.deviceId))], [rows]);
   const { data: batches } = useGetMany<Batch>('batches', { ids: batchIds }, { enabled: batchIds.length > 0 });
   const { data: devices } = useGetMany<Device>('devices', { ids: deviceIds }, { enabled: deviceIds.length > 0 });
@@ -350,6 +498,8 @@ function QueueBody() {
     if (rows.length && index < 0) setSelectedId((rows.find((r) => r.status === 'rejected' && !r.review) ?? rows[0])!.id);
   }, [rows, index]);
   const selected = index >= 0 ? rows[index] : undefined;
+  // one column: the detail is a full-screen sheet, opened by tapping a row (or Enter)
+  const showDetail = !oneColumn || detailOpen;
 
   const move = useCallback(
     (step: number) => {
@@ -378,12 +528,18 @@ function QueueBody() {
       else if (key === 'w') decide('waive');
       else if (key === 'u') decide('uphold');
       else if (key === 'b' && selected) window.location.hash = `#/batches/${selected.batchId}/show`;
+      else if (key === 'Enter' && oneColumn && selected && !(e.target instanceof HTMLButtonElement || e.target instanceof HTMLAnchorElement)) setDetailOpen(true);
       else return;
       e.preventDefault();
     };
     document.addEventListener('keydown', onKey);
     return () => document.removeEventListener('keydown', onKey);
-  }, [dialog, move, decide, selected]);
+  }, [dialog, move, decide, selected, oneColumn]);
+
+  const open = (id: string) => {
+    setSelectedId(id);
+    setDetailOpen(true);
+  };
 
   const closeDialog = (outcome: { reading: Reading; scrapped: boolean } | null) => {
     setDialog(null);
@@ -399,107 +555,146 @@ function QueueBody() {
           : `Upheld. ${name} stays on hold.`,
       { type: 'success' },
     );
-    // go on to the next reading that waits for a decision
+    // the decided reading leaves the queue; go on to the next one that waits for a decision
+    setDecided(outcome);
+    setDetailOpen(false);
     const after = rows.slice(index + 1).find((r) => r.status === 'rejected' && !r.review && r.id !== result.id);
     if (after) setSelectedId(after.id);
     refresh();
   };
 
+  const decidedNote = decided ? (
+    <JustDecided key={decided.reading.id} reading={decided.reading} scrapped={decided.scrapped} batch={batchById.get(decided.reading.batchId)} canReview={canReview} onReleased={refresh} />
+  ) : null;
+  const filterToggle = phone ? <PhoneFilterToggle open={filtersOpen} onToggle={onToggleFilters} /> : null;
+
   if (!isPending && rows.length === 0) {
-    const onlyRejected = filterValues?.status === 'rejected' && Object.keys(filterValues).length === 1;
+    const { status, reviewed, ...others } = (filterValues ?? {}) as Record<string, unknown>;
+    const onlyOpen = status === 'rejected' && reviewed === false && Object.keys(others).length === 0;
     return (
-      <Box sx={{ p: 5, textAlign: 'center' }} data-testid="queue-empty">
-        <FactCheckOutlined sx={{ fontSize: 40, color: 'primary.main' }} aria-hidden />
-        <Typography variant="h2" sx={{ fontSize: '1.1rem', mt: 1 }}>
-          {onlyRejected ? 'Nothing is waiting for a decision' : 'No readings match these filters'}
-        </Typography>
-        <Typography variant="body2" color="text.secondary" sx={{ mt: 0.5 }}>
-          {onlyRejected ? 'Rejected readings from the scales and loggers appear here as soon as they are judged.' : 'Widen the dates or clear a filter.'}
-        </Typography>
+      <Box sx={{ pt: 1 }}>
+        {filterToggle}
+        {decidedNote}
+        <Box sx={{ p: 5, textAlign: 'center' }} data-testid="queue-empty">
+          <FactCheckOutlined sx={{ fontSize: 40, color: 'primary.main' }} aria-hidden />
+          <Typography variant="h2" sx={{ fontSize: '1.1rem', mt: 1 }}>
+            {onlyOpen ? 'Nothing is waiting for a decision' : 'No readings match these filters'}
+          </Typography>
+          <Typography variant="body2" color="text.secondary" sx={{ mt: 0.5 }}>
+            {onlyOpen ? 'Rejected readings from the scales and loggers appear here as soon as they are judged.' : 'Widen the dates or clear a filter.'}
+          </Typography>
+        </Box>
       </Box>
     );
   }
 
+  const panel = selected ? (
+    <ReadingPanel
+      key={selected.id}
+      reading={selected}
+      batch={batchById.get(selected.batchId)}
+      device={deviceById.get(selected.deviceId)}
+      unitSystem={unitSystem}
+      canReview={canReview}
+      onDecide={decide}
+      onReleased={refresh}
+    />
+  ) : null;
+
   return (
-    <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', lg: 'minmax(0, 1fr) 330px' }, gap: 2, alignItems: 'start', pt: 1.5, bgcolor: 'background.default' }}>
-      <Box sx={{ bgcolor: 'background.paper', border: '1px solid', borderColor: 'divider', borderRadius: 1.5, overflow: 'hidden' }}>
-        <Box sx={{ overflowX: 'auto' }} tabIndex={0} role="region" aria-label="Readings waiting for a decision, scrolls sideways">
-        <Table size="small" aria-label="Readings" sx={{ '& th, & td': { px: 1.25 } }}>
-          <TableHead>
-            <TableRow>
-              <TableCell>Reason</TableCell>
-              <TableCell>Reading</TableCell>
-              <TableCell>Batch</TableCell>
-              <TableCell>Received</TableCell>
-            </TableRow>
-          </TableHead>
-          <TableBody ref={tableRef}>
-            {rows.map((r) => {
-              const batch = batchById.get(r.batchId);
-              const device = deviceById.get(r.deviceId);
-              const isSelected = r.id === selected?.id;
-              return (
-                <TableRow
-                  key={r.id}
-                  hover
-                  selected={isSelected}
-                  aria-selected={isSelected}
-                  data-reading-id={r.id}
-                  data-testid="queue-row"
-                  onClick={() => setSelectedId(r.id)}
-                  sx={{
-                    cursor: 'pointer',
-                    verticalAlign: 'top',
-                    boxShadow: isSelected ? (t) => `inset 3px 0 0 ${t.palette.primary.main}` : undefined,
-                    '&.Mui-selected': { bgcolor: '#e7f0f0' },
-                    '&.Mui-selected:hover': { bgcolor: '#dde9ea' },
-                    '& td': { py: 1 },
-                  }}
-                >
-                  <TableCell>
-                    <ReasonCell reading={r} unitSystem={unitSystem} />
-                  </TableCell>
-                  <TableCell>
-                    <Typography variant="body2">{readingTitle(r)}</Typography>
-                    <Typography variant="caption" color="text.secondary" component="div">
-                      <Box component="span" sx={{ color: 'text.primary', fontVariantNumeric: 'tabular-nums' }}>{readingValue(r)}</Box>
-                      {device ? ` · ${device.name}${device.stationCode ? ` · ${device.stationCode}` : ''}` : ''}
-                    </Typography>
-                  </TableCell>
-                  <TableCell>
-                    <Typography variant="body2">{batch ? batchTitle(batch) : '…'}</Typography>
-                    <Typography variant="caption" sx={{ fontFamily: monoFont, color: 'text.secondary', whiteSpace: 'nowrap' }}>
-                      {shortRef(r.batchId)}
-                      {batch ? ` · ${BATCH_STATE[batch.state]?.label ?? batch.state}` : ''}
-                    </Typography>
-                  </TableCell>
-                  <TableCell sx={{ whiteSpace: 'nowrap' }}>
-                    <Typography variant="body2" component="div">
-                      <RelativeTime value={r.receivedAt} />
-                    </Typography>
-                    <Box sx={{ mt: 0.5 }}>
-                      <DecisionCell reading={r} />
-                    </Box>
-                  </TableCell>
-                </TableRow>
-              );
-            })}
-          </TableBody>
-        </Table>
+    <Box sx={{ pt: phone ? 0.5 : 1.5, bgcolor: 'background.default' }}>
+      {filterToggle}
+      {decidedNote}
+      <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', lg: 'minmax(0, 1fr) 330px' }, gap: 2, alignItems: 'start' }}>
+        <Box sx={{ bgcolor: 'background.paper', border: '1px solid', borderColor: 'divider', borderRadius: 1.5, overflow: 'hidden', minWidth: 0 }}>
+          {phone ? (
+            <Box component="ul" aria-label="Readings waiting for a decision" sx={{ listStyle: 'none', m: 0, p: 0 }}>
+              {rows.map((r) => (
+                <PhoneRow key={r.id} reading={r} batch={batchById.get(r.batchId)} device={deviceById.get(r.deviceId)} unitSystem={unitSystem} selected={r.id === selected?.id} onOpen={() => open(r.id)} />
+              ))}
+            </Box>
+          ) : (
+            <Box sx={{ overflowX: 'auto' }} tabIndex={0} role="region" aria-label="Readings waiting for a decision, scrolls sideways">
+              <Table size="small" aria-label="Readings" sx={{ '& th, & td': { px: 1.25 } }}>
+                <TableHead>
+                  <TableRow>
+                    <TableCell>Reason</TableCell>
+                    <TableCell>Reading</TableCell>
+                    <TableCell>Batch</TableCell>
+                    <TableCell>Received</TableCell>
+                  </TableRow>
+                </TableHead>
+                <TableBody ref={tableRef}>
+                  {rows.map((r) => {
+                    const batch = batchById.get(r.batchId);
+                    const device = deviceById.get(r.deviceId);
+                    const isSelected = r.id === selected?.id;
+                    return (
+                      <TableRow
+                        key={r.id}
+                        hover
+                        selected={isSelected}
+                        aria-selected={isSelected}
+                        data-reading-id={r.id}
+                        data-testid="queue-row"
+                        onClick={() => (oneColumn ? open(r.id) : setSelectedId(r.id))}
+                        sx={{
+                          cursor: 'pointer',
+                          verticalAlign: 'top',
+                          boxShadow: isSelected ? (t) => `inset 3px 0 0 ${t.palette.primary.main}` : undefined,
+                          '&.Mui-selected': { bgcolor: '#e7f0f0' },
+                          '&.Mui-selected:hover': { bgcolor: '#dde9ea' },
+                          '& td': { py: 1 },
+                        }}
+                      >
+                        <TableCell sx={{ maxWidth: 320, overflowWrap: 'anywhere' }}>
+                          <ReasonCell reading={r} unitSystem={unitSystem} />
+                        </TableCell>
+                        <TableCell sx={{ maxWidth: 260, overflowWrap: 'anywhere' }}>
+                          <Typography variant="body2">{readingTitle(r)}</Typography>
+                          <Typography variant="caption" color="text.secondary" component="div">
+                            <Box component="span" sx={{ color: 'text.primary', fontVariantNumeric: 'tabular-nums' }}>{readingValue(r)}</Box>
+                            {device ? ` · ${device.name}${device.stationCode ? ` · ${device.stationCode}` : ''}` : ''}
+                          </Typography>
+                        </TableCell>
+                        <TableCell>
+                          <Typography variant="body2">{batch ? batchTitle(batch) : '…'}</Typography>
+                          <Typography variant="caption" sx={{ fontFamily: monoFont, color: 'text.secondary', whiteSpace: 'nowrap' }}>
+                            {shortRef(r.batchId)}
+                            {batch ? ` · ${BATCH_STATE[batch.state]?.label ?? batch.state}` : ''}
+                          </Typography>
+                        </TableCell>
+                        <TableCell sx={{ whiteSpace: 'nowrap' }}>
+                          <Typography variant="body2" component="div">
+                            <RelativeTime value={r.receivedAt} />
+                          </Typography>
+                          <Box sx={{ mt: 0.5 }}>
+                            <DecisionCell reading={r} />
+                          </Box>
+                        </TableCell>
+                      </TableRow>
+                    );
+                  })}
+                </TableBody>
+              </Table>
+            </Box>
+          )}
+          <Pagination rowsPerPageOptions={phone ? [] : [10, 25, 50, 100]} />
         </Box>
-        <Pagination rowsPerPageOptions={[10, 25, 50, 100]} />
+        {showDetail && !oneColumn ? panel : null}
       </Box>
-      {selected ? (
-        <ReadingPanel
-          key={selected.id}
-          reading={selected}
-          batch={batchById.get(selected.batchId)}
-          device={deviceById.get(selected.deviceId)}
-          unitSystem={unitSystem}
-          canReview={canReview}
-          onDecide={decide}
-          onReleased={refresh}
-        />
+      {oneColumn ? (
+        <Dialog fullScreen={phone} fullWidth maxWidth="sm" open={detailOpen && !!selected} onClose={() => setDetailOpen(false)} aria-label="Selected reading" data-testid="reading-sheet">
+          <Box sx={{ display: 'flex', alignItems: 'center', gap: 1, px: 1, py: 0.5, borderBottom: '1px solid', borderColor: 'divider', position: 'sticky', top: 0, bgcolor: 'background.paper', zIndex: 1 }}>
+            <IconButton onClick={() => setDetailOpen(false)} aria-label="Back to the queue" data-testid="reading-sheet-back" size="large">
+              <ArrowBack />
+            </IconButton>
+            <Typography variant="subtitle1" component="p" sx={{ fontWeight: 600 }}>
+              Reading {index + 1} of {rows.length}
+            </Typography>
+          </Box>
+          <Box sx={{ p: phone ? 1 : 2, '& > .MuiCard-root': { boxShadow: 'none', border: 'none' } }}>{panel}</Box>
+        </Dialog>
       ) : null}
       {dialog ? (
         <ReviewDialog
@@ -518,27 +713,37 @@ function QueueBody() {
 }
 
 export default function ReviewQueuePage() {
+  const phone = usePhone();
+  const [filtersOpen, setFiltersOpen] = useState(false);
   return (
     <Guarded resource="readings">
       <PageHeader
         title="Review queue"
-        lead="Readings the judge rejected, with what was measured against which limit. Waive one with a note when the deviation does not matter for the part; uphold it to keep the batch on hold, or to scrap it."
+        lead={
+          phone
+            ? 'Rejected readings waiting for a decision: tap one to waive or uphold it.'
+            : 'Readings the judge rejected, with what was measured against which limit. Waive one with a note when the deviation does not matter for the part; uphold it to keep the batch on hold, or to scrap it.'
+        }
         actions={<KeyHints />}
       />
       <List
         resource="readings"
         title="Review queue"
         filters={filters}
-        filterDefaultValues={{ status: 'rejected' }}
+        filterDefaultValues={QUEUE_DEFAULT_FILTER}
         actions={false}
         sort={{ field: 'receivedAt', order: 'DESC' }}
         perPage={25}
         storeKey="readings.queue"
         pagination={false}
         disableSyncWithLocation={false}
-        sx={{ '& .RaList-content': { border: 'none', bgcolor: 'transparent' } }}
+        sx={{
+          '& .RaList-content': { border: 'none', bgcolor: 'transparent' },
+          // on a phone the filters are folded away until asked for (the toggle above the list)
+          ...(phone && !filtersOpen ? { '& .RaList-actions': { display: 'none' } } : {}),
+        }}
       >
-        <QueueBody />
+        <QueueBody phone={phone} filtersOpen={filtersOpen} onToggleFilters={() => setFiltersOpen((o) => !o)} />
       </List>
     </Guarded>
   );

@@ -1,3 +1,4 @@
+import { formatAsSent } from '../format/quantities';
 import type { Reading, ReadingQuantity, ReadingStatus, ReadingSubject } from '../views/sdk';
 
 export type { Reading };
@@ -37,5 +38,5 @@ export function readingTitle(r: Pick<Reading, 'subject' | 'quantity'>): string {
 /** What the device sent, as it sent it: "290.4 g"; a milestone carries only its time. */
 export function readingValue(r: Pick<Reading, 'quantity' | 'given'>): string {
   if (r.quantity === 'milestone') return 'time mark';
-  return `${r.given.value} ${r.given.unit === 'degC' ? '°C' : r.given.unit === 'degF' ? '°F' : r.given.unit}`;
+  return formatAsSent(r.given.value, r.given.unit);
 }
