@@ -211,11 +211,31 @@ export function temperatureDifferenceFromSI(value: number, unit: string): number
   return trimFloat(value / rule.differenceFactor!);
 }
 
+/**
+ * The factor to SI of each unit that is a pure multiple of it (mass, length, volume, density),
+ * found once with mathjs: a reading's conversion is then one multiplication, not a unit parse.
+ * Units with an offset (°F, °C to K) keep going through mathjs.
+ */
+const SI_FACTORS = new Map<string, number | null>();
+function siFactor(dimension: Dimension, rule: UnitRule): number | null {
+  const key = `${dimension}\u0000${rule.symbol}`;
+  let f = SI_FACTORS.get(key);
+  if (f === undefined) {
+    const si = ruleFor(dimension, SI_UNITS[dimension]);
+    const zero = math.unit(0, rule.mathjs!).toNumber(si.mathjs!);
+    f = zero === 0 ? math.unit(1, rule.mathjs!).toNumber(si.mathjs!) : null;
+    SI_FACTORS.set(key, f);
+  }
+  return f;
+}
+
 /** A value in any accepted unit of a dimension, in that dimension's SI unit (see SI_UNITS). */
 export function toSI(dimension: Dimension, value: number, unit: string): number {
   if (dimension === 'temperature_difference') return temperatureDifferenceToSI(value, unit);
   requireFinite(dimension, value, unit);
   const rule = ruleFor(dimension, unit);
+  const factor = siFactor(dimension, rule);
+  if (factor !== null) return trimFloat(value * factor);
   const si = ruleFor(dimension, SI_UNITS[dimension]);
   return trimFloat(math.unit(value, rule.mathjs!).toNumber(si.mathjs!));
 }
