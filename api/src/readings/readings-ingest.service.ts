@@ -8,7 +8,7 @@ import { BatchesService } from '../batches/batches.service.js';
 import { type FieldError, validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
 import { DevicesService } from '../devices/devices.service.js';
-import { JUDGE_QUEUE, type JudgeJob } from './readings.constants.js';
+import { JUDGE_CHUNK, JUDGE_QUEUE, type JudgeJob } from './readings.constants.js';
 import { type NewReading, ReadingsRepository } from './readings.repository.js';
 import { readingView } from './reading-view.js';
 
@@ -177,12 +177,20 @@ export class ReadingsIngestService {
     }
   }
 
-  /** One round trip to Redis for a whole post; on failure the readings wait for the sweeper. */
+  /**
+   * One round trip to Redis for a whole post, one job per JUDGE_CHUNK readings (a Bull job each
+   * cost more CPU than the insert); on failure the readings wait for the sweeper.
+   */
   async enqueueMany(ids: string[]): Promise<void> {
     if (ids.length === 0) return;
     if (ids.length === 1) return void (await this.enqueue(ids[0]!));
+    const jobs: { data: JudgeJob; opts: ReturnType<ReadingsIngestService['jobOptions']> }[] = [];
+    for (let i = 0; i < ids.length; i += JUDGE_CHUNK) {
+      const chunk = ids.slice(i, i + JUDGE_CHUNK);
+      jobs.push(chunk.length === 1 ? { data: { readingId: chunk[0]! }, opts: this.jobOptions(chunk[0]!) } : { data: { readingIds: chunk }, opts: { ...this.jobOptions(`chunk:${chunk[0]}`), timeout: 120_000 } });
+    }
     try {
-      await this.queue.addBulk(ids.map((id) => ({ data: { readingId: id }, opts: this.jobOptions(id) })));
+      await this.queue.addBulk(jobs);
     } catch (e) {
       this.log.warn(`${ids.length} readings stay pending; the sweeper will queue them (${(e as Error).message})`);
     }
