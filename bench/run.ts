@@ -4,7 +4,8 @@
 //   2 single reading        POST /v1/readings (autocannon)        vs  a bare Fastify route doing the same INSERT
 //   3 pipeline latency      posted -> verdict -> webhook received vs  a bare loopback POST round trip
 //   4 review list           rejected, sorted, one page: 1 M readings in the table vs 10 k
-//   5 memory                the API's peak RSS during 1 and 2
+//   5 memory                the API's peak RSS during 1 and 2 (the compiled build, as `npm start` runs it)
+//   6 control chart         a chart's data over 1 M points vs 10 k
 // Writes bench/results/<date>.json and bench/results/latest.json and prints the table for BENCHMARKS.md.
 // BENCH_ROUNDS (3), BENCH_SECONDS (5), BENCH_LARGE_ROWS (1000000), BENCH_PIPELINE_READINGS (150) scale it.
 import autocannon from 'autocannon';
@@ -21,7 +22,7 @@ import { type ApiProcess, json, makeShop, readingBody, resetDatabase, ROOT, type
 import { startPostgres, startRedis } from '../scripts/lib/services.mjs';
 
 if (process.argv.includes('--help')) {
-  console.log('usage: npm run bench   (BENCH_ROUNDS, BENCH_SECONDS, BENCH_LARGE_ROWS, BENCH_PIPELINE_READINGS; servers on 55642/56642/3342)');
+  console.log('usage: npm run bench   (BENCH_ROUNDS, BENCH_SECONDS, BENCH_LARGE_ROWS, BENCH_PIPELINE_READINGS; servers on BENCH_PGPORT 55642, BENCH_REDIS_PORT 56642, BENCH_API_PORT 3342 (+1, +2); BENCH_SOURCES=1 runs the TypeScript sources instead of api/dist)');
   process.exit(0);
 }
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 3);
@@ -31,8 +32,12 @@ const SMALL = 10_000;
 const PIPE_N = Number(process.env.BENCH_PIPELINE_READINGS ?? 150);
 const PIPE_RATE = 10; // readings per second, steady
 const BULK_POSTS = 4; // per round, 1000 readings each
-const PG_PORT = 55642;
-const REDIS_PORT = 56642;
+const PG_PORT = Number(process.env.BENCH_PGPORT ?? 55642);
+const REDIS_PORT = Number(process.env.BENCH_REDIS_PORT ?? 56642);
+// the API under ingest on API_PORT, the bare route on API_PORT + 1, the pipeline's API on API_PORT + 2
+const API_PORT = Number(process.env.BENCH_API_PORT ?? 3342);
+// the API as `npm start` runs it (api/dist, built here when stale); BENCH_SOURCES=1: through swc, as the tests run it
+const COMPILED = !process.env.BENCH_SOURCES;
 const OUT = path.join(ROOT, 'bench', 'results');
 fs.mkdirSync(OUT, { recursive: true });
 const LOG = path.join(ROOT, 'test-output', 'bench-api.log');
@@ -58,7 +63,7 @@ const results: Record<string, unknown> = {
   machine: { cpus: os.cpus().length, cpu: os.cpus()[0]?.model, memoryGiB: round(os.totalmem() / 2 ** 30, 1), node: process.version, os: `${os.type()} ${os.release()}`, loadavgAtStart: os.loadavg().map((x) => round(x)) },
   date: new Date().toISOString(),
   command: 'npm run bench',
-  settings: { rounds: ROUNDS, secondsPerRun: SECONDS, bulkPostsPerRound: BULK_POSTS, pipelineReadings: PIPE_N, pipelineRatePerSecond: PIPE_RATE, largeRows: LARGE, postgres: 'Debian PostgreSQL 15, fsync=off (test cluster)' },
+  settings: { rounds: ROUNDS, secondsPerRun: SECONDS, bulkPostsPerRound: BULK_POSTS, pipelineReadings: PIPE_N, pipelineRatePerSecond: PIPE_RATE, largeRows: LARGE, api: COMPILED ? 'node --enable-source-maps api/dist/main.js (compiled, as npm start runs it)' : 'node --import @swc-node/register/esm-register api/src/main.ts', postgres: 'Debian PostgreSQL 15, fsync=off (test cluster)' },
 };
 const children: (ApiProcess | ChildProcess)[] = [];
 
@@ -66,7 +71,7 @@ try {
   // ── 3 pipeline latency: a process with HTTP and workers, a receiver on loopback ──────────────
   {
     say('pipeline: starting the API with workers');
-    const api = await startApi({ port: 3344, databaseUrl: DB_URL, redisUrl: redis.url, logFile: LOG, env: { QUEUE_PREFIX: 'bench-pipe' } });
+    const api = await startApi({ port: API_PORT + 2, databaseUrl: DB_URL, redisUrl: redis.url, logFile: LOG, compiled: COMPILED, env: { QUEUE_PREFIX: 'bench-pipe' } });
     children.push(api);
     const shop = await makeShop(api.base, 'bench-pipe');
     let secret = '';
@@ -134,7 +139,7 @@ try {
       },
       ratioP99: round(median(runs.map((r) => r.pipeline.p99 / r.bare.p99)), 1),
       target: 'p99 <= 10 x the bare round trip',
-      relayIntervalMs: 250,
+      relayIntervalMs: 'WEBHOOK_RELAY_INTERVAL_MS default (100), woken by NOTIFY',
       missing: runs.reduce((a, r) => a + r.missing, 0),
     };
     bare.close();
@@ -144,10 +149,10 @@ try {
 
   // ── 1, 2, 5: ingest throughput against raw pg and a bare Fastify route; the API's RSS ─────────
   say('ingest: starting the API (HTTP only, like a scaled-out API process) and the bare Fastify route');
-  const api = await startApi({ port: 3342, databaseUrl: DB_URL, redisUrl: redis.url, logFile: LOG, env: { PROCESS_ROLE: 'api', QUEUE_PREFIX: 'bench-ingest' }, nodeArgs: process.env.BENCH_CPU_PROFILE ? ['--cpu-prof', `--cpu-prof-dir=${path.join(ROOT, 'test-output', 'profiles')}`] : [] });
+  const api = await startApi({ port: API_PORT, databaseUrl: DB_URL, redisUrl: redis.url, logFile: LOG, compiled: COMPILED, env: { PROCESS_ROLE: 'api', QUEUE_PREFIX: 'bench-ingest' }, nodeArgs: process.env.BENCH_CPU_PROFILE ? ['--cpu-prof', `--cpu-prof-dir=${path.join(ROOT, 'test-output', 'profiles')}`] : [] });
   children.push(api);
   const shop: Shop = await makeShop(api.base, 'bench-ingest');
-  const bareChild = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'bench/bare-server.ts')], { cwd: ROOT, stdio: ['ignore', 'pipe', 'inherit'], env: { ...process.env, BENCH_BARE_PORT: '3343', DATABASE_URL: DB_URL, BENCH_ORG: shop.orgId, BENCH_BATCH: shop.batchId, BENCH_DEVICE: shop.scaleId } });
+  const bareChild = spawn(process.execPath, ['--import', 'tsx', path.join(ROOT, 'bench/bare-server.ts')], { cwd: ROOT, stdio: ['ignore', 'pipe', 'inherit'], env: { ...process.env, BENCH_BARE_PORT: String(API_PORT + 1), DATABASE_URL: DB_URL, BENCH_ORG: shop.orgId, BENCH_BATCH: shop.batchId, BENCH_DEVICE: shop.scaleId } });
   children.push(bareChild);
   await new Promise<void>((resolve, reject) => { bareChild.stdout!.once('data', () => resolve()); bareChild.once('exit', () => reject(new Error('bare server exited'))); });
   const pid = api.pid()!;
@@ -186,11 +191,11 @@ try {
     requests: [{ setupRequest: (req: Record<string, unknown>) => ({ ...req, body: JSON.stringify(readingBody(shop.batchId, `${tag}-${randomUUID()}`, 1.1)) }) }],
   }) as unknown as Promise<{ requests: { average: number }; latency: { p50: number; p99: number }; non2xx: number; errors: number; timeouts: number }>;
   await cannon(`${api.base}/v1/readings`, { 'x-api-key': shop.deviceKey }, 'warm');
-  await cannon('http://127.0.0.1:3343/readings', {}, 'warm-bare');
+  await cannon(`http://127.0.0.1:${API_PORT + 1}/readings`, {}, 'warm-bare');
   const singleRuns: { api: number; bare: number; apiP99: number; bareP99: number; apiNon2xx: number; bareNon2xx: number }[] = [];
   for (let k = 0; k < ROUNDS; k++) {
     const a = await cannon(`${api.base}/v1/readings`, { 'x-api-key': shop.deviceKey }, `single-${k}`);
-    const b = await cannon('http://127.0.0.1:3343/readings', {}, `bare-${k}`);
+    const b = await cannon(`http://127.0.0.1:${API_PORT + 1}/readings`, {}, `bare-${k}`);
     singleRuns.push({ api: round(a.requests.average, 0), bare: round(b.requests.average, 0), apiP99: a.latency.p99, bareP99: b.latency.p99, apiNon2xx: a.non2xx + a.errors, bareNon2xx: b.non2xx + b.errors });
     say(`single round ${k + 1}: API ${round(a.requests.average, 0)} req/s (p99 ${a.latency.p99} ms), bare Fastify ${round(b.requests.average, 0)} req/s (p99 ${b.latency.p99} ms) (${round((100 * a.requests.average) / b.requests.average, 1)} %); non-2xx ${a.non2xx + a.errors}/${b.non2xx + b.errors}`);
   }
@@ -199,7 +204,7 @@ try {
     return Number((await raw.query("SELECT xact_commit + xact_rollback AS n FROM pg_stat_database WHERE datname = current_database()")).rows[0].n); };
   const perRequest = async (post: (i: number) => Promise<unknown>) => { const a = await xacts(); for (let i = 0; i < 50; i++) await post(i); return round(((await xacts()) - a) / 50, 1); };
   const xactApi = await perRequest(async (i) => (await fetch(`${api.base}/v1/readings`, { method: 'POST', headers: { 'x-api-key': shop.deviceKey, 'content-type': 'application/json' }, body: JSON.stringify(readingBody(shop.batchId, `x-${i}-${randomUUID()}`)) })).text());
-  const xactBare = await perRequest(async (i) => (await fetch('http://127.0.0.1:3343/readings', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(readingBody(shop.batchId, `xb-${i}-${randomUUID()}`)) })).text());
+  const xactBare = await perRequest(async (i) => (await fetch(`http://127.0.0.1:${API_PORT + 1}/readings`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(readingBody(shop.batchId, `xb-${i}-${randomUUID()}`)) })).text());
   say(`PostgreSQL transactions per single POST: API ${xactApi}, bare ${xactBare}`);
   clearInterval(sampler);
   results.single = { runs: singleRuns, medianApi: median(singleRuns.map((r) => r.api)), medianBare: median(singleRuns.map((r) => r.bare)), ratioPercent: round(100 * median(singleRuns.map((r) => r.api / r.bare)), 1), target: '>= 50 % of the bare route', connections: 10, secondsPerRun: SECONDS, pgTransactionsPerRequest: { api: xactApi, bare: xactBare } };
@@ -212,25 +217,39 @@ try {
   await db.raw('TRUNCATE readings CASCADE');
   const review = await makeShop(api.base, 'bench-review');
   const batches = [review.batchId, await review.newBatch(), await review.newBatch(), await review.newBatch()];
+  // the control chart of #17: ratio error of the review shop's system, one point per generated reading
+  const chart = await json(api.base, 'POST', '/v1/control/charts', { authorization: review.tokens.engineer! }, { name: 'bench ratio error', materialSystemId: review.systemId, metric: 'ratio_error_percent' });
+  if (chart.status !== 201) throw new Error(`control chart: ${chart.status} ${JSON.stringify(chart.body)}`);
   const fill = async (from: number, to: number) => {
-    // one reading in ten rejected (ratio, temperature or capacity reasons), spread over 90 days
+    // one reading in ten rejected (ratio, temperature or capacity reasons), spread over 90 days;
+    // reason_codes as the judge writes it beside reasons
     await db.raw(
-      `INSERT INTO readings (organization_id, batch_id, device_id, client_reading_id, quantity, subject, value_si, unit_given, value_given, stable, received_at, status, reasons, judged_at)
+      `INSERT INTO readings (organization_id, batch_id, device_id, client_reading_id, quantity, subject, value_si, unit_given, value_given, stable, received_at, status, reasons, reason_codes, judged_at)
        SELECT ?, (?::uuid[])[1 + g % 4], ?, 'gen-' || g, 'mass', CASE WHEN g % 2 = 0 THEN 'part_a' ELSE 'part_b' END, 1 + (g % 100) / 1000.0, 'kg', 1 + (g % 100) / 1000.0, true,
               now() - (g || ' seconds')::interval * 7.776,
               CASE WHEN g % 10 = 0 THEN 'rejected' WHEN g % 10 = 1 THEN 'unused' ELSE 'accepted' END,
               CASE WHEN g % 10 = 0 THEN jsonb_build_array(jsonb_build_object('code', (ARRAY['RATIO_POLYOL_HEAVY','RATIO_ISOCYANATE_HEAVY','TEMPERATURE_ABOVE_WINDOW','OVER_CAPACITY'])[1 + (g / 10) % 4], 'message', 'generated', 'measured', 5.4, 'limit', 5, 'unit', '%')) ELSE '[]'::jsonb END,
+              CASE WHEN g % 10 = 0 THEN ARRAY[(ARRAY['RATIO_POLYOL_HEAVY','RATIO_ISOCYANATE_HEAVY','TEMPERATURE_ABOVE_WINDOW','OVER_CAPACITY'])[1 + (g / 10) % 4]] ELSE '{}'::text[] END,
               now() - (g || ' seconds')::interval * 7.776 + interval '1 second'
        FROM generate_series(?::int, ?::int) AS g`,
       [review.orgId, `{${batches.join(',')}}`, review.scaleId, from, to],
     );
+    await db.raw(
+      `INSERT INTO control_points (organization_id, material_system_id, metric, device_id, batch_id, value, at, source_key)
+       SELECT ?, ?, 'ratio_error_percent', ?, (?::uuid[])[1 + g % 4], ((g * 7919) % 1000) / 100.0 - 5, now() - (g || ' seconds')::interval * 7.776, 'gen-' || g
+       FROM generate_series(?::int, ?::int) AS g`,
+      [review.orgId, review.systemId, review.scaleId, `{${batches.join(',')}}`, from, to],
+    );
     await db.raw('ANALYZE readings');
+    await db.raw('ANALYZE control_points');
   };
   const queries: Record<string, string> = {
     'rejected, newest first': `/v1/readings?filter=${encodeURIComponent('{"status":"rejected"}')}&sort=${encodeURIComponent('["receivedAt","DESC"]')}&range=${encodeURIComponent('[0,24]')}`,
     'rejected, one reason, newest first': `/v1/readings?filter=${encodeURIComponent('{"status":"rejected","reasonCode":"RATIO_POLYOL_HEAVY"}')}&sort=${encodeURIComponent('["receivedAt","DESC"]')}&range=${encodeURIComponent('[0,24]')}`,
     'rejected, one batch, last 7 days': `/v1/readings?filter=${encodeURIComponent(JSON.stringify({ status: 'rejected', batchId: batches[0], receivedAfter: new Date(Date.now() - 7 * 86400_000).toISOString() }))}&sort=${encodeURIComponent('["receivedAt","DESC"]')}&range=${encodeURIComponent('[0,24]')}`,
   };
+  const CHART_CASE = 'control chart, newest 500 points';
+  queries[CHART_CASE] = `/v1/control/charts/${chart.body.id}/data`;
   const measure = async (label: string) => {
     const out: Record<string, { p50: number; p95: number; total: string | null }> = {};
     for (const [name, url] of Object.entries(queries)) {
@@ -261,13 +280,17 @@ try {
   for (const [name, sql] of Object.entries({
     page: `EXPLAIN (ANALYZE, BUFFERS, FORMAT TEXT) SELECT readings.* FROM readings WHERE organization_id = '${review.orgId}' AND status = 'rejected' ORDER BY received_at DESC, id DESC LIMIT 25`,
     count: `EXPLAIN (ANALYZE, BUFFERS, FORMAT TEXT) SELECT count(*) FROM readings WHERE organization_id = '${review.orgId}' AND status = 'rejected'`,
-    reasonPage: `EXPLAIN (ANALYZE, BUFFERS, FORMAT TEXT) SELECT readings.* FROM readings WHERE organization_id = '${review.orgId}' AND status = 'rejected' AND reasons @> '[{"code":"RATIO_POLYOL_HEAVY"}]'::jsonb ORDER BY received_at DESC, id DESC LIMIT 25`,
+    reasonPage: `EXPLAIN (ANALYZE, BUFFERS, FORMAT TEXT) SELECT readings.* FROM readings WHERE organization_id = '${review.orgId}' AND status = 'rejected' AND reason_codes @> ARRAY['RATIO_POLYOL_HEAVY'] AND reason_codes <> '{}' ORDER BY received_at DESC, id DESC LIMIT 25`,
+    chart: `EXPLAIN (ANALYZE, BUFFERS, FORMAT TEXT) SELECT id, value, at FROM control_points p WHERE organization_id = '${review.orgId}' AND material_system_id = '${review.systemId}' AND metric = 'ratio_error_percent' ORDER BY at DESC, id DESC LIMIT 500`,
   })) plans[name] = ((await db.raw(sql)).rows as { 'QUERY PLAN': string }[]).map((r) => r['QUERY PLAN']).join('\n');
+  const listKeys = Object.keys(queries).filter((k) => k !== CHART_CASE);
+  const pick = (o: typeof at10k, keys: string[]) => Object.fromEntries(keys.map((k) => [k, o[k]!]));
   results.reviewList = {
-    rows: { small: SMALL, large: LARGE }, generateSeconds: round(genSeconds, 1), at10k, at1m,
-    ratios: Object.fromEntries(Object.keys(queries).map((k) => [k, round(at1m[k]!.p50 / at10k[k]!.p50, 2)])),
+    rows: { small: SMALL, large: LARGE }, generateSeconds: round(genSeconds, 1), at10k: pick(at10k, listKeys), at1m: pick(at1m, listKeys),
+    ratios: Object.fromEntries(listKeys.map((k) => [k, round(at1m[k]!.p50 / at10k[k]!.p50, 2)])),
     target: '<= 2 x', plans,
   };
+  results.controlChart = { rows: { small: SMALL, large: LARGE }, query: 'GET /v1/control/charts/{id}/data (default: newest 500 points)', at10k: at10k[CHART_CASE], at1m: at1m[CHART_CASE], ratio: round(at1m[CHART_CASE]!.p50 / at10k[CHART_CASE]!.p50, 2), target: '<= 2 x' };
   await api.kill('SIGTERM');
 } finally {
   for (const c of children) 'alive' in c ? await c.kill('SIGTERM') : c.kill('SIGTERM');
@@ -295,5 +318,7 @@ console.log(`| 1 | bulk ingest, readings/s | ${b.medianApi} | ${b.medianRaw} (pg
 console.log(`| 2 | single reading, requests/s | ${s.medianApi} | ${s.medianBare} (bare Fastify + pg INSERT) | ${s.ratioPercent} % | ≥ 50 % | ${mark(s.ratioPercent >= 50)} |`);
 console.log(`| 3 | posted → verdict → webhook received, p50/p95/p99 ms | ${p.median.pipeline.p50} / ${p.median.pipeline.p95} / ${p.median.pipeline.p99} | ${p.median.bare.p99} p99 (bare loopback POST) | ${p.ratioP99} × | p99 ≤ 10 × | ${mark(p.ratioP99 <= 10)} |`);
 for (const [k, v] of Object.entries(r.ratios)) console.log(`| 4 | review list "${k}", p50 ms at ${LARGE / 1e6} M | ${r.at1m[k]!.p50} | ${r.at10k[k]!.p50} (at 10 k) | ${v} × | ≤ 2 × | ${mark(v <= 2)} |`);
-console.log(`| 5 | API peak RSS during 1 and 2, MiB | ${m.peakRssMiB} | ${m.idleRssMiB} (idle after boot) | | reported | |`);
+console.log(`| 5 | API peak RSS during 1 and 2, MiB | ${m.peakRssMiB} | ${m.idleRssMiB} (idle after boot) | | ≤ 300 MiB peak | ${mark(m.peakRssMiB <= 300)} |`);
+const cc = results.controlChart as { ratio: number; at10k: { p50: number }; at1m: { p50: number } };
+console.log(`| 6 | control chart data, p50 ms at ${LARGE / 1e6} M points | ${cc.at1m.p50} | ${cc.at10k.p50} (at 10 k) | ${cc.ratio} × | ≤ 2 × | ${mark(cc.ratio <= 2)} |`);
 console.log(`results: ${path.relative(ROOT, file)} (and bench/results/latest.json); ${results.seconds} s`);

@@ -35,6 +35,8 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
     bodyLimit: env.BODY_LIMIT_BYTES,
     trustProxy: false,
     frameworkErrors: frameworkErrorProblem as never,
+    // one line per request (below), not Fastify's two ("incoming request", "request completed")
+    disableRequestLogging: true,
   });
   const routes = new RouteTable();
   routes.attach(adapter.getInstance());
@@ -43,6 +45,11 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
     bufferLogs: false,
   });
   const fastify = app.getHttpAdapter().getInstance();
+  // the request's line, written once it is answered; nothing is built when info is off
+  fastify.addHook('onResponse', (req, reply, done) => {
+    if (logger.isLevelEnabled('info')) req.log.info({ req, res: { statusCode: reply.statusCode }, responseTime: Math.round(reply.elapsedTime * 10) / 10 }, 'request completed');
+    done();
+  });
   fastify.addHook('onSend', async (req, reply, payload) => {
     reply.header('x-request-id', req.id);
     opts.onSend?.(req, reply, payload);

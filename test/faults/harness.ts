@@ -22,6 +22,19 @@ export function resetDatabase(databaseUrl: string): void {
   }
 }
 
+/** Builds api/dist (as `npm start` does) when it is older than the sources. */
+export function ensureCompiledApi(): void {
+  const target = path.join(ROOT, 'api/dist/main.js');
+  const newest = (d: string): number => {
+    const st = fs.statSync(d);
+    if (!st.isDirectory()) return st.mtimeMs;
+    return Math.max(0, ...fs.readdirSync(d).map((e) => newest(path.join(d, e))));
+  };
+  if (fs.existsSync(target) && fs.statSync(target).mtimeMs >= Math.max(newest(path.join(ROOT, 'api/src')), newest(path.join(ROOT, 'api/tsconfig.json')), newest(path.join(ROOT, 'api/tsconfig.build.json')))) return;
+  const r = spawnSync('npm', ['run', 'build', '-w', 'api'], { cwd: ROOT, stdio: 'pipe' });
+  if (r.status !== 0) throw new Error(`building the API failed: ${r.stdout}${r.stderr}`);
+}
+
 export interface ApiProcess {
   base: string;
   child: ChildProcess;
@@ -31,12 +44,15 @@ export interface ApiProcess {
 }
 
 /** The API as the deployment runs it (HTTP and workers in one process), its log in `logFile`. */
-export async function startApi(opts: { port: number; databaseUrl: string; redisUrl: string; logFile: string; env?: Record<string, string>; nodeArgs?: string[] }): Promise<ApiProcess> {
+export async function startApi(opts: { port: number; databaseUrl: string; redisUrl: string; logFile: string; env?: Record<string, string>; nodeArgs?: string[]; compiled?: boolean }): Promise<ApiProcess> {
   // the API imports the workspace packages by name, from their dist/ at run time
   const { ensureWorkspacePackages } = await import('../../scripts/lib/services.mjs');
   ensureWorkspacePackages();
+  if (opts.compiled) ensureCompiledApi();
   const out = fs.openSync(opts.logFile, 'a');
-  const child = spawn(process.execPath, [...(opts.nodeArgs ?? []), '--import', '@swc-node/register/esm-register', path.join(ROOT, 'api/src/main.ts')], {
+  // compiled: api/dist/main.js as `npm start` runs it; otherwise the sources through swc, as the test suites do
+  const entry = opts.compiled ? ['--enable-source-maps', path.join(ROOT, 'api/dist/main.js')] : ['--import', '@swc-node/register/esm-register', path.join(ROOT, 'api/src/main.ts')];
+  const child = spawn(process.execPath, [...(opts.nodeArgs ?? []), ...entry], {
     cwd: ROOT,
     stdio: ['ignore', out, out],
     env: {

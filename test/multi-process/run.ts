@@ -74,6 +74,42 @@ const listening = (port: number) =>
     s.once('error', () => resolve(false));
   });
 
+/**
+ * API-key principals are cached in each API process; a change made through one process must hold in
+ * the other within a second (the change notice goes over Redis). Warms both caches, then rotates
+ * with no grace and revokes through API 1 while API 2 is asked every 20 ms.
+ */
+async function keyChangesReachEveryApi(bases: string[], shop: Awaited<ReturnType<typeof makeShop>>): Promise<void> {
+  const [one, two] = [bases[0]!, bases[1]!];
+  const probe = async (base: string, secret: string) => (await fetch(`${base}/v1/devices?range=${encodeURIComponent('[0,0]')}`, { headers: { 'x-api-key': secret } })).status;
+  const created = await json(one, 'POST', '/v1/api-keys', { authorization: shop.tokens.integrator! }, { name: 'cache probe', kind: 'device', scopes: ['readings:write', 'devices:read'], deviceId: shop.scaleId });
+  if (created.status !== 201) throw new Error(`api key: ${created.status} ${JSON.stringify(created.body)}`);
+  const warm = async (secret: string) => {
+    const seen: number[] = [];
+    for (let i = 0; i < 5; i++) for (const b of [one, two]) seen.push(await probe(b, secret));
+    return seen;
+  };
+  /** ms from the change's answer until API 2 answers 401 for the secret (polled every 20 ms, at most 3 s) */
+  const refusedAfter = async (secret: string, since: number) => {
+    for (;;) {
+      if ((await probe(two, secret)) === 401) return Date.now() - since;
+      if (Date.now() - since > 3000) return Infinity;
+      await sleep(20);
+    }
+  };
+  const warmed = await warm(created.body.secret);
+  const rotated = await json(one, 'POST', `/v1/api-keys/${created.body.id}/rotate`, { authorization: shop.tokens.integrator! }, { graceSeconds: 0 });
+  const rotateMs = await refusedAfter(created.body.secret, Date.now());
+  const warmedNew = await warm(rotated.body.secret);
+  const revoked = await json(one, 'POST', `/v1/api-keys/${rotated.body.id}/revoke`, { authorization: shop.tokens.integrator! });
+  const revokeMs = await refusedAfter(rotated.body.secret, Date.now());
+  check(
+    'a key rotated or revoked through one API process is refused by the other within 1 s (cached principals)',
+    warmed.every((s) => s === 200) && warmedNew.every((s) => s === 200) && rotated.status === 201 && revoked.status === 200 && rotateMs <= 1000 && revokeMs <= 1000,
+    `warm-up answers ${[...new Set([...warmed, ...warmedNew])].join('/')}; old secret refused by API 2 ${rotateMs} ms after the rotation (grace 0); revoked key refused ${revokeMs} ms after the revoke`,
+  );
+}
+
 async function main(): Promise<number> {
   fs.mkdirSync(OUT_DIR, { recursive: true });
   ensureWorkspacePackages();
@@ -143,6 +179,8 @@ async function main(): Promise<number> {
     const digestEmail = `digest-${randomUUID()}@multi.test`;
     await testDb()('users').insert({ organization_id: shop.orgId, email: digestEmail, name: 'Digest engineer', role: 'engineer', password_hash: await argon2.hash(randomUUID()), notify_rejections: 'digest' });
     await testDb()('users').where({ id: shop.people.engineer!.id }).update({ notify_rejections: 'each' });
+    await keyChangesReachEveryApi(bases, shop);
+
     for (const name of ['erp', 'mes']) {
       const ep = await json(bases[1]!, 'POST', '/v1/webhook-endpoints', { authorization: shop.tokens.integrator! }, { url: `http://127.0.0.1:${receiverPort}/${name}`, description: name, eventTypes: [] });
       if (ep.status !== 201) throw new Error(`webhook endpoint: ${ep.status} ${JSON.stringify(ep.body)}`);

@@ -9,6 +9,7 @@ import { listPage } from '../common/lists/knex-list.js';
 import type { ListQuery, ListSpec } from '../common/lists/list-query.js';
 import { ProblemException } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
+import { PrincipalCache } from './principal-cache.js';
 
 export const apiKeysListSpec: ListSpec = {
   resource: 'api-keys',
@@ -47,6 +48,8 @@ export function keyState(r: Pick<ApiKeyRow, 'revoked_at' | 'expires_at' | 'grace
   return 'active';
 }
 
+const SECRET_FORMAT = /^pg[di]_(live|test)_[A-Za-z0-9_-]{43}$/;
+
 /** Secret format: `pg` + kind letter + `_` + environment + `_` + 32 random bytes (base64url). */
 export function newSecret(kind: 'device' | 'integration', env: 'live' | 'test'): { secret: string; prefix: string } {
   const secret = `pg${kind === 'device' ? 'd' : 'i'}_${env}_${randomBytes(32).toString('base64url')}`;
@@ -82,15 +85,22 @@ function view(r: ApiKeyRow) {
 export class ApiKeysService {
   private readonly logger = new Logger('ApiKeys');
 
-  constructor(@Inject(KNEX) private readonly db: Knex, private readonly audit: AuditService) {}
+  constructor(@Inject(KNEX) private readonly db: Knex, private readonly audit: AuditService, private readonly cache: PrincipalCache) {}
 
+  /** The key's principal: from memory when this process holds it (see PrincipalCache), else from PostgreSQL. */
   async authenticate(secret: string): Promise<Principal | null> {
-    if (!/^pg[di]_(live|test)_[A-Za-z0-9_-]{43}$/.test(secret)) return null;
-    const r = (await this.db('api_keys').where({ secret_hash: sha256(secret) }).first()) as ApiKeyRow | undefined;
+    if (!SECRET_FORMAT.test(secret)) return null;
+    const hash = sha256(secret);
+    const cached = this.cache.get(hash);
+    if (cached) return cached;
+    const gen = this.cache.begin();
+    const r = (await this.db('api_keys').where({ secret_hash: hash }).first()) as ApiKeyRow | undefined;
     if (!r || keyState(r) === 'revoked' || keyState(r) === 'expired') return null;
     // a device key issued before scopes were checked at creation still holds the device scopes only
     const scopes = r.kind === 'device' ? r.scopes.filter((s) => (DEVICE_KEY_SCOPES as readonly string[]).includes(s)) : r.scopes;
-    return { kind: 'api_key', id: r.id, organizationId: r.organization_id, scopes, deviceId: r.device_id, name: r.name, keyKind: r.kind, prefix: r.prefix };
+    const p = { kind: 'api_key' as const, id: r.id, organizationId: r.organization_id, scopes, deviceId: r.device_id, name: r.name, keyKind: r.kind, prefix: r.prefix };
+    this.cache.set(hash, p, gen, [r.expires_at, r.grace_until]);
+    return p;
   }
 
   /** When this process last recorded each key's use (so most requests skip the write entirely). */
@@ -171,11 +181,14 @@ export class ApiKeysService {
   async revoke(c: RequestContext, id: string) {
     const key = await this.get(c, id);
     this.checkKind(c, key.kind);
-    await this.db.transaction(async (trx) => {
+    const lineage = await this.db.transaction(async (trx) => {
       const lineage = await this.lineage(trx, c.principal.organizationId, id);
       const ended = await trx('api_keys').whereIn('id', lineage).whereNull('revoked_at').update({ revoked_at: trx.fn.now(), revoked_by: c.principal.kind === 'user' ? c.principal.id : null }).returning('id');
       if (ended.length) await this.audit.record({ organizationId: c.principal.organizationId, ...actorOf(c.principal), action: 'api_key.revoked', targetType: 'api_key', targetId: id, details: { name: key.name, prefix: key.prefix, ended: ended.map((r: { id: string }) => r.id) }, ip: c.ip, userAgent: c.userAgent }, trx);
+      return lineage;
     });
+    // every process forgets the lineage's principals: the revoke holds everywhere within moments
+    await this.cache.changed(lineage);
     return this.get(c, id);
   }
 
@@ -222,6 +235,8 @@ export class ApiKeysService {
       await this.audit.record({ organizationId: c.principal.organizationId, ...actorOf(c.principal), action: 'api_key.rotated', targetType: 'api_key', targetId: id, details: { successor: row.id, graceSeconds, prefix }, ip: c.ip, userAgent: c.userAgent }, trx);
       return row.id as string;
     });
+    // the old secret now ends with its grace period: cached copies learn that end
+    await this.cache.changed([id]);
     return { ...(await this.get(c, newId)), secret };
   }
 

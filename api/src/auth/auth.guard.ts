@@ -24,7 +24,7 @@ function forbidden(detail: string): ProblemException {
  * are refused, so a forgotten annotation fails closed.
  */
 @Injectable()
-export class AuthGuard extends PassportAuthGuard(['jwt', 'api-key']) implements CanActivate {
+export class AuthGuard extends PassportAuthGuard('jwt') implements CanActivate {
   constructor(private readonly reflector: Reflector, private readonly apiKeys: ApiKeysService) {
     super();
   }
@@ -41,8 +41,18 @@ export class AuthGuard extends PassportAuthGuard(['jwt', 'api-key']) implements 
     if (auth && key) throw unauthorized('Send either a bearer token or an API key, not both.');
     if (!auth && !key) throw unauthorized('This route needs credentials: a bearer token (people) or an API key header (machines).');
     if (typeof auth === 'string' && !/^Bearer\s+\S+$/i.test(auth)) throw unauthorized('The Authorization header must be "Bearer <access token>".');
-    await super.canActivate(ctx);
-    const p = req.user!;
+    let p: Principal;
+    if (key) {
+      // machines: the key straight from the header (one value, never a URL), without passport's
+      // strategy chain, which would first try and fail the JWT strategy on every request
+      const found = typeof key === 'string' ? await this.apiKeys.authenticate(key) : null;
+      if (!found) throw unauthorized('The API key is unknown, revoked or expired.');
+      p = found;
+      req.user = p;
+    } else {
+      await super.canActivate(ctx);
+      p = req.user!;
+    }
     req.principal = p;
     if (p.kind === 'api_key') this.apiKeys.touch(p.id, req.ip);
 

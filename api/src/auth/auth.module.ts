@@ -6,7 +6,7 @@ import { PassportModule } from '@nestjs/passport';
 import type { Env } from '../config/env.js';
 import { AuthController } from './auth.controller.js';
 import { AuthGuard } from './auth.guard.js';
-import { ApiKeyStrategy, JwtStrategy } from './strategies.js';
+import { JwtStrategy } from './strategies.js';
 import { TokensService } from './tokens.service.js';
 
 @Global()
@@ -16,7 +16,7 @@ import { TokensService } from './tokens.service.js';
     JwtModule.registerAsync({ inject: [ConfigService], useFactory: (config: ConfigService<Env, true>) => ({ secret: config.get('JWT_SECRET', { infer: true }) }) }),
   ],
   controllers: [AuthController],
-  providers: [TokensService, JwtStrategy, ApiKeyStrategy, { provide: APP_GUARD, useClass: AuthGuard }],
+  providers: [TokensService, JwtStrategy, { provide: APP_GUARD, useClass: AuthGuard }],
   exports: [TokensService],
 })
 export class AuthModule {}

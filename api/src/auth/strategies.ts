@@ -1,11 +1,8 @@
 import { Injectable } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { PassportStrategy } from '@nestjs/passport';
-import { HeaderAPIKeyStrategy } from 'passport-headerapikey';
 import { ExtractJwt, Strategy as JwtStrategyBase } from 'passport-jwt';
-import { ApiKeysService } from '../api-keys/api-keys.service.js';
 import type { Env } from '../config/env.js';
-import { API_KEY_HEADER } from '../openapi/openapi.js';
 import type { Principal } from './principal.js';
 import { AccountsService } from '../users/accounts.service.js';
 import { type AccessClaims, TokensService } from './tokens.service.js';
@@ -32,17 +29,5 @@ export class JwtStrategy extends PassportStrategy(JwtStrategyBase, 'jwt') {
     const [u, alive] = await Promise.all([this.users.findById(claims.sub), this.tokens.sessionAlive(claims.sid)]);
     if (!u || u.disabled || u.organization_id !== claims.org || !alive) return false;
     return { kind: 'user', id: u.id, organizationId: u.organization_id, role: u.role, email: u.email, name: u.name, sessionId: claims.sid };
-  }
-}
-
-/** Machines: an API key in the X-Api-Key header (never in a URL). */
-@Injectable()
-export class ApiKeyStrategy extends PassportStrategy(HeaderAPIKeyStrategy, 'api-key') {
-  constructor(private readonly keys: ApiKeysService) {
-    super({ header: API_KEY_HEADER, prefix: '' }, false);
-  }
-
-  async validate(secret: string): Promise<Principal | false> {
-    return (await this.keys.authenticate(secret)) ?? false;
   }
 }

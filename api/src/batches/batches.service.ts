@@ -296,6 +296,11 @@ export class BatchesService {
   }
 
   /** The ids among `ids` that are batches of the organization. */
+  /** A query that finds the batch in the organization: another module's write may be conditional on it. */
+  existsQuery(orgId: string, id: string): Knex.QueryBuilder {
+    return this.db('batches').where({ organization_id: orgId, id }).select(this.db.raw('1'));
+  }
+
   async existingIds(orgId: string, ids: string[]): Promise<Set<string>> {
     if (ids.length === 0) return new Set();
     const rows: { id: string }[] = await this.db('batches').where('organization_id', orgId).whereIn('id', ids).select('id');

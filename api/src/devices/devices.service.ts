@@ -96,6 +96,11 @@ export class DevicesService {
   }
 
   /** Which of these ids are devices of the organization. */
+  /** A query that finds the device in the organization: another module's write may be conditional on it. */
+  existsQuery(orgId: string, id: string): Knex.QueryBuilder {
+    return this.db('devices').where({ organization_id: orgId, id }).select(this.db.raw('1'));
+  }
+
   async existingIds(orgId: string, ids: readonly string[]): Promise<Set<string>> {
     if (!ids.length) return new Set();
     const rows: { id: string }[] = await this.db('devices').where({ organization_id: orgId }).whereIn('id', ids).select('id');

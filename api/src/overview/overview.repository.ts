@@ -40,10 +40,13 @@ export class OverviewRepository {
     return Number(r?.n ?? 0);
   }
 
-  /** Rejected readings nobody has waived or upheld yet, whenever they came in. */
+  /**
+   * Rejected readings nobody has waived or upheld yet, whenever they came in: the exact figure kept
+   * with every verdict and review (reading_rejection_counts, migration 0031), one row to read.
+   */
   async openRejections(organizationId: string): Promise<number> {
-    const r = await this.db('readings').where({ organization_id: organizationId, status: 'rejected' }).whereNull('review_decision').count({ n: '*' }).first();
-    return Number(r?.n ?? 0);
+    const r = await this.db('reading_rejection_counts').where({ organization_id: organizationId, reason_code: '' }).first('open');
+    return Number(r?.open ?? 0);
   }
 
   async plannedOn(organizationId: string, day: string): Promise<number> {

@@ -8,7 +8,7 @@ import { BatchesService } from '../batches/batches.service.js';
 import { type FieldError, validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
 import { DevicesService } from '../devices/devices.service.js';
-import { JUDGE_QUEUE, type JudgeJob } from './readings.constants.js';
+import { JUDGE_CHUNK, JUDGE_QUEUE, type JudgeJob } from './readings.constants.js';
 import { type NewReading, ReadingsRepository } from './readings.repository.js';
 import { readingView } from './reading-view.js';
 
@@ -52,7 +52,6 @@ export class ReadingsIngestService {
    */
   async check(c: RequestContext, items: ReadingInput[], at: (i: number) => string): Promise<{ rows: NewReading[]; errors: FieldError[] }> {
     const orgId = c.principal.organizationId;
-    const errors: FieldError[] = [];
     const boundDevice = c.principal.kind === 'api_key' ? c.principal.deviceId : null;
     const deviceIds = [...new Set(items.map((r) => r.deviceId ?? boundDevice).filter((x): x is string => !!x))];
     const batchIds = [...new Set(items.map((r) => r.batchId))];
@@ -61,6 +60,17 @@ export class ReadingsIngestService {
       this.devices.existingIds(orgId, deviceIds),
       this.batches.existingIds(orgId, batchIds),
     ]);
+    return this.convert(c, items, at, { devices, batches });
+  }
+
+  /**
+   * Converts every item and collects what is wrong with it; with `refs`, also whether its device and
+   * batch exist in the caller's organization (without, those are left to the caller).
+   */
+  private convert(c: RequestContext, items: ReadingInput[], at: (i: number) => string, refs?: { devices: Set<string>; batches: Set<string> }): { rows: NewReading[]; errors: FieldError[] } {
+    const orgId = c.principal.organizationId;
+    const errors: FieldError[] = [];
+    const boundDevice = c.principal.kind === 'api_key' ? c.principal.deviceId : null;
     const now = Date.now();
     const out: NewReading[] = [];
     items.forEach((r, i) => {
@@ -68,8 +78,8 @@ export class ReadingsIngestService {
       const deviceId = r.deviceId ?? boundDevice;
       if (boundDevice && r.deviceId && r.deviceId !== boundDevice) errors.push({ pointer: `${p}/deviceId`, detail: 'differs from the device this key is bound to', code: 'conflicting' });
       if (!deviceId) errors.push({ pointer: `${p}/deviceId`, detail: 'is required unless the key is bound to a device', code: 'required' });
-      else if (!devices.has(deviceId)) errors.push({ pointer: `${p}/deviceId`, detail: 'no device with that id in your organization', code: 'reference' });
-      if (!batches.has(r.batchId)) errors.push({ pointer: `${p}/batchId`, detail: 'no batch with that id in your organization', code: 'reference' });
+      else if (refs && !refs.devices.has(deviceId)) errors.push({ pointer: `${p}/deviceId`, detail: 'no device with that id in your organization', code: 'reference' });
+      if (refs && !refs.batches.has(r.batchId)) errors.push({ pointer: `${p}/batchId`, detail: 'no batch with that id in your organization', code: 'reference' });
       let valueSi = NaN;
       const isMilestone = r.quantity === 'milestone';
       if (isMilestone) {
@@ -119,7 +129,28 @@ export class ReadingsIngestService {
 
   /** Commits the readings pending, then queues their judging; a failed queue is left to the sweeper. */
   async ingest(c: RequestContext, items: ReadingInput[], at: (i: number) => string) {
+    if (items.length === 1) {
+      const fast = await this.ingestOne(c, items, at);
+      if (fast) return [fast];
+    }
     return this.store(await this.prepare(c, items, at));
+  }
+
+  /**
+   * One new reading in one round trip: the insert itself checks that the device and the batch are
+   * the caller's (their modules' own existence queries, as conditions of the insert). Undefined when
+   * nothing was inserted — a replay, an unknown device or batch, a bad value — and the full path
+   * (check, then insert or read the first reading back) answers with its errors or the replay.
+   */
+  private async ingestOne(c: RequestContext, items: ReadingInput[], at: (i: number) => string) {
+    const { rows, errors } = this.convert(c, items, at);
+    const row = rows[0];
+    if (errors.length || !row) return undefined;
+    const orgId = c.principal.organizationId;
+    const created = await this.repo.insertIfOwned(row, [this.devices.existsQuery(orgId, row.device_id), this.batches.existsQuery(orgId, row.batch_id)]);
+    if (!created) return undefined;
+    await this.enqueue(created.id);
+    return { id: created.id, status: created.status, statusUrl: `/v1/readings/${created.id}`, replayed: false as const };
   }
 
   /** Writes readings already checked by `check` (one transaction) and queues the new ones. */
@@ -146,12 +177,20 @@ export class ReadingsIngestService {
     }
   }
 
-  /** One round trip to Redis for a whole post; on failure the readings wait for the sweeper. */
+  /**
+   * One round trip to Redis for a whole post, one job per JUDGE_CHUNK readings (a Bull job each
+   * cost more CPU than the insert); on failure the readings wait for the sweeper.
+   */
   async enqueueMany(ids: string[]): Promise<void> {
     if (ids.length === 0) return;
     if (ids.length === 1) return void (await this.enqueue(ids[0]!));
+    const jobs: { data: JudgeJob; opts: ReturnType<ReadingsIngestService['jobOptions']> }[] = [];
+    for (let i = 0; i < ids.length; i += JUDGE_CHUNK) {
+      const chunk = ids.slice(i, i + JUDGE_CHUNK);
+      jobs.push(chunk.length === 1 ? { data: { readingId: chunk[0]! }, opts: this.jobOptions(chunk[0]!) } : { data: { readingIds: chunk }, opts: { ...this.jobOptions(`chunk:${chunk[0]}`), timeout: 120_000 } });
+    }
     try {
-      await this.queue.addBulk(ids.map((id) => ({ data: { readingId: id }, opts: this.jobOptions(id) })));
+      await this.queue.addBulk(jobs);
     } catch (e) {
       this.log.warn(`${ids.length} readings stay pending; the sweeper will queue them (${(e as Error).message})`);
     }

@@ -12,6 +12,8 @@ export const MAX_BULK_READINGS = 1000;
 /** Judging jobs a worker runs at once. */
 export const JUDGE_CONCURRENCY = 4;
 
-export interface JudgeJob {
-  readingId: string;
-}
+/** Readings per judging job of a bulk post or import (one Bull job each would cost more than the insert). */
+export const JUDGE_CHUNK = 50;
+
+/** One reading (job id = reading id), or the readings of one chunk of a bulk post, judged one after another. */
+export type JudgeJob = { readingId: string; readingIds?: undefined } | { readingIds: string[]; readingId?: undefined };

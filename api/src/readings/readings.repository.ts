@@ -43,6 +43,12 @@ export interface ReadingRow {
 
 export type NewReading = Omit<ReadingRow, 'id' | 'received_at' | 'status' | 'reasons' | 'judged_at' | 'review_decision' | 'review_note' | 'reviewed_by' | 'reviewed_by_label' | 'reviewed_at'>;
 
+/** The column types of a new reading (insertIfOwned casts each value, as a SELECT list has no target types). */
+const NEW_READING_TYPES: Record<keyof NewReading, string> = {
+  organization_id: 'uuid', batch_id: 'uuid', device_id: 'uuid', client_reading_id: 'text', quantity: 'text', subject: 'text',
+  value_si: 'float8', unit_given: 'text', value_given: 'float8', stable: 'boolean', device_time: 'timestamptz', skew_seconds: 'float8',
+};
+
 /** Every Knex query of readings. */
 @Injectable()
 export class ReadingsRepository {
@@ -78,6 +84,26 @@ export class ReadingsRepository {
     });
   }
 
+  /**
+   * Inserts one new reading only when every `guards` query finds its row (the device and the batch
+   * in the caller's organization), in one statement; undefined when a guard found nothing or the
+   * (device, client reading id) exists already.
+   */
+  async insertIfOwned(row: NewReading, guards: Knex.QueryBuilder[]): Promise<ReadingRow | undefined> {
+    const cols = Object.keys(row) as (keyof NewReading)[];
+    const values = cols.map((c) => {
+      const type = NEW_READING_TYPES[c];
+      if (!type) throw new Error(`insertIfOwned: no column type for ${String(c)}`);
+      return `?::${type}`;
+    });
+    const { rows } = (await this.db.raw(
+      `INSERT INTO readings (${cols.map(() => '??').join(', ')}) SELECT ${values.join(', ')} WHERE ${guards.map(() => 'EXISTS (?)').join(' AND ')}
+       ON CONFLICT (device_id, client_reading_id) DO NOTHING RETURNING *`,
+      [...cols, ...cols.map((c) => row[c] as Knex.Value), ...guards],
+    )) as { rows: ReadingRow[] };
+    return rows[0];
+  }
+
   find(orgId: string, id: string, db: Knex | Knex.Transaction = this.db): Promise<ReadingRow | undefined> {
     return db('readings').where({ organization_id: orgId, id }).first();
   }
@@ -85,11 +111,29 @@ export class ReadingsRepository {
   async list(orgId: string, q: ListQuery) {
     const { reasonCode, reviewed, ...rest } = q.filter;
     const base = this.db('readings').where('readings.organization_id', orgId).select('readings.*');
-    if (reasonCode !== undefined) base.whereRaw('readings.reasons @> ?::jsonb', [JSON.stringify([{ code: String(reasonCode) }])]);
+    // the array column and its partial GIN index (migration 0031); the second condition names the index's predicate
+    if (reasonCode !== undefined) base.whereRaw("readings.reason_codes @> ARRAY[?]::text[] AND readings.reason_codes <> '{}'", [String(reasonCode)]);
     // the open review queue: rejected and not yet waived or upheld
     if (reviewed === true) base.whereNotNull('readings.review_decision');
     if (reviewed === false) base.whereNull('readings.review_decision');
-    return listPage<ReadingRow>(base, { ...q, filter: rest }, readingsListSpec, columns);
+    return listPage<ReadingRow>(base, { ...q, filter: rest }, readingsListSpec, columns, undefined, this.rejectionTotal(orgId, q.filter));
+  }
+
+  /**
+   * The review queue's total from the maintained counts (migration 0031) when the filter is one they
+   * hold — rejected, optionally open or reviewed, optionally one reason code — so the list's cost does
+   * not grow with the number of rejections; undefined otherwise (the list counts its rows).
+   */
+  private rejectionTotal(orgId: string, filter: Record<string, unknown>): (() => Promise<number>) | undefined {
+    const { status, reviewed, reasonCode, ...other } = filter;
+    if (status !== 'rejected' || Object.keys(other).length > 0) return undefined;
+    if (reasonCode !== undefined && typeof reasonCode !== 'string') return undefined;
+    return async () => {
+      const row = await this.db('reading_rejection_counts').where({ organization_id: orgId, reason_code: reasonCode ?? '' }).first('rejected', 'open');
+      const rejected = Number(row?.rejected ?? 0);
+      const open = Number(row?.open ?? 0);
+      return reviewed === true ? rejected - open : reviewed === false ? open : rejected;
+    };
   }
 
   lockForJudging(trx: Knex.Transaction, id: string): Promise<ReadingRow | undefined> {
@@ -128,7 +172,9 @@ export class ReadingsRepository {
   }
 
   async setVerdict(trx: Knex.Transaction, id: string, status: string, reasons: unknown[], valueSi?: number) {
-    await trx('readings').where({ id }).update({ status, reasons: JSON.stringify(reasons), judged_at: trx.fn.now(), ...(valueSi === undefined ? {} : { value_si: valueSi }) });
+    // the codes as an indexed array beside the reasons (the review list filters on it), in the same statement
+    const codes = [...new Set((reasons as { code?: unknown }[]).map((r) => r?.code).filter((c): c is string => typeof c === 'string'))].sort();
+    await trx('readings').where({ id }).update({ status, reasons: JSON.stringify(reasons), reason_codes: codes, judged_at: trx.fn.now(), ...(valueSi === undefined ? {} : { value_si: valueSi }) });
   }
 
   async setReview(trx: Knex.Transaction, id: string, review: { decision: string; note: string | null; by: string; label: string }) {

@@ -2,16 +2,18 @@
  * Shop units in, SI out.
  *
  * Every quantity is stored in SI: kg, m³, kg/m³, °C (our stored temperature unit), m and s. The API
- * accepts the units shops actually use and converts them here, through mathjs, whose definitions are
- * pinned by the reference checks to the exact ones of NIST SP 811 / NIST Handbook 44
- * (1 lb = 0.45359237 kg, 1 in = 0.0254 m, 1 US gal = 231 in³).
+ * accepts the units shops actually use and converts them here, by the exact definitions of NIST
+ * SP 811 / NIST Handbook 44 (1 lb = 0.45359237 kg, 1 in = 0.0254 m, 1 US gal = 231 in³), pinned
+ * by the reference checks; units.spec.ts also checks every factor against mathjs's unit definitions.
+ * (mathjs did the conversions at run time before; loading it cost each API process ~85 MiB.)
  *
- * Temperature *differences* (tolerance bands, window widths) never go through mathjs: it would treat
- * them as absolute temperatures and add the 32 °F offset. They convert by ×5/9 alone.
+ * Temperature *differences* (tolerance bands, window widths) are not absolute temperatures: they
+ * convert by ×5/9 alone, without the 32 °F offset.
  */
-import { create, all } from 'mathjs';
-
-const math = create(all, {});
+const LB = 0.45359237; // kg, exact (NIST SP 811 B.8)
+const IN = 0.0254; // m, exact
+const FT = 0.3048; // m, exact
+const US_GAL = 231 * IN ** 3; // m³, exact by definition
 
 export type Dimension =
   | 'mass'
@@ -51,38 +53,42 @@ export interface UnitDefinition {
 }
 
 interface UnitRule extends UnitDefinition {
-  /** How mathjs spells it; absent for temperature differences, which use `differenceFactor`. */
-  readonly mathjs?: string;
+  /**
+   * SI per one of this unit (absent for temperature differences, which use `differenceFactor`);
+   * a temperature first adds `offset` (°F: −32; K: −273.15), then scales: °C = (°F − 32) × 5/9.
+   */
+  readonly toSI?: number;
+  readonly offset?: number;
   /** Kelvin (= °C) per one of this unit, for temperature differences only. */
   readonly differenceFactor?: number;
 }
 
 const RULES: Readonly<Record<Dimension, readonly UnitRule[]>> = {
   mass: [
-    { symbol: 'g', label: 'gram', aliases: ['gram', 'grams'], mathjs: 'g' },
-    { symbol: 'kg', label: 'kilogram', aliases: ['kilogram', 'kilograms'], mathjs: 'kg' },
-    { symbol: 'lb', label: 'pound (avoirdupois)', aliases: ['lbs', 'pound', 'pounds'], mathjs: 'lb' },
-    { symbol: 'oz', label: 'ounce (avoirdupois)', aliases: ['ounce', 'ounces'], mathjs: 'oz' },
+    { symbol: 'g', label: 'gram', aliases: ['gram', 'grams'], toSI: 0.001 },
+    { symbol: 'kg', label: 'kilogram', aliases: ['kilogram', 'kilograms'], toSI: 1 },
+    { symbol: 'lb', label: 'pound (avoirdupois)', aliases: ['lbs', 'pound', 'pounds'], toSI: LB },
+    { symbol: 'oz', label: 'ounce (avoirdupois)', aliases: ['ounce', 'ounces'], toSI: LB / 16 },
   ],
   volume: [
-    { symbol: 'mL', label: 'millilitre', aliases: ['millilitre', 'milliliter'], mathjs: 'mL' },
-    { symbol: 'L', label: 'litre', aliases: ['litre', 'liter'], mathjs: 'L' },
-    { symbol: 'cm3', label: 'cubic centimetre', aliases: ['cm³', 'cm^3', 'cc'], mathjs: 'cm^3' },
-    { symbol: 'm3', label: 'cubic metre', aliases: ['m³', 'm^3'], mathjs: 'm^3' },
-    { symbol: 'in3', label: 'cubic inch', aliases: ['in³', 'in^3', 'cu in'], mathjs: 'in^3' },
-    { symbol: 'ft3', label: 'cubic foot', aliases: ['ft³', 'ft^3', 'cu ft'], mathjs: 'ft^3' },
-    { symbol: 'gal', label: 'US gallon (231 in³)', aliases: ['US gal', 'gallon'], mathjs: 'gal' },
-    { symbol: 'floz', label: 'US fluid ounce (1/128 US gal)', aliases: ['fl oz', 'US fl oz'], mathjs: 'floz' },
+    { symbol: 'mL', label: 'millilitre', aliases: ['millilitre', 'milliliter'], toSI: 1e-6 },
+    { symbol: 'L', label: 'litre', aliases: ['litre', 'liter'], toSI: 0.001 },
+    { symbol: 'cm3', label: 'cubic centimetre', aliases: ['cm³', 'cm^3', 'cc'], toSI: 1e-6 },
+    { symbol: 'm3', label: 'cubic metre', aliases: ['m³', 'm^3'], toSI: 1 },
+    { symbol: 'in3', label: 'cubic inch', aliases: ['in³', 'in^3', 'cu in'], toSI: IN ** 3 },
+    { symbol: 'ft3', label: 'cubic foot', aliases: ['ft³', 'ft^3', 'cu ft'], toSI: FT ** 3 },
+    { symbol: 'gal', label: 'US gallon (231 in³)', aliases: ['US gal', 'gallon'], toSI: US_GAL },
+    { symbol: 'floz', label: 'US fluid ounce (1/128 US gal)', aliases: ['fl oz', 'US fl oz'], toSI: US_GAL / 128 },
   ],
   density: [
-    { symbol: 'kg/m3', label: 'kilogram per cubic metre', aliases: ['kg/m³', 'kg/m^3'], mathjs: 'kg/m^3' },
-    { symbol: 'g/cm3', label: 'gram per cubic centimetre', aliases: ['g/cm³', 'g/cm^3', 'g/cc'], mathjs: 'g/cm^3' },
-    { symbol: 'lb/ft3', label: 'pound per cubic foot (pcf)', aliases: ['lb/ft³', 'lb/ft^3', 'pcf'], mathjs: 'lb/ft^3' },
+    { symbol: 'kg/m3', label: 'kilogram per cubic metre', aliases: ['kg/m³', 'kg/m^3'], toSI: 1 },
+    { symbol: 'g/cm3', label: 'gram per cubic centimetre', aliases: ['g/cm³', 'g/cm^3', 'g/cc'], toSI: 1000 },
+    { symbol: 'lb/ft3', label: 'pound per cubic foot (pcf)', aliases: ['lb/ft³', 'lb/ft^3', 'pcf'], toSI: LB / FT ** 3 },
   ],
   temperature: [
-    { symbol: 'degC', label: 'degree Celsius', aliases: ['°C', 'C', 'celsius'], mathjs: 'degC' },
-    { symbol: 'degF', label: 'degree Fahrenheit', aliases: ['°F', 'F', 'fahrenheit'], mathjs: 'degF' },
-    { symbol: 'K', label: 'kelvin', aliases: ['kelvin'], mathjs: 'K' },
+    { symbol: 'degC', label: 'degree Celsius', aliases: ['°C', 'C', 'celsius'], toSI: 1, offset: 0 },
+    { symbol: 'degF', label: 'degree Fahrenheit', aliases: ['°F', 'F', 'fahrenheit'], toSI: 5 / 9, offset: -32 },
+    { symbol: 'K', label: 'kelvin', aliases: ['kelvin'], toSI: 1, offset: -273.15 },
   ],
   temperature_difference: [
     { symbol: 'degC', label: 'degree Celsius (difference)', aliases: ['°C', 'C', 'celsius'], differenceFactor: 1 },
@@ -90,16 +96,16 @@ const RULES: Readonly<Record<Dimension, readonly UnitRule[]>> = {
     { symbol: 'K', label: 'kelvin (difference)', aliases: ['kelvin'], differenceFactor: 1 },
   ],
   length: [
-    { symbol: 'mm', label: 'millimetre', aliases: ['millimetre', 'millimeter'], mathjs: 'mm' },
-    { symbol: 'cm', label: 'centimetre', aliases: ['centimetre', 'centimeter'], mathjs: 'cm' },
-    { symbol: 'm', label: 'metre', aliases: ['metre', 'meter'], mathjs: 'm' },
-    { symbol: 'in', label: 'inch', aliases: ['inch', 'inches', '"'], mathjs: 'in' },
-    { symbol: 'ft', label: 'foot', aliases: ['foot', 'feet', "'"], mathjs: 'ft' },
+    { symbol: 'mm', label: 'millimetre', aliases: ['millimetre', 'millimeter'], toSI: 0.001 },
+    { symbol: 'cm', label: 'centimetre', aliases: ['centimetre', 'centimeter'], toSI: 0.01 },
+    { symbol: 'm', label: 'metre', aliases: ['metre', 'meter'], toSI: 1 },
+    { symbol: 'in', label: 'inch', aliases: ['inch', 'inches', '"'], toSI: IN },
+    { symbol: 'ft', label: 'foot', aliases: ['foot', 'feet', "'"], toSI: FT },
   ],
   time: [
-    { symbol: 's', label: 'second', aliases: ['sec', 'second', 'seconds'], mathjs: 's' },
-    { symbol: 'min', label: 'minute', aliases: ['minute', 'minutes'], mathjs: 'min' },
-    { symbol: 'h', label: 'hour', aliases: ['hr', 'hour', 'hours'], mathjs: 'h' },
+    { symbol: 's', label: 'second', aliases: ['sec', 'second', 'seconds'], toSI: 1 },
+    { symbol: 'min', label: 'minute', aliases: ['minute', 'minutes'], toSI: 60 },
+    { symbol: 'h', label: 'hour', aliases: ['hr', 'hour', 'hours'], toSI: 3600 },
   ],
 };
 
@@ -216,8 +222,7 @@ export function toSI(dimension: Dimension, value: number, unit: string): number 
   if (dimension === 'temperature_difference') return temperatureDifferenceToSI(value, unit);
   requireFinite(dimension, value, unit);
   const rule = ruleFor(dimension, unit);
-  const si = ruleFor(dimension, SI_UNITS[dimension]);
-  return trimFloat(math.unit(value, rule.mathjs!).toNumber(si.mathjs!));
+  return trimFloat(rule.offset ? (value + rule.offset) * rule.toSI! : value * rule.toSI!);
 }
 
 /** A value in the dimension's SI unit, expressed in another accepted unit of that dimension. */
@@ -225,8 +230,7 @@ export function fromSI(dimension: Dimension, value: number, unit: string): numbe
   if (dimension === 'temperature_difference') return temperatureDifferenceFromSI(value, unit);
   requireFinite(dimension, value, unit);
   const rule = ruleFor(dimension, unit);
-  const si = ruleFor(dimension, SI_UNITS[dimension]);
-  return trimFloat(math.unit(value, si.mathjs!).toNumber(rule.mathjs!));
+  return trimFloat(rule.offset ? value / rule.toSI! - rule.offset : value / rule.toSI!);
 }
 
 /** A value from one accepted unit to another of the same dimension. */

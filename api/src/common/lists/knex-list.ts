@@ -43,14 +43,19 @@ export const COUNT_CAP = 10_000;
 
 /**
  * Runs a filtered list: one page (with a stable tie-break on id) and the total count, or null when
- * more than COUNT_CAP rows match.
+ * more than COUNT_CAP rows match. `total`, when given, is the exact count kept elsewhere (a
+ * maintained counter), used instead of counting the rows.
  */
-export async function listPage<T>(base: Knex.QueryBuilder, q: ListQuery, spec: ListSpec, columns: Record<string, string> = {}, cap = COUNT_CAP): Promise<{ rows: T[]; total: number | null }> {
+export async function listPage<T>(base: Knex.QueryBuilder, q: ListQuery, spec: ListSpec, columns: Record<string, string> = {}, cap = COUNT_CAP, total?: () => Promise<number>): Promise<{ rows: T[]; total: number | null }> {
   applyFilters(base, q, spec, columns);
-  const capped = base.clone().clearSelect().clearOrder().select(base.client.raw('1')).limit(cap + 1).as('capped');
-  const countQ = base.client.queryBuilder().count<{ count: string }[]>({ count: '*' }).from(capped);
   const sortCol = columns[q.sort.field] ?? q.sort.field;
   const rowsQ = base.clone().orderBy(sortCol, q.sort.order).orderBy(columns.id ?? 'id', q.sort.order).offset(q.offset).limit(q.limit);
+  if (total) {
+    const [rows, n] = await Promise.all([rowsQ, total()]);
+    return { rows: rows as T[], total: n };
+  }
+  const capped = base.clone().clearSelect().clearOrder().select(base.client.raw('1')).limit(cap + 1).as('capped');
+  const countQ = base.client.queryBuilder().count<{ count: string }[]>({ count: '*' }).from(capped);
   const [rows, count] = await Promise.all([rowsQ, countQ]);
   const n = Number(count[0]?.count ?? 0);
   return { rows: rows as T[], total: n > cap ? null : n };

@@ -67,7 +67,8 @@ export class SchemaRegistry {
       this.compiled.set(key, fn);
     }
     if (!fn(value)) return toFieldErrors(fn.errors ?? []);
-    return nulCharacters(value);
+    // the pointers are worked out only for a body that holds a NUL at all (almost none do)
+    return hasNul(value) ? nulCharacters(value) : [];
   }
 
   /** The schemas as OpenAPI 3.1 components: `$ref`s between files rewritten to component refs. */
@@ -97,6 +98,20 @@ function storableDates(ajv: Ajv2020): Ajv2020 {
   });
   ajv.addFormat('date-time', { type: 'string', validate: isStorableDateTime });
   return ajv;
+}
+
+/** Whether any string or key in a value holds U+0000; no allocation on the way. */
+export function hasNul(value: unknown): boolean {
+  if (typeof value === 'string') return value.includes('\u0000');
+  if (!value || typeof value !== 'object') return false;
+  if (Array.isArray(value)) {
+    for (const v of value) if (hasNul(v)) return true;
+    return false;
+  }
+  for (const k in value as Record<string, unknown>) {
+    if (k.includes('\u0000') || hasNul((value as Record<string, unknown>)[k])) return true;
+  }
+  return false;
 }
 
 /**
