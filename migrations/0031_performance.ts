@@ -10,10 +10,11 @@ import type { Knex } from 'knex';
  * 2. `reading_rejection_counts`: per organization, how many readings are rejected and how many of
  *    those are still open (no review decision), in total (reason_code '') and per reason code. The
  *    review list's total and the overview's open rejections read one row instead of counting the
- *    rows. Kept by deferred row triggers, so every writer (judge, review, imports, SQL by hand) keeps
- *    it exact; deferred to commit so the counter rows are locked last and for the shortest time, in
- *    one order ('' first, then codes sorted), which cannot deadlock with the batch and reading locks
- *    the judge and the review take before.
+ *    rows. Kept by triggers, so every writer (judge, review, imports, SQL by hand) keeps it exact:
+ *    updates and deletes by deferred row triggers, so the counter rows are locked at commit, last and
+ *    for the shortest time, in one order ('' first, then codes sorted), which cannot deadlock with the
+ *    batch and reading locks the judge and the review take before; inserts (pending, except SQL by
+ *    hand) by a statement trigger.
  * 3. `api_keys`: a NOTIFY on `pourgate_api_keys` with the key's id at the commit of any change to a
  *    key (revoke, rotation, scopes, expiry, or SQL by hand), so each API process drops its cached
  *    principal (api-keys/principal-cache.ts) whichever way the row changed.
@@ -46,7 +47,7 @@ export async function up(knex: Knex): Promise<void> {
           FROM (SELECT DISTINCT unnest(array_prepend('', OLD.reason_codes)) AS code) k ORDER BY code
         ON CONFLICT (organization_id, reason_code) DO UPDATE SET rejected = c.rejected + excluded.rejected, open = c.open + excluded.open;
       END IF;
-      IF TG_OP IN ('INSERT', 'UPDATE') AND NEW.status = 'rejected' THEN
+      IF TG_OP = 'UPDATE' AND NEW.status = 'rejected' THEN
         INSERT INTO reading_rejection_counts AS c (organization_id, reason_code, rejected, open)
         SELECT NEW.organization_id, code, 1, CASE WHEN NEW.review_decision IS NULL THEN 1 ELSE 0 END
           FROM (SELECT DISTINCT unnest(array_prepend('', NEW.reason_codes)) AS code) k ORDER BY code
@@ -54,10 +55,25 @@ export async function up(knex: Knex): Promise<void> {
       END IF;
       RETURN NULL;
     END $$`);
-  // the WHEN clauses keep the function out of every insert of a pending reading and every update
-  // that changes nothing counted
-  await knex.raw(`CREATE CONSTRAINT TRIGGER readings_count_rejections_insert AFTER INSERT ON readings DEFERRABLE INITIALLY DEFERRED
-    FOR EACH ROW WHEN (NEW.status = 'rejected') EXECUTE FUNCTION pourgate_count_rejections()`);
+  // Readings are inserted pending by the API; rows inserted already rejected (SQL by hand, a seed)
+  // are counted once per statement, one upsert per organization and code: a row trigger would update
+  // the same counter row once per reading in one transaction, each update walking the chain of the
+  // versions before it (quadratic; 100 000 rejected rows took minutes).
+  await knex.raw(`
+    CREATE FUNCTION pourgate_count_inserted_rejections() RETURNS trigger LANGUAGE plpgsql AS $$
+    BEGIN
+      INSERT INTO reading_rejection_counts AS c (organization_id, reason_code, rejected, open)
+      SELECT organization_id, code, count(*), count(*) FILTER (WHERE review_decision IS NULL)
+        FROM new_rows, LATERAL (SELECT DISTINCT unnest(array_prepend('', reason_codes)) AS code) k
+       WHERE status = 'rejected'
+       GROUP BY organization_id, code
+       ORDER BY organization_id, code
+      ON CONFLICT (organization_id, reason_code) DO UPDATE SET rejected = c.rejected + excluded.rejected, open = c.open + excluded.open;
+      RETURN NULL;
+    END $$`);
+  await knex.raw(`CREATE TRIGGER readings_count_rejections_insert AFTER INSERT ON readings REFERENCING NEW TABLE AS new_rows
+    FOR EACH STATEMENT EXECUTE FUNCTION pourgate_count_inserted_rejections()`);
+  // the WHEN clause keeps the function out of every update that changes nothing counted
   await knex.raw(`CREATE CONSTRAINT TRIGGER readings_count_rejections_update AFTER UPDATE ON readings DEFERRABLE INITIALLY DEFERRED
     FOR EACH ROW WHEN ((OLD.status = 'rejected' OR NEW.status = 'rejected')
       AND (OLD.status IS DISTINCT FROM NEW.status OR (OLD.review_decision IS NULL) <> (NEW.review_decision IS NULL)
@@ -106,6 +122,7 @@ export async function down(knex: Knex): Promise<void> {
   await knex.raw('DROP FUNCTION IF EXISTS pourgate_api_key_changed()');
   for (const t of ['insert', 'update', 'delete', 'truncate']) await knex.raw(`DROP TRIGGER IF EXISTS readings_count_rejections_${t} ON readings`);
   await knex.raw('DROP FUNCTION IF EXISTS pourgate_reset_rejection_counts()');
+  await knex.raw('DROP FUNCTION IF EXISTS pourgate_count_inserted_rejections()');
   await knex.raw('DROP FUNCTION IF EXISTS pourgate_count_rejections()');
   await knex.raw('DROP TABLE IF EXISTS reading_rejection_counts');
   await knex.raw('DROP INDEX IF EXISTS readings_reason_codes_idx');

@@ -6,7 +6,7 @@ import { FastifyAdapter, NestFastifyApplication } from '@nestjs/platform-fastify
 import { SwaggerModule } from '@nestjs/swagger';
 import { Redis } from 'ioredis';
 import path from 'node:path';
-import type { FastifyReply, FastifyRequest } from 'fastify';
+import { type FastifyReply, type FastifyRequest, LogController } from 'fastify';
 import type { DestinationStream } from 'pino';
 import { AppModule } from './app.module.js';
 import { frameworkErrorProblem, ProblemDetailsFilter } from './common/filters/problem-details.filter.js';
@@ -36,7 +36,7 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
     trustProxy: false,
     frameworkErrors: frameworkErrorProblem as never,
     // one line per request (below), not Fastify's two ("incoming request", "request completed")
-    disableRequestLogging: true,
+    logController: new LogController({ disableRequestLogging: true }),
   });
   const routes = new RouteTable();
   routes.attach(adapter.getInstance());

@@ -222,5 +222,6 @@ export function isStale(target, srcDirs) {
     }
     return false;
   };
+  // relative to the repository, or absolute (ensureWorkspacePackages passes absolute paths)
   return srcDirs.some((d) => walk(path.resolve(ROOT, d)));
 }
