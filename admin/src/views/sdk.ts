@@ -84,3 +84,8 @@ interface MeFallback {
 export type Profile = MeAnswer;
 export type ProfileUpdate = Schemas['me.update'];
 export type NotifyRejections = NonNullable<ProfileUpdate['notifyRejections']>;
+
+// planning (issue #18): the request body the console sends to plan a batch, and the preview it shows first
+export type BatchPlanBody = Schemas['batch.create'];
+export type BatchOptions = Schemas['batch-options'];
+export type TargetsPreviewBody = Schemas['targets.preview'];
