@@ -22,6 +22,7 @@ import { ReadingsModule } from './readings/readings.module.js';
 import { LiveModule } from './live/live.module.js';
 import { TargetsModule } from './targets/targets.module.js';
 import { WorkOrdersModule } from './work-orders/work-orders.module.js';
+import { PartsModule } from './parts/parts.module.js';
 import { EventsModule } from './events/events.module.js';
 import { WebhooksModule } from './webhooks/webhooks.module.js';
 import { ScheduleModule } from './schedule/schedule.module.js';
@@ -58,6 +59,7 @@ export class AppModule {
         LotsModule,
         MoldsModule,
         WorkOrdersModule,
+        PartsModule,
         TargetsModule,
         BatchesModule,
         ReadingsModule,

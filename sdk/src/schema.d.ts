@@ -579,6 +579,303 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/v1/parts": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Demolded parts with their molded density, specimens and disposition (filter batchId, workOrderId, disposition) */
+        get: operations["Parts_list"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/parts/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One part */
+        get: operations["Parts_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/parts/{id}/specimens": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Record a test specimen of a part
+         * @description core_density: mass ÷ volume of the specimen (ASTM D3574 Test A / ISO 845); indentation_force: force at 25 % deflection (ASTM D3574 Test B1); durometer (ASTM D2240). Judged against the system’s spec. Answers the part.
+         */
+        post: operations["Parts_specimen"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/batches/{id}/parts": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Record a demolded part of a batch
+         * @description Molded density = mass ÷ cavity volume (as stored with the batch), judged against the batch’s target density ± the system’s part tolerance (10 % when it states none). A device key records on its own scale.
+         */
+        post: operations["BatchParts_record"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/batches/{id}/disposition": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** A batch’s disposition (404 until it has one) */
+        get: operations["BatchParts_disposition"];
+        put?: never;
+        /**
+         * Dispose of a batch’s parts: accepted, rework or scrap, with defect causes
+         * @description Once per batch (a second is a 409). Emits batch.disposed.
+         */
+        post: operations["BatchParts_dispose"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/batches/{id}/genealogy": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** What went into a batch (its lots) and what came out (its parts and disposition) */
+        get: operations["BatchParts_genealogy"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/defect-causes": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The organization’s defect causes (seeded with trade terms: voids, short fill, skin defects, splits, shrinkage, tack, ...) */
+        get: operations["DefectCauses_list"];
+        put?: never;
+        /** Add a defect cause */
+        post: operations["DefectCauses_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/defect-causes/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One defect cause */
+        get: operations["DefectCauses_get"];
+        /** Rename, describe or retire a defect cause (its code stays) */
+        put: operations["DefectCauses_update"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/work-orders/{id}/batch-plan": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The batches a work order still needs: ceil(parts remaining ÷ mold cavities), with a body for POST /v1/batches each */
+        get: operations["WorkOrderProduction_plan"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/work-orders/{id}/consumption": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Consumption and yield: planned vs actual mass of A, B and pigment by lot, parts good/rework/scrap, scrap mass
+         * @description 409 while the work order has no batch.
+         */
+        get: operations["WorkOrderProduction_consumption"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/work-orders/{id}/consumption.csv": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Consumption and yield as CSV (one row per material and lot; the JSON form is GET /v1/work-orders/{id}/consumption) */
+        get: operations["WorkOrderProduction_consumptionCsv"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/work-orders/{id}/complete": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Complete a work order: state done, and work_order.completed carries its consumption for the ERP to back-flush stock
+         * @description 409 when it has no batch or is done or cancelled already.
+         */
+        post: operations["WorkOrderProduction_complete"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/lots/{id}/genealogy": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Where a lot went: its batches (with their other lots), work orders and parts */
+        get: operations["LotTrace_genealogy"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/lots/{id}/recall": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The recall report of a lot: every batch it went into, its part count, work order and disposition */
+        get: operations["LotTrace_report"];
+        put?: never;
+        /**
+         * Recall a lot: it goes into no new batch (without an override), and lot.recalled tells the ERP
+         * @description 409 when already recalled. Answers the recall report.
+         */
+        post: operations["LotTrace_recall"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/lots/{id}/recall.csv": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The recall report as CSV (the JSON form is GET /v1/lots/{id}/recall) */
+        get: operations["LotTrace_reportCsv"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/v1/defects/pareto": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * A Pareto of defect causes over a period, per system, mold or station
+         * @description Largest first with the running share; computed by the API.
+         */
+        get: operations["Defects_pareto"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/v1/targets/preview": {
         parameters: {
             query?: never;
@@ -1081,7 +1378,7 @@ export interface paths {
         };
         /**
          * The event feed, for systems that poll instead of receiving webhooks
-         * @description Pass the `next` cursor of one page as `after` to get the following page; every event appears once, in order. Types: webhook.test, reading.accepted, reading.rejected, reading.waived, reading.upheld, batch.created, batch.state_changed, batch.released, batch.on_hold, batch.scrapped, lot.held, lot.hold_released, work_order.created, work_order.changed, drift.detected, drift.acknowledged.
+         * @description Pass the `next` cursor of one page as `after` to get the following page; every event appears once, in order. Types: webhook.test, reading.accepted, reading.rejected, reading.waived, reading.upheld, batch.created, batch.state_changed, batch.released, batch.on_hold, batch.scrapped, lot.held, lot.hold_released, work_order.created, work_order.changed, work_order.completed, batch.disposed, lot.recalled, drift.detected, drift.acknowledged.
          */
         get: operations["Events_feed"];
         put?: never;
@@ -2044,6 +2341,162 @@ export interface webhooks {
         patch?: never;
         trace?: never;
     };
+    "work_order.completed": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A work order was completed: its consumption by lot and its parts, for the ERP to back-flush stock
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "work_order.completed";
+                        data?: components["schemas"]["event.work_order.completed"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "batch.disposed": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A batch's parts were judged after demold (accepted, rework, scrap) with defect causes
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "batch.disposed";
+                        data?: components["schemas"]["event.batch.disposed"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "lot.recalled": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * A lot was recalled: it goes into no new batch, and the count of batches and work orders it went into
+         * @description Delivered with the headers webhook-id (the event id, the same on every retry), webhook-timestamp and webhook-signature (Standard Webhooks, HMAC-SHA256 over "id.timestamp.body"). Answer 2xx within 15 s; 410 disables the endpoint.
+         */
+        post: {
+            parameters: {
+                query?: never;
+                header?: never;
+                path?: never;
+                cookie?: never;
+            };
+            requestBody: {
+                content: {
+                    "application/json": components["schemas"]["event"] & {
+                        /** @constant */
+                        type?: "lot.recalled";
+                        data?: components["schemas"]["event.lot.recalled"];
+                    };
+                };
+            };
+            responses: {
+                /** @description Gone: Pourgate disables the endpoint */
+                410: {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+                /** @description Received */
+                "2XX": {
+                    headers: {
+                        [name: string]: unknown;
+                    };
+                    content?: never;
+                };
+            };
+        };
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "drift.detected": {
         parameters: {
             query?: never;
@@ -2267,6 +2720,63 @@ export interface components {
             password: string;
         };
         /**
+         * Decide what becomes of a batch's parts after demold
+         * @description Each recorded part takes the batch decision unless listed in parts. A batch is disposed once (a second is a 409).
+         */
+        "batch-disposition.create": {
+            /** @enum {unknown} */
+            decision: "accepted" | "rework" | "scrap";
+            /** @description Codes from GET /v1/defect-causes; at least one for rework or scrap */
+            defectCauses?: string[];
+            note?: string | null;
+            /** @description Parts decided otherwise than the batch (one scrapped for voids in an accepted batch) */
+            parts?: {
+                /** Format: uuid */
+                partId: string;
+                /** @enum {unknown} */
+                decision: "accepted" | "rework" | "scrap";
+                defectCauses?: string[];
+            }[];
+        };
+        /** A batch's disposition */
+        "batch-disposition.view": {
+            /** Format: uuid */
+            batchId: string;
+            /** Format: uuid */
+            workOrderId: string | null;
+            /** @enum {unknown} */
+            decision: "accepted" | "rework" | "scrap";
+            defectCauses: string[];
+            note: string | null;
+            parts: {
+                accepted: number;
+                rework: number;
+                scrap: number;
+                undecided: number;
+            };
+            decidedBy: string | null;
+            /** Format: date-time */
+            decidedAt: string;
+        };
+        /** What went into a batch and what came out */
+        "batch-genealogy.view": {
+            /** Format: uuid */
+            batchId: string;
+            state: string;
+            /** Format: uuid */
+            workOrderId: string | null;
+            workOrderExternalRef: string | null;
+            lots: {
+                /** @enum {unknown} */
+                part: "A" | "B" | "pigment";
+                /** Format: uuid */
+                id: string;
+                lotNumber: string;
+            }[];
+            disposition: components["schemas"]["batch-disposition.view"] | null;
+            parts: components["schemas"]["part.view"][];
+        };
+        /**
          * How to pour: density, pigment, allowances, scale, lots
          * @description Give a targetDensity or a packFactor (or neither, to use the mold's default pack factor). Percents are numbers (5 = 5 %).
          */
@@ -2317,6 +2827,32 @@ export interface components {
             plannedFor?: string;
             /** @description Scale divisions the ratio band on the smaller part must span (5 when not given) */
             minimumToleranceDivisions?: number;
+        };
+        /**
+         * The batches a work order still needs
+         * @description Parts planned: the work order's batches not scrapped × the mold's cavities.
+         */
+        "batch-plan.view": {
+            /** Format: uuid */
+            workOrderId: string;
+            externalRef: string;
+            ordered: number;
+            cavities: number;
+            batchesPlanned: number;
+            partsPlanned: number;
+            partsRemaining: number;
+            /** @description ceil(parts remaining ÷ cavities) */
+            proposedBatches: number;
+            /** @description The proposed bodies for POST /v1/batches (at most 200 listed) */
+            batches: {
+                /** Format: uuid */
+                workOrderId: string;
+                /** Format: uuid */
+                moldId: string;
+                /** Format: uuid */
+                materialSystemId: string;
+                options: components["schemas"]["batch-options"];
+            }[];
         };
         /** What a batch still needs before release */
         "batch-release-check.view": {
@@ -2427,6 +2963,10 @@ export interface components {
             stationCode?: string | null;
             options?: components["schemas"]["batch-options"];
             notes?: string | null;
+            /** @description An engineer or admin lets an expired (past expiry or shelf life after opening), held or recalled lot into this batch; audited. Without it such a lot is a 409. */
+            lotOverride?: {
+                reason: string;
+            };
         };
         /** A batch (one mix) with a summary of its targets in kg */
         "batch.view": {
@@ -2485,6 +3025,22 @@ export interface components {
             createdAt: string;
             /** Format: date-time */
             updatedAt: string;
+            /** @description An engineer let expired, held or recalled lots in: why, who, when, which */
+            lotOverride: {
+                reason: string;
+                by: string;
+                /** Format: date-time */
+                at: string;
+                lots: {
+                    /** Format: uuid */
+                    id: string;
+                    lotNumber: string;
+                    /** @enum {unknown} */
+                    part: "A" | "B" | "pigment";
+                    /** @enum {unknown} */
+                    code: "lot_expired" | "lot_on_hold" | "lot_recalled";
+                }[];
+            } | null;
         };
         /** A caution shown with every target: read the SDS first */
         caution: {
@@ -2494,6 +3050,44 @@ export interface components {
              */
             code: string;
             text: string;
+        };
+        /** One material line of a work order's consumption: a part (A, B, pigment) from one lot */
+        "consumption-material": {
+            /** @enum {unknown} */
+            part: "A" | "B" | "pigment";
+            /** Format: uuid */
+            lotId: string | null;
+            lotNumber: string | null;
+            batches: number;
+            /** @description Sum of the batches' targets */
+            plannedKg: number;
+            /** @description Sum of the latest accepted (or waived) settled mass reading of the part in each batch */
+            actualKg: number;
+            /** @description actual − planned */
+            varianceKg: number;
+        };
+        /**
+         * Consumption and yield of a work order
+         * @description Planned: the batches' stored targets; actual: the latest accepted (or waived) settled mass reading of each part in each batch. Parts: recorded parts by their disposition, or the mold's cavities for a disposed batch with none recorded.
+         */
+        "consumption.view": {
+            /** Format: uuid */
+            workOrderId: string;
+            externalRef: string;
+            partNumber: string | null;
+            state: string;
+            ordered: number;
+            batches: number;
+            parts: {
+                accepted: number;
+                rework: number;
+                scrap: number;
+                undecided: number;
+            };
+            /** @description accepted ÷ (accepted + rework + scrap) */
+            yield: number | null;
+            scrapMassKg: number;
+            materials: components["schemas"]["consumption-material"][];
         };
         /** A control chart’s points, limits, signals and capability */
         "control-chart-data.view": {
@@ -2697,6 +3291,33 @@ export interface components {
                 note: string | null;
             };
         };
+        /** Add a defect cause to the organization's list */
+        "defect-cause.create": {
+            /** @description Short stable code (voids, short_fill, ...) */
+            code: string;
+            name: string;
+            description?: string | null;
+        };
+        /** Change a defect cause (its code stays) */
+        "defect-cause.update": {
+            name?: string;
+            description?: string | null;
+            /** @description false: no longer offered for new dispositions (past ones keep it) */
+            active?: boolean;
+        };
+        /** A defect cause of the organization's list */
+        "defect-cause.view": {
+            /** Format: uuid */
+            id: string;
+            code: string;
+            name: string;
+            description: string | null;
+            active: boolean;
+            /** Format: date-time */
+            createdAt: string;
+            /** Format: date-time */
+            updatedAt: string;
+        };
         /** Register a device */
         "device.create": {
             /** @enum {unknown} */
@@ -2798,6 +3419,26 @@ export interface components {
             totalMassKg: number;
             /** @constant */
             state: "planned";
+        };
+        /**
+         * The data of a batch.disposed event
+         * @description A batch's parts were judged after demold: accepted, rework or scrap, with defect causes
+         */
+        "event.batch.disposed": {
+            /** Format: uuid */
+            batchId: string;
+            /** Format: uuid */
+            workOrderId: string | null;
+            /** @enum {unknown} */
+            decision: "accepted" | "rework" | "scrap";
+            /** @description Codes of the organization's defect causes */
+            defectCauses: string[];
+            parts: {
+                accepted: number;
+                rework: number;
+                scrap: number;
+            };
+            note: string | null;
         };
         /**
          * The data of a batch.on_hold event
@@ -2945,6 +3586,21 @@ export interface components {
             releasedBy: string | null;
         };
         /**
+         * The data of a lot.recalled event
+         * @description A lot was recalled: it goes into no new batch; GET /v1/lots/{id}/recall lists every batch, work order and part it went into
+         */
+        "event.lot.recalled": {
+            /** Format: uuid */
+            lotId: string;
+            lotNumber: string;
+            /** @enum {unknown} */
+            part: "A" | "B" | "pigment";
+            reason: string;
+            recalledBy: string;
+            affectedBatches: number;
+            affectedWorkOrders: number;
+        };
+        /**
          * The data of a reading.accepted event
          * @description A reading was judged within every tolerance
          */
@@ -3046,6 +3702,25 @@ export interface components {
             workOrderId: string;
             externalRef: string;
             changed: string[];
+        };
+        /**
+         * The data of a work_order.completed event
+         * @description A work order was completed: what it consumed by lot (from accepted readings) and what it made, for the ERP to back-flush stock
+         */
+        "event.work_order.completed": {
+            /** Format: uuid */
+            workOrderId: string;
+            externalRef: string;
+            partNumber: string | null;
+            parts: {
+                ordered: number;
+                accepted: number;
+                rework: number;
+                scrap: number;
+            };
+            yield: number | null;
+            scrapMassKg: number;
+            materials: components["schemas"]["consumption-material"][];
         };
         /**
          * The data of a work_order.created event
@@ -3249,6 +3924,51 @@ export interface components {
             /** @description Path of the stream with the ticket, for new EventSource(streamUrl) */
             streamUrl: string;
         };
+        /** Where a lot went: batches, work orders, parts */
+        "lot-genealogy.view": {
+            lot: components["schemas"]["lot.view"];
+            batches: {
+                /** Format: uuid */
+                batchId: string;
+                state: string;
+                /** Format: date */
+                plannedFor: string;
+                /** Format: uuid */
+                workOrderId: string | null;
+                workOrderExternalRef: string | null;
+                moldName: string | null;
+                stationCode: string | null;
+                /** @enum {unknown} */
+                disposition: "accepted" | "rework" | "scrap" | null;
+                parts: {
+                    accepted: number;
+                    rework: number;
+                    scrap: number;
+                    undecided: number;
+                };
+                lots: {
+                    /** @enum {unknown} */
+                    part: "A" | "B" | "pigment";
+                    /** Format: uuid */
+                    id: string;
+                    lotNumber: string;
+                }[];
+            }[];
+            workOrders: {
+                /** Format: uuid */
+                id: string;
+                externalRef: string;
+                partNumber: string | null;
+                state: string;
+                batches: number;
+            }[];
+            parts: {
+                accepted: number;
+                rework: number;
+                scrap: number;
+                undecided: number;
+            };
+        };
         /** Record (POST) or change (PUT) a component lot */
         "lot.create": {
             /** @enum {unknown} */
@@ -3267,9 +3987,18 @@ export interface components {
              * @description Last day the lot may be used
              */
             expiresOn: string;
-            /** Format: date */
+            /**
+             * Format: date
+             * @description The day the drum was first opened
+             */
             openedOn?: string | null;
+            /** @description Days the lot stays usable once opened (the supplier's data sheet); usable until its expiry when not given */
+            shelfLifeDaysAfterOpening?: number | null;
             notes?: string | null;
+        };
+        /** Recall a lot */
+        "lot.recall": {
+            reason: string;
         };
         /** Release a lot held by a failed cup test */
         "lot.release-hold": {
@@ -3292,7 +4021,7 @@ export interface components {
             expiresOn: string;
             /** Format: date */
             openedOn: string | null;
-            /** @description Expired before today (UTC) */
+            /** @description Past its usable-until day before today (UTC) */
             expired: boolean;
             notes: string | null;
             /** Format: date-time */
@@ -3311,6 +4040,19 @@ export interface components {
                 at: string;
                 by: string | null;
                 note: string | null;
+            } | null;
+            shelfLifeDaysAfterOpening: number | null;
+            /**
+             * Format: date
+             * @description The last day the lot may be used: its expiry, or the opening day plus the shelf life after opening when earlier
+             */
+            usableUntil: string;
+            /** @description Recalled: the lot goes into no new batch; GET /v1/lots/{id}/recall lists what it went into */
+            recall: {
+                /** Format: date-time */
+                at: string;
+                reason: string | null;
+                by: string | null;
             } | null;
         };
         /** One revision of a material system (SI) */
@@ -3391,6 +4133,18 @@ export interface components {
             freeRiseDensityMinKgM3: number | null;
             freeRiseDensityMaxKgM3: number | null;
             releaseRequires: ("component_temperature" | "mold_temperature" | "ambient_temperature" | "humidity" | "mix_start" | "pour" | "demold")[];
+            /** @description The finished part's spec (SI); null where the system states none */
+            partSpec: {
+                densityTolerancePercent: number | null;
+                coreDensityMinKgM3: number | null;
+                coreDensityMaxKgM3: number | null;
+                indentationForceMinN: number | null;
+                indentationForceMaxN: number | null;
+                /** @enum {unknown} */
+                durometerScale: "A" | "OO" | "D" | null;
+                durometerMin: number | null;
+                durometerMax: number | null;
+            };
         };
         /**
          * Define (POST) or revise (PUT) a material system
@@ -3518,6 +4272,33 @@ export interface components {
             } | null;
             /** @description What a batch must also have recorded (and accepted or waived) before release, besides A, B and the pigment */
             releaseRequires?: ("component_temperature" | "mold_temperature" | "ambient_temperature" | "humidity" | "mix_start" | "pour" | "demold")[];
+            /** @description ± band on a finished part's molded density (mass ÷ cavity volume) against the batch's target density, percent; 10 when not given (common practice) */
+            partDensityTolerancePercent?: number | null;
+            /** @description Core density of a test specimen (density), ASTM D3574 Test A / ISO 845 */
+            coreDensityBand?: {
+                min: components["schemas"]["quantity"];
+                max: components["schemas"]["quantity"];
+            } | null;
+            /** @description Indentation force deflection at 25 % (N or lbf), ASTM D3574 Test B1: flexible foams */
+            indentationForceBand?: {
+                min: {
+                    value: number;
+                    /** @enum {unknown} */
+                    unit: "N" | "lbf";
+                };
+                max: {
+                    value: number;
+                    /** @enum {unknown} */
+                    unit: "N" | "lbf";
+                };
+            } | null;
+            /** @description Durometer hardness band (ASTM D2240): integral-skin parts */
+            durometerBand?: {
+                /** @enum {unknown} */
+                scale: "A" | "OO" | "D";
+                min: number;
+                max: number;
+            } | null;
         };
         /** A material system at its current revision (SI) */
         "material-system.view": {
@@ -3607,6 +4388,18 @@ export interface components {
             freeRiseDensityMinKgM3: number | null;
             freeRiseDensityMaxKgM3: number | null;
             releaseRequires: ("component_temperature" | "mold_temperature" | "ambient_temperature" | "humidity" | "mix_start" | "pour" | "demold")[];
+            /** @description The finished part's spec (SI); null where the system states none */
+            partSpec: {
+                densityTolerancePercent: number | null;
+                coreDensityMinKgM3: number | null;
+                coreDensityMaxKgM3: number | null;
+                indentationForceMinN: number | null;
+                indentationForceMaxN: number | null;
+                /** @enum {unknown} */
+                durometerScale: "A" | "OO" | "D" | null;
+                durometerMin: number | null;
+                durometerMax: number | null;
+            };
         };
         /** The signed-in person */
         me: {
@@ -3768,6 +4561,110 @@ export interface components {
                 /** @description Points outside their ± tolerance */
                 outside: number;
             };
+        };
+        /** Pareto query */
+        "pareto.query": {
+            /**
+             * Format: date
+             * @description First day (UTC), 30 days ago when absent
+             */
+            from?: string;
+            /**
+             * Format: date
+             * @description Last day (UTC), today when absent
+             */
+            to?: string;
+            /**
+             * @default none
+             * @enum {unknown}
+             */
+            groupBy?: "none" | "system" | "mold" | "station";
+            /** Format: uuid */
+            materialSystemId?: string;
+            /** Format: uuid */
+            moldId?: string;
+            stationCode?: string;
+        };
+        /**
+         * Defect causes by count, largest first, with the running share
+         * @description Counted over the rework and scrap parts disposed in the period: a part with two causes counts once for each; a disposed batch with no part recorded counts each cause once per cavity.
+         */
+        "pareto.view": {
+            /** Format: date */
+            from: string;
+            /** Format: date */
+            to: string;
+            /** @enum {unknown} */
+            groupBy: "none" | "system" | "mold" | "station";
+            groups: {
+                key: string | null;
+                name: string | null;
+                defects: number;
+                bars: {
+                    code: string;
+                    name: string;
+                    count: number;
+                    percent: number;
+                    cumulativePercent: number;
+                }[];
+            }[];
+        };
+        /**
+         * Record a demolded part: its mass, weighed or entered
+         * @description Molded density = mass ÷ cavity volume (the batch's mold, as stored with its targets), judged against the batch's target density ± the system's part tolerance.
+         */
+        "part.create": {
+            /**
+             * @description Which cavity of the mold (1 when not given)
+             * @default 1
+             */
+            cavity?: number;
+            serial?: string | null;
+            /** @description The part's mass (mass) */
+            mass: components["schemas"]["quantity"];
+            /**
+             * @description scale: read off a registered scale (deviceId, or the calling device key's scale); entered: typed in
+             * @default entered
+             * @enum {unknown}
+             */
+            source?: "scale" | "entered";
+            /** Format: uuid */
+            deviceId?: string;
+            /** Format: date-time */
+            demoldedAt?: string;
+        };
+        /** A demolded part with its molded density and disposition */
+        "part.view": {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            batchId: string;
+            /** Format: uuid */
+            workOrderId: string | null;
+            cavity: number;
+            serial: string | null;
+            massKg: number;
+            /** @enum {unknown} */
+            massSource: "scale" | "entered";
+            /** Format: uuid */
+            deviceId: string | null;
+            cavityVolumeM3: number;
+            moldedDensityKgM3: number;
+            targetDensityKgM3: number;
+            tolerancePercent: number;
+            deviationPercent: number;
+            /** @enum {unknown} */
+            densityVerdict: "within" | "below" | "above";
+            /** @enum {unknown} */
+            disposition: "accepted" | "rework" | "scrap" | null;
+            defectCauses: string[];
+            dispositionNote: string | null;
+            specimens: components["schemas"]["specimen.view"][];
+            createdBy: string | null;
+            /** Format: date-time */
+            demoldedAt: string;
+            /** Format: date-time */
+            createdAt: string;
         };
         /** Problem details (RFC 9457) */
         problem: {
@@ -4063,6 +4960,106 @@ export interface components {
         };
         /** A reading with its verdict and reasons */
         "reading.view": components["schemas"]["reading.base"];
+        /** The recall report of a lot: every batch it went into */
+        "recall.view": {
+            /** Format: uuid */
+            lotId: string;
+            lotNumber: string;
+            /** @enum {unknown} */
+            part: "A" | "B" | "pigment";
+            recall: {
+                /** Format: date-time */
+                at: string;
+                reason: string | null;
+                by: string | null;
+            } | null;
+            /** Format: date-time */
+            generatedAt: string;
+            rows: {
+                /** Format: uuid */
+                batchId: string;
+                /** Format: date */
+                plannedFor: string;
+                state: string;
+                /** Format: uuid */
+                workOrderId: string | null;
+                workOrderExternalRef: string | null;
+                partNumber: string | null;
+                moldName: string | null;
+                stationCode: string | null;
+                partCount: number;
+                /** @enum {unknown} */
+                disposition: "accepted" | "rework" | "scrap" | null;
+                parts: {
+                    accepted: number;
+                    rework: number;
+                    scrap: number;
+                    undecided: number;
+                };
+            }[];
+            totals: {
+                batches: number;
+                workOrders: number;
+                parts: number;
+            };
+        };
+        /** Record a test specimen cut from a part */
+        "specimen.create": {
+            /**
+             * @description core_density: ASTM D3574 Test A / ISO 845 (mass and dimensions); indentation_force: ASTM D3574 Test B1, force at 25 % (flexible foams); durometer: ASTM D2240 (integral skin)
+             * @enum {unknown}
+             */
+            test: "core_density" | "indentation_force" | "durometer";
+            /** @description Specimen mass (core_density) */
+            mass?: components["schemas"]["quantity"];
+            /** @description Specimen dimensions (length), core_density */
+            dimensions?: {
+                length: components["schemas"]["quantity"];
+                width: components["schemas"]["quantity"];
+                thickness: components["schemas"]["quantity"];
+            };
+            /** @description Indentation force at 25 % deflection */
+            force?: {
+                value: number;
+                /** @enum {unknown} */
+                unit: "N" | "lbf";
+            };
+            durometer?: {
+                /** @enum {unknown} */
+                scale: "A" | "OO" | "D";
+                value: number;
+            };
+            notes?: string | null;
+        };
+        /** A test specimen and its verdict against the system's spec */
+        "specimen.view": {
+            /** Format: uuid */
+            id: string;
+            /** Format: uuid */
+            partId: string;
+            /** @enum {unknown} */
+            test: "core_density" | "indentation_force" | "durometer";
+            massKg: number | null;
+            volumeM3: number | null;
+            densityKgM3: number | null;
+            forceN: number | null;
+            /** @enum {unknown} */
+            durometerScale: "A" | "OO" | "D" | null;
+            durometer: number | null;
+            /**
+             * @description null when the system states no spec for this test
+             * @enum {unknown}
+             */
+            verdict: "within" | "below" | "above" | null;
+            spec: {
+                min: number | null;
+                max: number | null;
+            };
+            notes: string | null;
+            createdBy: string | null;
+            /** Format: date-time */
+            createdAt: string;
+        };
         /** Computed batch targets as the API shows them (the fields of every targets view) */
         "targets.figures": {
             /** @enum {unknown} */
@@ -4450,6 +5447,10 @@ export interface components {
             deliveryId?: string;
             /** @description Why the send failed, in plain words (absent when delivered) */
             reason?: string;
+        };
+        /** Complete a work order */
+        "work-order.complete": {
+            note?: string | null;
         };
         /**
          * Post a work order
@@ -7145,6 +8146,1187 @@ export interface operations {
                 };
             };
             /** @description Needs the action work-orders:write (roles: engineer; key scope work-orders:write) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Parts_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: createdAt, demoldedAt, moldedDensityKgM3, cavity */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: batchId, workOrderId, disposition, densityVerdict, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description parts <start>-<end>/<total>; the total is * beyond the count cap */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["part.view"][];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Parts_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["part.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Parts_specimen: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["specimen.create"];
+            };
+        };
+        responses: {
+            /** @description Created */
+            201: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["part.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action parts:write (roles: engineer; key scope readings:write) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    BatchParts_record: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["part.create"];
+            };
+        };
+        responses: {
+            /** @description Created */
+            201: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["part.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action parts:write (roles: engineer; key scope readings:write) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    BatchParts_disposition: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["batch-disposition.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    BatchParts_dispose: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["batch-disposition.create"];
+            };
+        };
+        responses: {
+            /** @description Created */
+            201: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["batch-disposition.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action parts:dispose (roles: engineer) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    BatchParts_genealogy: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["batch-genealogy.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    DefectCauses_list: {
+        parameters: {
+            query?: {
+                /** @description JSON ["field","ASC"|"DESC"]; fields: code, name, createdAt */
+                sort?: string;
+                /** @description JSON [start,end], inclusive, at most 500 rows */
+                range?: string;
+                /** @description JSON object; filters: q, active, id */
+                filter?: string;
+            };
+            header?: {
+                /** @description ignored; the range query parameter wins */
+                Range?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description One page */
+            200: {
+                headers: {
+                    /** @description defect-causes <start>-<end>/<total>; the total is * beyond the count cap */
+                    "Content-Range"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["defect-cause.view"][];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    DefectCauses_create: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["defect-cause.create"];
+            };
+        };
+        responses: {
+            /** @description Created */
+            201: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["defect-cause.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action defect-causes:manage (roles: engineer, admin) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    DefectCauses_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["defect-cause.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    DefectCauses_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["defect-cause.update"];
+            };
+        };
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["defect-cause.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action defect-causes:manage (roles: engineer, admin) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WorkOrderProduction_plan: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["batch-plan.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WorkOrderProduction_consumption: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["consumption.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WorkOrderProduction_consumptionCsv: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description work_order, part_number, ordered, batches, parts_accepted, parts_rework, parts_scrap, parts_undecided, yield, scrap_mass_kg, material, lot, lot_batches, planned_kg, actual_kg, variance_kg */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "text/csv": string;
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    WorkOrderProduction_complete: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["work-order.complete"];
+            };
+        };
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["consumption.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action parts:dispose (roles: engineer) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    LotTrace_genealogy: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["lot-genealogy.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    LotTrace_report: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["recall.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    LotTrace_recall: {
+        parameters: {
+            query?: never;
+            header?: {
+                /** @description A unique key per request (a UUID). Within 24 h the same key with the same request returns the first response again (header Idempotent-Replayed: true); with another request, 422; while the first is still running, 409 with Retry-After. A request that failed keeps no key. */
+                "Idempotency-Key"?: string;
+            };
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["lot.recall"];
+            };
+        };
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    /** @description true when this is the stored response of an earlier request with the same Idempotency-Key */
+                    "Idempotent-Replayed"?: "true";
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["recall.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action lots:recall (roles: engineer) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    LotTrace_reportCsv: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description lot, part, batch, planned_for, state, work_order, part_number, mold, station, part_count, disposition, accepted, rework, scrap, undecided */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "text/csv": string;
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
+            403: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description An error, as RFC 9457 problem details */
+            default: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+        };
+    };
+    Defects_pareto: {
+        parameters: {
+            query?: {
+                from?: string;
+                to?: string;
+                groupBy?: "none" | "system" | "mold" | "station";
+                materialSystemId?: string;
+                moldId?: string;
+                stationCode?: string;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["pareto.view"];
+                };
+            };
+            /** @description No valid credentials */
+            401: {
+                headers: {
+                    /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */
+                    "Retry-After"?: string;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/problem+json": components["schemas"]["problem"];
+                };
+            };
+            /** @description Needs the action shop:read (roles: admin, engineer, integrator, viewer; key scope shop:read) */
             403: {
                 headers: {
                     /** @description Seconds to wait before retrying (429, 503, and 409 for an Idempotency-Key still in flight) */

@@ -229,9 +229,11 @@ describe('a batch from a work order posted by the ERP', () => {
     expectProblem(await t.http.get('/v1/batches').set(erp), 403);
   });
 
-  it('an expired lot and an overdue scale are warned about, for the day of the pour', async () => {
+  it('an expired lot (let in by an engineer’s override) and an overdue scale are warned about, for the day of the pour', async () => {
     await testDb()('devices').where({ id: scaleId }).update({ calibration_due: '2026-01-01' });
-    const res = await t.http.post('/v1/batches').set(as('engineer')).send({ workOrderId: orderId, options: { packFactor: 2, lots: { A: lotA, B: lotBOld }, scaleDeviceId: scaleId, plannedFor: '2026-04-20' } });
+    const body = { workOrderId: orderId, options: { packFactor: 2, lots: { A: lotA, B: lotBOld }, scaleDeviceId: scaleId, plannedFor: '2026-04-20' } };
+    expect((await t.http.post('/v1/batches').set(as('engineer')).send(body)).status).toBe(409);
+    const res = await t.http.post('/v1/batches').set(as('engineer')).send({ ...body, lotOverride: { reason: 'trial pour' } });
     expect(res.status).toBe(201);
     expect(res.body.summary.warnings).toEqual(expect.arrayContaining(['LOT_EXPIRED', 'CALIBRATION_OVERDUE']));
     await testDb()('devices').where({ id: scaleId }).update({ calibration_due: '2099-01-01' });

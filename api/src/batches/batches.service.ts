@@ -16,6 +16,7 @@ import { EventsService } from '../events/events.service.js';
 import { moveBatch, type TransitionActor } from './batch-transitions.js';
 import type { BatchState } from './batch-states.js';
 import { LotsService } from '../lots/lots.service.js';
+import { roleAllows } from '@pourgate/permissions';
 
 export const batchesListSpec: ListSpec = {
   resource: 'batches',
@@ -42,6 +43,15 @@ export interface BatchInput {
   stationCode?: string | null;
   options?: OptionsInput;
   notes?: string | null;
+  lotOverride?: { reason: string };
+}
+
+/** An engineer let expired, held or recalled lots into the batch: why, who, when, and which lots. */
+export interface LotOverride {
+  reason: string;
+  by: string;
+  at: string;
+  lots: { id: string; lotNumber: string; part: string; code: string }[];
 }
 
 /** What a batch stores of its targets: every SI input, where each came from, and the result. */
@@ -78,6 +88,7 @@ interface BatchRow {
   computation_version: string;
   targets: TargetsSnapshot;
   total_mass_kg: number;
+  lot_override?: LotOverride | null;
   created_by_label: string | null;
   created_at: Date;
   updated_at: Date;
@@ -116,6 +127,7 @@ export function batchView(r: BatchRow) {
       warnings: t.warnings.map((w) => w.code),
     },
     targetsHref: `/v1/batches/${r.id}/targets`,
+    lotOverride: r.lot_override ?? null,
     cautions: t.cautions,
     createdBy: r.created_by_label,
     createdAt: r.created_at,
@@ -219,11 +231,23 @@ export class BatchesService {
       options: body.options,
       at: { systemId: '/materialSystemId', systemRevision: '/materialSystemRevision', systemInline: '/materialSystemId', moldId: '/moldId', moldInline: '/moldId', freeRiseCup: '/freeRiseCup', options: '/options' },
     });
-    // a lot whose cup test failed is held for new batches until an engineer releases it
-    const held = await this.lots.held(orgId, Object.values(resolved.lotIds).filter((x): x is string => !!x));
-    if (held.length) {
+    // an expired, held or recalled lot goes into a new batch only on an engineer's override, with a reason
+    const bars = await this.lots.bars(orgId, Object.values(resolved.lotIds).filter((x): x is string => !!x), resolved.sources.plannedFor);
+    let lotOverride: LotOverride | null = null;
+    if (bars.length) {
       const at = (lotId: string) => `/options/lots/${Object.entries(resolved.lotIds).find(([, id]) => id === lotId)?.[0] ?? ''}`;
-      throw new ProblemException(409, { slug: 'conflict', detail: `Lot ${held.map((l) => l.lotNumber).join(', ')} is on hold: its latest cup test failed. An engineer must release the hold first.`, errors: held.map((l) => ({ pointer: at(l.id), detail: `lot ${l.lotNumber} is on hold since ${l.heldAt} (failed cup test)`, code: 'lot_on_hold' })) });
+      if (!body.lotOverride) {
+        throw new ProblemException(409, {
+          slug: 'conflict',
+          detail: `${bars.map((b) => b.detail).join('; ')}. An engineer may plan the batch anyway with lotOverride: { reason }.`,
+          errors: bars.map((b) => ({ pointer: at(b.id), detail: b.detail, code: b.code })),
+        });
+      }
+      const p = c.principal;
+      if (p.kind !== 'user' || !roleAllows(p.role, 'lots:override')) {
+        throw new ProblemException(403, { detail: 'Only an engineer or an admin may let an expired, held or recalled lot into a batch.', errors: [{ pointer: '/lotOverride', detail: 'your role may not override a lot bar', code: 'forbidden' }] });
+      }
+      lotOverride = { reason: body.lotOverride.reason.trim(), by: actorOf(p).actorLabel, at: new Date().toISOString(), lots: bars.map((b) => ({ id: b.id, lotNumber: b.lotNumber, part: b.part, code: b.code })) };
     }
     if (!stationId && resolved.scaleDeviceId) {
       const dev = await this.db('devices').where({ id: resolved.scaleDeviceId }).first('station_id');
@@ -258,11 +282,13 @@ export class BatchesService {
           computation_version: snapshot.computationVersion,
           targets: JSON.stringify(snapshot),
           total_mass_kg: resolved.targets.totalMass.value,
+          lot_override: lotOverride ? JSON.stringify(lotOverride) : null,
           created_by_label: actor.actorLabel,
         })
         .returning('id');
       await trx('batch_state_transitions').insert({ organization_id: orgId, batch_id: row.id, from_state: null, to_state: INITIAL_BATCH_STATE, actor_type: actor.actorType, actor_id: actor.actorId, actor_label: actor.actorLabel, reason: workOrderId ? 'planned for a work order' : 'planned ad hoc' });
       await this.events.emit(trx, { organizationId: orgId, type: 'batch.created', subjectType: 'batch', subjectId: row.id, data: { batchId: row.id, workOrderId, materialSystemId: resolved.systemId, subject: resolved.targets.subject, totalMassKg: resolved.targets.totalMass.value, state: INITIAL_BATCH_STATE } });
+      if (lotOverride) await this.audit.record({ organizationId: orgId, ...actor, action: 'batch.lot_override', targetType: 'batch', targetId: row.id, details: { reason: lotOverride.reason, lots: lotOverride.lots }, ip: c.ip, userAgent: c.userAgent }, trx);
       await this.audit.record({ organizationId: orgId, ...actor, action: 'batch.planned', targetType: 'batch', targetId: row.id, details: { workOrderId, materialSystemRevisionId: resolved.systemRevisionId, moldId: resolved.moldId, totalMassKg: resolved.targets.totalMass.value, computationVersion: snapshot.computationVersion }, ip: c.ip, userAgent: c.userAgent }, trx);
       return row.id as string;
     });

@@ -17,6 +17,9 @@ export const EVENT_TYPES = {
   'lot.hold_released': 'An engineer released a held lot, with a note saying why',
   'work_order.created': 'A work order arrived (from the ERP or an engineer)',
   'work_order.changed': 'A work order was changed',
+  'work_order.completed': 'A work order was completed: its consumption by lot and its parts, for the ERP to back-flush stock',
+  'batch.disposed': 'A batch\'s parts were judged after demold (accepted, rework, scrap) with defect causes',
+  'lot.recalled': 'A lot was recalled: it goes into no new batch, and the count of batches and work orders it went into',
   'drift.detected': 'A run rule of a control chart fired: the process is moving before readings leave tolerance',
   'drift.acknowledged': 'An engineer acknowledged a drift signal with a note',
 } as const;

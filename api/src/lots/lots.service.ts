@@ -6,7 +6,7 @@ import { listPage } from '../common/lists/knex-list.js';
 import type { ListQuery, ListSpec } from '../common/lists/list-query.js';
 import { type FieldError, validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
-import { isoDay, todayUtc } from '@pourgate/batching';
+import { isoDay, todayUtc, usableUntil } from '@pourgate/batching';
 import { conflict, isUniqueViolation, notFound } from '../shop/errors.js';
 import { EventsService } from '../events/events.service.js';
 import { ProblemException } from '../common/problems.js';
@@ -28,6 +28,7 @@ export interface LotInput {
   receivedOn: string;
   expiresOn: string;
   openedOn?: string | null;
+  shelfLifeDaysAfterOpening?: number | null;
   notes?: string | null;
 }
 
@@ -49,6 +50,24 @@ export interface LotRow {
   hold_released_at?: Date | null;
   hold_released_by_label?: string | null;
   hold_release_note?: string | null;
+  shelf_life_days_after_opening?: number | null;
+  recalled_at?: Date | null;
+  recall_reason?: string | null;
+  recalled_by_label?: string | null;
+}
+
+/** Why a lot may not go into a new batch without an engineer's override. */
+export interface LotBar {
+  id: string;
+  lotNumber: string;
+  part: LotPart;
+  code: 'lot_expired' | 'lot_on_hold' | 'lot_recalled';
+  detail: string;
+}
+
+/** The last day a lot may be used: its expiry, or earlier once opened when it has a shelf life after opening. */
+export function lotUsableUntil(r: LotRow): string {
+  return usableUntil(isoDay(r.expires_on)!, isoDay(r.opened_on), r.shelf_life_days_after_opening ?? null);
 }
 
 export function lotView(r: LotRow, today = todayUtc()) {
@@ -61,7 +80,10 @@ export function lotView(r: LotRow, today = todayUtc()) {
     receivedOn: isoDay(r.received_on),
     expiresOn: isoDay(r.expires_on),
     openedOn: isoDay(r.opened_on),
-    expired: isoDay(r.expires_on)! < today,
+    shelfLifeDaysAfterOpening: r.shelf_life_days_after_opening ?? null,
+    usableUntil: lotUsableUntil(r),
+    expired: lotUsableUntil(r) < today,
+    recall: r.recalled_at ? { at: r.recalled_at, reason: r.recall_reason ?? null, by: r.recalled_by_label ?? null } : null,
     /** Held for new batches: its latest cup test failed and no engineer has released it yet. */
     hold: r.held_at ? { since: r.held_at, cupTestId: r.held_by_cup_test_id ?? null } : null,
     lastHoldRelease: r.hold_released_at ? { at: r.hold_released_at, by: r.hold_released_by_label ?? null, note: r.hold_release_note ?? null } : null,
@@ -121,6 +143,7 @@ export class LotsService {
       received_on: body.receivedOn,
       expires_on: body.expiresOn,
       opened_on: body.openedOn ?? null,
+      shelf_life_days_after_opening: body.shelfLifeDaysAfterOpening ?? null,
       notes: body.notes ?? null,
     };
   }
@@ -161,6 +184,38 @@ export class LotsService {
       })
       .catch((e) => this.duplicate(e, body));
     return this.get(c, id);
+  }
+
+  /**
+   * The lots among `ids` that may not go into a batch poured on `day` without an override: used
+   * past their expiry (or their shelf life after opening), held by a failed cup test, or recalled.
+   */
+  async bars(orgId: string, ids: string[], day: string): Promise<LotBar[]> {
+    const found = await this.rows(orgId, ids);
+    const out: LotBar[] = [];
+    for (const r of found.values()) {
+      const until = lotUsableUntil(r);
+      const base = { id: r.id, lotNumber: r.lot_number, part: r.part };
+      if (r.recalled_at) out.push({ ...base, code: 'lot_recalled', detail: `lot ${r.lot_number} is recalled${r.recall_reason ? `: ${r.recall_reason}` : ''}` });
+      if (r.held_at) out.push({ ...base, code: 'lot_on_hold', detail: `lot ${r.lot_number} is on hold since ${new Date(r.held_at).toISOString()} (failed cup test)` });
+      if (until < day) out.push({ ...base, code: 'lot_expired', detail: `lot ${r.lot_number} may be used until ${until}${until !== isoDay(r.expires_on) ? ' (its shelf life after opening)' : ''}; the batch is for ${day}` });
+    }
+    return out;
+  }
+
+  /**
+   * Recalls a lot: it may go into no new batch, and lot.recalled tells the ERP which batches it went
+   * into (counted by the caller, who reads the genealogy). Audited; a second recall is a 409.
+   */
+  async recall(trx: Knex.Transaction, c: RequestContext, id: string, reason: string, affected: { batches: number; workOrders: number }) {
+    const orgId = c.principal.organizationId;
+    const actor = actorOf(c.principal);
+    const lot = await trx('lots').where({ id, organization_id: orgId }).forUpdate().first('id', 'lot_number', 'part', 'recalled_at');
+    if (!lot) throw notFound('lot');
+    if (lot.recalled_at) throw new ProblemException(409, { slug: 'conflict', detail: `Lot ${lot.lot_number} is already recalled.` });
+    await trx('lots').where({ id }).update({ recalled_at: trx.fn.now(), recall_reason: reason, recalled_by_label: actor.actorLabel });
+    await this.events.emit(trx, { organizationId: orgId, type: 'lot.recalled', subjectType: 'lot', subjectId: id, data: { lotId: id, lotNumber: lot.lot_number, part: lot.part, reason, recalledBy: actor.actorLabel, affectedBatches: affected.batches, affectedWorkOrders: affected.workOrders } });
+    await this.audit.record({ organizationId: orgId, ...actor, action: 'lot.recalled', targetType: 'lot', targetId: id, details: { reason, ...affected }, ip: c.ip, userAgent: c.userAgent }, trx);
   }
 
   /** The lots among `ids` on hold, for refusing a new batch. */

@@ -1,5 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { createHash } from 'node:crypto';
+import type { Knex } from 'knex';
 import { EventsService } from '../events/events.service.js';
 import { AuditService } from '../audit/audit.service.js';
 import { actorOf, type RequestContext } from '../auth/principal.js';
@@ -161,6 +162,14 @@ export class WorkOrdersService {
       return { id: existing.id as string, created: false };
     });
     return { created: result.created, order: await this.get(c, result.id) };
+  }
+
+  /** Marks an order done inside the caller's transaction (its completion, with the consumption); false when it is done or cancelled already. */
+  async markDone(trx: Knex.Transaction, orgId: string, id: string): Promise<boolean> {
+    const r = await this.repo.row(orgId, id, trx);
+    if (!r || r.state === 'done' || r.state === 'cancelled') return false;
+    await this.repo.update(trx, orgId, id, { state: 'done' });
+    return true;
   }
 
   async update(c: RequestContext, id: string, body: WorkOrderInput) {

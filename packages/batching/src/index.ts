@@ -25,3 +25,4 @@ export * from './findings.js';
 export * from './bounds.js';
 export * from './cup-test.js';
 export * from './release.js';
+export * from './parts.js';

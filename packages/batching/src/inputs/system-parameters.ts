@@ -9,6 +9,7 @@ import { BatchingInputError } from '../errors.js';
 import type { FieldError } from './field-errors.js';
 import { QuantityReader, opt, type Quantity } from './quantities.js';
 import { translate } from './field-errors.js';
+import { forceToNewtons } from '../parts.js';
 
 export interface MaterialSystemInput {
   name?: string;
@@ -47,6 +48,10 @@ export interface MaterialSystemInput {
   tackFreeTimeWindow?: { min: Quantity; max: Quantity } | null;
   freeRiseDensityBand?: { min: Quantity; max: Quantity } | null;
   releaseRequires?: ReleaseRequirement[];
+  partDensityTolerancePercent?: number | null;
+  coreDensityBand?: { min: Quantity; max: Quantity } | null;
+  indentationForceBand?: { min: { value: number; unit: 'N' | 'lbf' }; max: { value: number; unit: 'N' | 'lbf' } } | null;
+  durometerBand?: { scale: 'A' | 'OO' | 'D'; min: number; max: number } | null;
 }
 
 /** The parameter columns of material_system_revisions (everything a revision pins down). */
@@ -93,6 +98,14 @@ export interface RevisionColumns {
   free_rise_density_max_kg_m3: number | null;
   /** Comma-separated ReleaseRequirement values (text, so revisions compare with ===); '' for none. */
   release_requires: string;
+  part_density_tolerance_percent?: number | null;
+  core_density_min_kg_m3?: number | null;
+  core_density_max_kg_m3?: number | null;
+  indentation_force_min_n?: number | null;
+  indentation_force_max_n?: number | null;
+  durometer_scale?: 'A' | 'OO' | 'D' | null;
+  durometer_min?: number | null;
+  durometer_max?: number | null;
 }
 
 export const REVISION_COLUMNS: readonly (keyof RevisionColumns)[] = [
@@ -106,6 +119,8 @@ export const REVISION_COLUMNS: readonly (keyof RevisionColumns)[] = [
   'ratio_tolerance_pbw', 'pigment_dose_basis', 'pigment_placement', 'pigment_carrier_oh_number',
   'cream_time_min_s', 'cream_time_max_s', 'rise_time_min_s', 'rise_time_max_s', 'tack_free_time_min_s', 'tack_free_time_max_s',
   'free_rise_density_min_kg_m3', 'free_rise_density_max_kg_m3', 'release_requires',
+  'part_density_tolerance_percent', 'core_density_min_kg_m3', 'core_density_max_kg_m3', 'indentation_force_min_n', 'indentation_force_max_n',
+  'durometer_scale', 'durometer_min', 'durometer_max',
 ];
 const WINDOWS = new Set(['componentTemperatureWindow', 'moldTemperatureWindow', 'ambientTemperatureWindow', 'creamTimeWindow', 'riseTimeWindow', 'tackFreeTimeWindow', 'freeRiseDensityBand']);
 
@@ -138,6 +153,8 @@ export function readSystemInput(body: MaterialSystemInput, base = ''): { cols: R
     return w ? (q.read('time', w[edge], at(`${field}/${edge}`), { nonNegative: true }) ?? null) : null;
   };
   const band = body.freeRiseDensityBand ?? null;
+  const core = body.coreDensityBand ?? null;
+  const ifd = body.indentationForceBand ?? null;
   const cols: RevisionColumns = {
     ratio_basis: body.ratioBasis,
     ratio_a: body.ratio?.a,
@@ -180,8 +197,24 @@ export function readSystemInput(body: MaterialSystemInput, base = ''): { cols: R
     free_rise_density_min_kg_m3: band ? (q.read('density', band.min, at('freeRiseDensityBand/min'), { positive: true }) ?? null) : null,
     free_rise_density_max_kg_m3: band ? (q.read('density', band.max, at('freeRiseDensityBand/max'), { positive: true }) ?? null) : null,
     release_requires: [...new Set(body.releaseRequires ?? [])].join(','),
+    part_density_tolerance_percent: body.partDensityTolerancePercent ?? null,
+    core_density_min_kg_m3: core ? (q.read('density', core.min, at('coreDensityBand/min'), { positive: true }) ?? null) : null,
+    core_density_max_kg_m3: core ? (q.read('density', core.max, at('coreDensityBand/max'), { positive: true }) ?? null) : null,
+    indentation_force_min_n: ifd ? forceToNewtons(ifd.min.value, ifd.min.unit) : null,
+    indentation_force_max_n: ifd ? forceToNewtons(ifd.max.value, ifd.max.unit) : null,
+    durometer_scale: body.durometerBand?.scale ?? null,
+    durometer_min: body.durometerBand?.min ?? null,
+    durometer_max: body.durometerBand?.max ?? null,
   };
   const errors = [...q.errors];
+  const edges: [string, number | null | undefined, number | null | undefined][] = [
+    ['coreDensityBand', cols.core_density_min_kg_m3, cols.core_density_max_kg_m3],
+    ['indentationForceBand', cols.indentation_force_min_n, cols.indentation_force_max_n],
+    ['durometerBand', cols.durometer_min, cols.durometer_max],
+  ];
+  for (const [field, min, max] of edges) {
+    if (typeof min === 'number' && typeof max === 'number' && min > max) errors.push({ pointer: at(`${field}/min`), detail: 'must not be above the maximum', code: 'range' });
+  }
   if (errors.length === 0) {
     try {
       validateBatchTargetsInput({ system: parametersOf(cols, body.kind), freeRiseCup: { volume: 0.001 } });
@@ -235,6 +268,20 @@ export function parametersOf(r: RevisionColumns, kind?: SystemKind | string): Ma
   };
 }
 
+/** The finished part's spec of a revision: the density band and the specimens' bands (SI; nulls where the system states none). */
+export function partSpecOf(r: Partial<RevisionColumns>) {
+  return {
+    densityTolerancePercent: r.part_density_tolerance_percent ?? null,
+    coreDensityMinKgM3: r.core_density_min_kg_m3 ?? null,
+    coreDensityMaxKgM3: r.core_density_max_kg_m3 ?? null,
+    indentationForceMinN: r.indentation_force_min_n ?? null,
+    indentationForceMaxN: r.indentation_force_max_n ?? null,
+    durometerScale: r.durometer_scale ?? null,
+    durometerMin: r.durometer_min ?? null,
+    durometerMax: r.durometer_max ?? null,
+  };
+}
+
 function windowOf(min: number | null, max: number | null): { min: number; max: number } | undefined {
   return min !== null && max !== null && min !== undefined && max !== undefined ? { min, max } : undefined;
 }
@@ -284,6 +331,7 @@ export function parametersView(r: RevisionColumns) {
     freeRiseDensityMinKgM3: r.free_rise_density_min_kg_m3 ?? null,
     freeRiseDensityMaxKgM3: r.free_rise_density_max_kg_m3 ?? null,
     releaseRequires: (r.release_requires ?? '').split(',').filter(Boolean),
+    partSpec: partSpecOf(r),
     potLifeS: r.pot_life_s,
     demoldTimeS: r.demold_time_s,
     fullCureTimeS: r.full_cure_time_s,
