@@ -31,7 +31,7 @@ import { CautionList, ComponentTable, SdsLine, TargetSummary, WarningList } from
 import { batchTitle, shortRef } from '../batches/labels';
 import { formatDate } from '../format/dates';
 import { formatNumber } from '../format/quantities';
-import { useUnitSystem } from '../review/hooks';
+import { useHolds, useUnitSystem } from '../review/hooks';
 import { monoFont } from '../theme';
 import type { Batch, Device, Lot, MaterialSystem, Mold, TargetsView, WorkOrder } from '../views/sdk';
 import { buildPlan, fieldOfPointer, initialPlan, LOT_FIELD, lotRefusals, MAX_BATCHES_AT_ONCE, planFromSearch, previewOf, type LotPart, type PlanForm } from './planRequest';
@@ -156,7 +156,15 @@ function PlanBatch() {
     }
   }, [lotsA, lotsB]);
 
-  const request = useMemo(() => buildPlan(form), [form]);
+  const refused = (['A', 'B', 'pigment'] as const).flatMap((p) => {
+    const l = lotsOf[p].find((x) => x.id === form[LOT_FIELD[p]]);
+    const why = l ? lotRefusals(l, form.plannedFor) : [];
+    return why.length ? [{ part: p, lot: l!, why }] : [];
+  });
+  const refusedLots = refused.length > 0;
+  const canOverride = useHolds('lots:override');
+  // the override's reason travels only while a chosen lot needs it
+  const request = useMemo(() => buildPlan(refusedLots ? form : { ...form, lotOverrideReason: '' }), [form, refusedLots]);
   const previewBody = useMemo(() => previewOf(request.body, order ? { materialSystemId: order.materialSystemId, moldId: order.moldId } : undefined), [request.body, order]);
   const previewKey = previewBody ? JSON.stringify(previewBody) : null;
   const bodyKey = request.body ? JSON.stringify(request.body) : null;
@@ -253,7 +261,7 @@ function PlanBatch() {
     const list = lotsOf[part];
     const chosen = list.find((l) => l.id === form[key]);
     const refusals = chosen ? lotRefusals(chosen, form.plannedFor) : [];
-    const error = errors[key] ?? (refusals.length ? `Refused for a new batch: ${refusals.join('; ')}.` : undefined);
+    const error = errors[key] ?? (refusals.length ? `Refused for a new batch: ${refusals.join('; ')}` : undefined);
     return (
       <FormControl fullWidth error={!!error} key={part}>
         <InputLabel id={`plan-${key}-label`} shrink>
@@ -278,7 +286,7 @@ function PlanBatch() {
                 <Box sx={{ display: 'flex', gap: 1, alignItems: 'baseline', width: '100%' }}>
                   <span style={{ fontFamily: monoFont }}>{l.lotNumber}</span>
                   <Typography variant="caption" color={why.length ? 'error' : 'text.secondary'} sx={{ ml: 'auto' }}>
-                    {why.length ? (l.hold ? 'on hold' : 'expired') : `good to ${formatDate(`${l.expiresOn}T12:00:00`)}`}
+                    {why.length ? (l.recall ? 'recalled' : l.hold ? 'on hold' : 'expired') : `good to ${formatDate(`${l.usableUntil}T12:00:00`)}`}
                   </Typography>
                 </Box>
               </MenuItem>
@@ -286,18 +294,23 @@ function PlanBatch() {
           })}
         </Select>
         <FormHelperText data-testid={`plan-${key}-help`}>
-          {error ?? (chosen ? `Expires ${formatDate(`${chosen.expiresOn}T12:00:00`)}` : part === 'pigment' ? 'Optional' : 'Can be recorded at the scale instead')}
+          {error
+            ? refusals.length && !errors[key]
+              ? 'Refused for a new batch: see below'
+              : error
+            : chosen
+              ? `Usable until ${formatDate(`${chosen.usableUntil}T12:00:00`)}${chosen.usableUntil < chosen.expiresOn ? ' (opened)' : ''}`
+              : part === 'pigment'
+                ? 'Optional'
+                : 'Can be recorded at the scale instead'}
         </FormHelperText>
       </FormControl>
     );
   };
 
-  const refusedLots = (['A', 'B', 'pigment'] as const).some((p) => {
-    const l = lotsOf[p].find((x) => x.id === form[LOT_FIELD[p]]);
-    return l ? lotRefusals(l, form.plannedFor).length > 0 : false;
-  });
   const busy = progress !== null;
-  const canPlan = !!request.body && !busy && !refusedLots;
+  const overridden = refusedLots && canOverride && form.lotOverrideReason.trim().length >= 3;
+  const canPlan = !!request.body && !busy && (!refusedLots || overridden);
 
   return (
     <Box sx={{ maxWidth: 1280 }}>
@@ -432,6 +445,37 @@ function PlanBatch() {
               {lotField('A')}
               {lotField('B')}
               {lotField('pigment')}
+              {refusedLots ? (
+                <Alert severity="warning" data-testid="plan-lot-bar" sx={{ '& .MuiAlert-message': { width: '100%' } }}>
+                  <Typography variant="body2" sx={{ fontWeight: 600 }}>
+                    {refused.length === 1 ? 'This lot is refused for new batches' : 'These lots are refused for new batches'}
+                  </Typography>
+                  <Box component="ul" sx={{ m: 0, mb: 1, pl: 2.5 }}>
+                    {refused.map((r) => (
+                      <li key={r.part}>
+                        <span style={{ fontFamily: monoFont }}>{r.lot.lotNumber}</span>: {r.why.join('; ')}
+                      </li>
+                    ))}
+                  </Box>
+                  {canOverride ? (
+                    <TextField
+                      label="Reason to use it anyway"
+                      value={form.lotOverrideReason}
+                      onChange={(e) => set('lotOverrideReason')(e.target.value)}
+                      error={!!errors.lotOverrideReason}
+                      helperText={errors.lotOverrideReason ?? 'An engineer’s override: recorded on the batch and in the audit log with your name.'}
+                      fullWidth
+                      multiline
+                      minRows={2}
+                      size="small"
+                      sx={{ bgcolor: 'background.paper' }}
+                      slotProps={{ htmlInput: { 'data-testid': 'plan-lotOverrideReason', maxLength: 1000 }, inputLabel: { shrink: true } }}
+                    />
+                  ) : (
+                    <Typography variant="body2">Choose another lot: only an engineer or an admin may let such a lot in, with a reason.</Typography>
+                  )}
+                </Alert>
+              ) : null}
             </Group>
 
             <Group title="When and where">
@@ -538,8 +582,10 @@ function PlanBatch() {
                 <Typography variant="body2" color="text.secondary">
                   {busy
                     ? `Planning ${progress!.done + 1} of ${progress!.of}…`
-                    : refusedLots
-                      ? 'A lot chosen is refused for new batches: choose another.'
+                    : refusedLots && !overridden
+                      ? canOverride
+                        ? 'A lot chosen is refused: give a reason to override, or choose another.'
+                        : 'A lot chosen is refused for new batches: choose another.'
                       : order
                         ? `For ${order.externalRef}, on ${formatDate(`${form.plannedFor || today}T12:00:00`)}`
                         : `Ad hoc, on ${formatDate(`${form.plannedFor || today}T12:00:00`)}`}

@@ -136,15 +136,30 @@ describe('fieldOfPointer', () => {
 });
 
 describe('lotRefusals', () => {
-  const lot = { lotNumber: 'DF28-A-0117', expiresOn: '2031-03-20', expired: false, hold: null };
+  const lot = { lotNumber: 'DF28-A-0117', expiresOn: '2031-03-20', usableUntil: '2031-03-20', openedOn: null, expired: false, hold: null, recall: null };
   it('says nothing of a lot good on the planned day', () => {
     expect(lotRefusals(lot, TODAY)).toEqual([]);
-    // a lot is usable on its expiry day and expired from the next one (common practice: "use by")
+    // a lot is usable on its last day and expired from the next one (common practice: "use by")
     expect(lotRefusals(lot, '2031-03-20')).toEqual([]);
   });
-  it('names the hold and an expiry before the planned day', () => {
+  it('names the recall, the hold and a usable-until day before the planned day', () => {
     expect(lotRefusals(lot, '2031-03-21')).toEqual(['expired on 2031-03-20, before the planned day']);
     expect(lotRefusals({ ...lot, hold: { since: '2031-03-10T08:00:00Z', cupTestId: null } }, TODAY)).toEqual(['on hold since 2031-03-10: its latest cup test failed']);
     expect(lotRefusals({ ...lot, expired: true }, TODAY)).toEqual(['expired on 2031-03-20']);
+    expect(lotRefusals({ ...lot, recall: { at: '2031-03-12T09:00:00Z', reason: 'voids in parts', by: 'E. Engineer' } }, TODAY)).toEqual(['recalled on 2031-03-12 (voids in parts)']);
+  });
+  it('says when the shelf life after opening ends the lot before its expiry', () => {
+    const opened = { ...lot, openedOn: '2031-02-01', usableUntil: '2031-03-03' };
+    expect(lotRefusals(opened, TODAY)).toEqual(['usable until 2031-03-03 after opening on 2031-02-01, before the planned day']);
+  });
+});
+
+describe('the lot override', () => {
+  it('is sent with its reason only when one is typed', () => {
+    const base = { ...initialPlan('metric', TODAY), systemId: SYSTEM, moldId: MOLD };
+    expect(buildPlan(base).body).not.toHaveProperty('lotOverride');
+    expect(buildPlan({ ...base, lotOverrideReason: '  ' }).body).not.toHaveProperty('lotOverride');
+    expect(buildPlan({ ...base, lotOverrideReason: ' Supplier extended the date in writing ' }).body?.lotOverride).toEqual({ reason: 'Supplier extended the date in writing' });
+    expect(fieldOfPointer('/lotOverride/reason')).toBe('lotOverrideReason');
   });
 });

@@ -38,6 +38,8 @@ export interface PlanForm {
   notes: string;
   /** How many identical batches to plan (a work order's proposal), 1 otherwise. */
   count: string;
+  /** Why an expired, held or recalled lot goes in anyway (an engineer's override, audited); '' for none. */
+  lotOverrideReason: string;
 }
 
 export function initialPlan(system: 'metric' | 'imperial', today: string): PlanForm {
@@ -67,6 +69,7 @@ export function initialPlan(system: 'metric' | 'imperial', today: string): PlanF
     plannedFor: today,
     notes: '',
     count: '1',
+    lotOverrideReason: '',
   };
 }
 
@@ -220,6 +223,7 @@ export function buildPlan(f: PlanForm): PlanRequest {
   if (Object.keys(options).length) body.options = options;
   if (f.stationCode.trim()) body.stationCode = f.stationCode.trim();
   if (f.notes.trim()) body.notes = f.notes.trim();
+  if (f.lotOverrideReason.trim()) body.lotOverride = { reason: f.lotOverrideReason.trim() };
 
   let count = 1;
   const c = num('count');
@@ -260,6 +264,7 @@ export function fieldOfPointer(pointer: string): keyof PlanForm | null {
     [/^\/freeRiseCup/, 'cupVolume'],
     [/^\/stationCode/, 'stationCode'],
     [/^\/notes/, 'notes'],
+    [/^\/lotOverride/, 'lotOverrideReason'],
     [/^\/options\/packFactor/, 'packFactor'],
     [/^\/options\/targetDensity/, 'targetDensity'],
     [/^\/options\/pigmentPercent/, 'pigmentPercent'],
@@ -279,12 +284,17 @@ export const LOT_FIELD: Readonly<Record<LotPart, 'lotA' | 'lotB' | 'lotPigment'>
 
 /**
  * Why the API will refuse a lot for a new batch on `plannedFor`, in words, as the lot's own view
- * states it (its hold, its expiry date); empty when nothing stands in the way. The API decides; this
- * only says it before the person presses the button.
+ * states it (its recall, its hold, its usable-until day: the expiry, or the opening day plus the
+ * shelf life after opening); empty when nothing stands in the way. The API decides; this only says
+ * it before the person presses the button.
  */
-export function lotRefusals(lot: Pick<Lot, 'lotNumber' | 'expiresOn' | 'expired' | 'hold'>, plannedFor: string): string[] {
+export function lotRefusals(lot: Pick<Lot, 'lotNumber' | 'usableUntil' | 'expiresOn' | 'openedOn' | 'expired' | 'hold' | 'recall'>, plannedFor: string): string[] {
   const out: string[] = [];
+  if (lot.recall) out.push(`recalled on ${lot.recall.at.slice(0, 10)}${lot.recall.reason ? ` (${lot.recall.reason})` : ''}`);
   if (lot.hold) out.push(`on hold since ${lot.hold.since.slice(0, 10)}: its latest cup test failed`);
-  if (lot.expired || (plannedFor && lot.expiresOn < plannedFor)) out.push(`expired on ${lot.expiresOn}${plannedFor && !lot.expired ? ', before the planned day' : ''}`);
+  if (lot.expired || (plannedFor && lot.usableUntil < plannedFor)) {
+    const why = lot.usableUntil < lot.expiresOn ? `usable until ${lot.usableUntil} after opening on ${lot.openedOn ?? '?'}` : `expired on ${lot.usableUntil}`;
+    out.push(`${why}${plannedFor && !lot.expired ? ', before the planned day' : ''}`);
+  }
   return out;
 }
