@@ -12,6 +12,7 @@ import batches, { PourSheetPage } from './batches';
 import { CalculatorPage } from './calculator';
 import { ControlPage } from './control';
 import { PlanBatchPage } from './planning';
+import { LotTracePage, RecallReportPage } from './genealogy';
 import { SignInPage } from './auth/SignInPage';
 import { Dashboard } from './dashboard';
 import { AcceptInvitationPage } from './invitations/AcceptInvitationPage';
@@ -50,6 +51,8 @@ export function App() {
       <CustomRoutes>
         <Route path="/batches/:id/pour-sheet" element={<PourSheetPage />} />
         <Route path="/batches/plan" element={<PlanBatchPage />} />
+        <Route path="/lots/:id/trace" element={<LotTracePage />} />
+        <Route path="/lots/:id/recall" element={<RecallReportPage />} />
         <Route path="/calculator" element={<CalculatorPage />} />
         <Route path="/imports" element={<ImportsPage />} />
         <Route path="/reading-log" element={<ReadingListPage />} />
