@@ -34,7 +34,7 @@ import { problemText, useApi } from '../planning/useApi';
 import { useHolds } from '../review/hooks';
 import { monoFont } from '../theme';
 import type { Lot, LotGenealogy } from '../views/sdk';
-import { DispositionChip, PartCounts, partName } from './labels';
+import { ConsoleLink, DispositionChip, PartCounts, partName } from './labels';
 
 export default function LotTraceRoute() {
   return (
@@ -69,7 +69,7 @@ function LotTrace() {
   const lot = g.lot;
 
   return (
-    <Box sx={{ maxWidth: 1200, display: 'grid', gap: 2 }}>
+    <Box sx={{ maxWidth: 1200, display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', gap: 2 }}>
       <Title title={`Lot ${lot.lotNumber}`} />
       <PageHeader
         title={`Lot ${lot.lotNumber}`}
@@ -136,7 +136,7 @@ function LotTrace() {
                   {g.workOrders.map((w) => (
                     <TableRow key={w.id}>
                       <TableCell sx={{ fontFamily: monoFont }}>
-                        <Link to={`/work-orders/${encodeURIComponent(w.id)}/show`}>{w.externalRef}</Link>
+                        <ConsoleLink mono to={`/work-orders/${encodeURIComponent(w.id)}/show`}>{w.externalRef}</ConsoleLink>
                       </TableCell>
                       <TableCell>{w.partNumber ?? '—'}</TableCell>
                       <TableCell>{w.state.replace('_', ' ')}</TableCell>
@@ -178,12 +178,12 @@ function LotTrace() {
                   {g.batches.map((b) => (
                     <TableRow key={b.batchId}>
                       <TableCell sx={{ whiteSpace: 'nowrap' }}>
-                        <Link to={`/batches/${encodeURIComponent(b.batchId)}/show`}>{b.moldName ?? 'Batch'}</Link>{' '}
+                        <ConsoleLink to={`/batches/${encodeURIComponent(b.batchId)}/show`}>{b.moldName ?? 'Batch'}</ConsoleLink>{' '}
                         <span style={{ fontFamily: monoFont, fontSize: '0.8rem', color: '#5c6466' }}>{shortRef(b.batchId)}</span>
                       </TableCell>
                       <TableCell sx={{ whiteSpace: 'nowrap' }}>{formatDate(`${b.plannedFor}T12:00:00`)}</TableCell>
                       <TableCell sx={{ fontFamily: monoFont }}>
-                        {b.workOrderId ? <Link to={`/work-orders/${encodeURIComponent(b.workOrderId)}/show`}>{b.workOrderExternalRef}</Link> : 'ad hoc'}
+                        {b.workOrderId ? <ConsoleLink mono to={`/work-orders/${encodeURIComponent(b.workOrderId)}/show`}>{b.workOrderExternalRef}</ConsoleLink> : 'ad hoc'}
                       </TableCell>
                       <TableCell sx={{ fontFamily: monoFont }}>{b.stationCode ?? '—'}</TableCell>
                       <TableCell>

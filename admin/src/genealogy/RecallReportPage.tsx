@@ -63,7 +63,7 @@ function RecallReportPage() {
   if (!r) return <Skeleton variant="rounded" height={300} sx={{ maxWidth: 980 }} />;
 
   return (
-    <>
+    <Box sx={{ display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)' }}>
       <Title title={`Recall report ${r.lotNumber}`} />
       {printStyles}
       <Box className="no-print" sx={{ display: 'flex', gap: 1, alignItems: 'center', mt: 0.5, mb: 1.5, maxWidth: 980, flexWrap: 'wrap' }}>
@@ -205,6 +205,6 @@ function RecallReportPage() {
           Every batch recorded with this lot, as Pourgate holds it at the time above; counts are Pourgate&apos;s. Printed {formatDateTime(Date.now())}.
         </Typography>
       </Box>
-    </>
+    </Box>
   );
 }

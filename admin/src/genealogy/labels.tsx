@@ -1,4 +1,7 @@
-import { Box, Typography } from '@mui/material';
+import { Box, Link as MuiLink, Typography } from '@mui/material';
+import type { ReactNode } from 'react';
+import { Link } from 'react-router-dom';
+import { monoFont } from '../theme';
 import { StatusChip, type Tone } from '../common/StatusChip';
 import { formatNumber } from '../format/quantities';
 import type { BatchDisposition } from '../views/sdk';
@@ -41,5 +44,14 @@ export function PartCounts({ parts }: { parts: Counts }) {
         </Box>
       ))}
     </Box>
+  );
+}
+
+/** A console link in the theme's link style (react-router's own is unstyled). */
+export function ConsoleLink({ to, children, mono = false }: { to: string; children: ReactNode; mono?: boolean }) {
+  return (
+    <MuiLink component={Link} to={to} sx={{ whiteSpace: 'nowrap', ...(mono ? { fontFamily: monoFont } : {}) }}>
+      {children}
+    </MuiLink>
   );
 }

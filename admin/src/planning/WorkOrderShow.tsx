@@ -14,6 +14,7 @@ import { formatNumber, formatPercent, formatSi } from '../format/quantities';
 import { useHolds, useUnitSystem } from '../review/hooks';
 import { monoFont } from '../theme';
 import type { Batch, Consumption, WorkOrder } from '../views/sdk';
+import { ConsoleLink } from '../genealogy/labels';
 import { planLinkForWorkOrder } from './planRequest';
 import { productionApi, saveBlob } from './productionApi';
 import { problemText, useApi } from './useApi';
@@ -66,7 +67,7 @@ function WorkOrderShow() {
   const p = plan.data;
 
   return (
-    <Box sx={{ maxWidth: 1100, display: 'grid', gap: 2 }}>
+    <Box sx={{ maxWidth: 1100, display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', gap: 2 }}>
       <Title title={`Work order ${order.externalRef}`} />
       <PageHeader
         title={`Work order ${order.externalRef}`}
@@ -147,7 +148,7 @@ function WorkOrderShow() {
                   {batches.map((b) => (
                     <TableRow key={b.id} hover>
                       <TableCell>
-                        <Link to={`/batches/${encodeURIComponent(b.id)}/show`}>{batchTitle(b)}</Link>{' '}
+                        <ConsoleLink to={`/batches/${encodeURIComponent(b.id)}/show`}>{batchTitle(b)}</ConsoleLink>{' '}
                         <span style={{ fontFamily: monoFont, fontSize: '0.8rem', color: '#5c6466' }}>{shortRef(b.id)}</span>
                       </TableCell>
                       <TableCell sx={{ whiteSpace: 'nowrap' }}>{formatDate(`${b.plannedFor}T12:00:00`)}</TableCell>
@@ -230,7 +231,7 @@ function ConsumptionCard({ order, hasBatches }: { order: WorkOrder; hasBatches: 
                   {c.materials.map((m) => (
                     <TableRow key={`${m.part}-${m.lotId ?? 'none'}`}>
                       <TableCell>{PART_NAME[m.part] ?? m.part}</TableCell>
-                      <TableCell sx={{ fontFamily: monoFont }}>{m.lotId ? <Link to={`/lots/${encodeURIComponent(m.lotId)}/trace`}>{m.lotNumber}</Link> : 'not recorded'}</TableCell>
+                      <TableCell sx={{ fontFamily: monoFont }}>{m.lotId ? <ConsoleLink mono to={`/lots/${encodeURIComponent(m.lotId)}/trace`}>{m.lotNumber}</ConsoleLink> : 'not recorded'}</TableCell>
                       <TableCell align="right">{m.batches}</TableCell>
                       <TableCell align="right" sx={{ whiteSpace: 'nowrap' }}>
                         {formatSi(m.plannedKg, 'kg', units)}
