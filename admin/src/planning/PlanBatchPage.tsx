@@ -90,9 +90,11 @@ function UnitSelect({ value, onChange, units, label }: { value: string; onChange
 }
 
 export default function PlanBatchRoute() {
+  // a new link (another work order, the calculator's figures) starts a new form
+  const { search } = useLocation();
   return (
     <CanAccessPage action="shop:write">
-      <PlanBatch />
+      <PlanBatch key={search} />
     </CanAccessPage>
   );
 }

@@ -231,7 +231,15 @@ function ConsumptionCard({ order, hasBatches }: { order: WorkOrder; hasBatches: 
                   {c.materials.map((m) => (
                     <TableRow key={`${m.part}-${m.lotId ?? 'none'}`}>
                       <TableCell>{PART_NAME[m.part] ?? m.part}</TableCell>
-                      <TableCell sx={{ fontFamily: monoFont }}>{m.lotId ? <ConsoleLink mono to={`/lots/${encodeURIComponent(m.lotId)}/trace`}>{m.lotNumber}</ConsoleLink> : 'not recorded'}</TableCell>
+                      <TableCell sx={{ fontFamily: monoFont }}>
+                        {m.lotId ? (
+                          <ConsoleLink mono to={`/lots/${encodeURIComponent(m.lotId)}/trace`}>
+                            {m.lotNumber}
+                          </ConsoleLink>
+                        ) : (
+                          'not recorded'
+                        )}
+                      </TableCell>
                       <TableCell align="right">{m.batches}</TableCell>
                       <TableCell align="right" sx={{ whiteSpace: 'nowrap' }}>
                         {formatSi(m.plannedKg, 'kg', units)}
