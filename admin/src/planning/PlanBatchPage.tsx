@@ -114,6 +114,7 @@ function PlanBatch() {
   const [previewBusy, setPreviewBusy] = useState(false);
   const [progress, setProgress] = useState<{ done: number; of: number } | null>(null);
   const [planned, setPlanned] = useState<Batch[]>([]);
+  const [plannedWith, setPlannedWith] = useState<string | null>(null);
   const sequence = useRef(0);
 
   const { data: order } = useGetOne<WorkOrder>('work-orders', { id: form.workOrderId }, { enabled: !!form.workOrderId });
@@ -229,7 +230,10 @@ function PlanBatch() {
       }
       notify(request.count === 1 ? 'Batch planned.' : `${request.count} batches planned.`, { type: 'success' });
       if (request.count === 1) navigate(`/batches/${encodeURIComponent(done[0]!.id)}/show`);
-      else setPlanned(done);
+      else {
+        setPlanned(done);
+        setPlannedWith(attempt);
+      }
     } catch (error) {
       setPlanned(done);
       showProblem(error);
@@ -312,7 +316,9 @@ function PlanBatch() {
 
   const busy = progress !== null;
   const overridden = refusedLots && canOverride && form.lotOverrideReason.trim().length >= 3;
-  const canPlan = !!request.body && !busy && (!refusedLots || overridden);
+  // the same plan again would only replay the answers (same keys): it waits for a change
+  const alreadyPlanned = plannedWith === attempt;
+  const canPlan = !!request.body && !busy && !alreadyPlanned && (!refusedLots || overridden);
 
   return (
     <Box sx={{ maxWidth: 1280 }}>
@@ -617,7 +623,7 @@ function PlannedList({ batches }: { batches: Batch[] }) {
         {batches.length === 1 ? 'One batch planned' : `${batches.length} batches planned`}
         {batches[0]?.workOrderExternalRef ? ` for ${batches[0].workOrderExternalRef}` : ''}
       </Typography>
-      <Box component="ul" sx={{ m: 0, pl: 2.5, columns: { xs: 1, sm: 2 } }}>
+      <Box component="ul" sx={{ m: 0, pl: 2.5 }}>
         {batches.map((b) => (
           <li key={b.id}>
             <MuiLink component={Link} to={`/batches/${encodeURIComponent(b.id)}/show`}>

@@ -34,10 +34,8 @@ export const productionApi = {
   consumptionCsv: (workOrderId: string) => csv(`/work-orders/${id(workOrderId)}/consumption.csv`),
   complete: (workOrderId: string, note: string | null) => postJson<Consumption>(`/work-orders/${id(workOrderId)}/complete`, note ? { note } : {}),
 
-  parts: async (batchId: string) => getJson<Part[]>(`/parts?range=${q([0, 199])}&sort=${q(['cavity', 'ASC'])}&filter=${q({ batchId })}`),
   recordPart: (batchId: string, body: PartRecord, key?: string) => postJson<Part>(`/batches/${id(batchId)}/parts`, body, key),
   recordSpecimen: (partId: string, body: SpecimenRecord, key?: string) => postJson<Specimen>(`/parts/${id(partId)}/specimens`, body, key),
-  disposition: (batchId: string) => getJson<BatchDisposition>(`/batches/${id(batchId)}/disposition`),
   dispose: (batchId: string, body: BatchDispositionRecord, key?: string) => postJson<BatchDisposition>(`/batches/${id(batchId)}/disposition`, body, key),
   batchGenealogy: (batchId: string) => getJson<BatchGenealogy>(`/batches/${id(batchId)}/genealogy`),
   defectCauses: () => getJson<DefectCause[]>(`/defect-causes?range=${q([0, 199])}`),
