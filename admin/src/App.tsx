@@ -13,6 +13,7 @@ import { CalculatorPage } from './calculator';
 import { ControlPage } from './control';
 import { PlanBatchPage } from './planning';
 import { LotTracePage, RecallReportPage } from './genealogy';
+import { DefectsPage } from './parts';
 import { SignInPage } from './auth/SignInPage';
 import { Dashboard } from './dashboard';
 import { AcceptInvitationPage } from './invitations/AcceptInvitationPage';
@@ -53,6 +54,7 @@ export function App() {
         <Route path="/batches/plan" element={<PlanBatchPage />} />
         <Route path="/lots/:id/trace" element={<LotTracePage />} />
         <Route path="/lots/:id/recall" element={<RecallReportPage />} />
+        <Route path="/defects" element={<DefectsPage />} />
         <Route path="/calculator" element={<CalculatorPage />} />
         <Route path="/imports" element={<ImportsPage />} />
         <Route path="/reading-log" element={<ReadingListPage />} />
