@@ -80,7 +80,7 @@ function ParetoGroups({ pareto }: { pareto: Pareto }) {
             {g.name ?? (pareto.groupBy === 'none' ? 'All batches' : 'Not recorded')} · {formatNumber(g.defects, { decimals: 0 })} defects
           </Typography>
           {g.bars.map((b) => (
-            <Box key={b.code} sx={{ display: 'grid', gridTemplateColumns: { xs: '110px 1fr 90px', sm: '200px 1fr 140px' }, gap: 1, alignItems: 'center' }}>
+            <Box key={b.code} sx={{ display: 'grid', gridTemplateColumns: { xs: '76px minmax(40px, 1fr) auto', sm: '200px 1fr 140px' }, gap: 1, alignItems: 'center' }}>
               <Typography variant="body2" noWrap title={b.name}>
                 {b.name}
               </Typography>
@@ -141,7 +141,7 @@ function DefectCauseList() {
               <TableRow>
                 <TableCell>Cause</TableCell>
                 <TableCell>Code</TableCell>
-                <TableCell>Description</TableCell>
+                <TableCell sx={{ display: { xs: 'none', sm: 'table-cell' } }}>Description</TableCell>
                 <TableCell>Offered</TableCell>
               </TableRow>
             </TableHead>
@@ -150,7 +150,7 @@ function DefectCauseList() {
                 <TableRow key={c.id}>
                   <TableCell>{c.name}</TableCell>
                   <TableCell sx={{ fontFamily: 'monospace' }}>{c.code}</TableCell>
-                  <TableCell>{c.description ?? '—'}</TableCell>
+                  <TableCell sx={{ display: { xs: 'none', sm: 'table-cell' } }}>{c.description ?? '—'}</TableCell>
                   <TableCell>
                     {canManage ? <Switch size="small" checked={c.active} onChange={() => void toggle(c)} slotProps={{ input: { 'aria-label': `Offer ${c.name}` } }} /> : c.active ? 'yes' : 'no'}
                   </TableCell>
