@@ -11,6 +11,9 @@ import workOrders from './work-orders';
 import batches, { PourSheetPage } from './batches';
 import { CalculatorPage } from './calculator';
 import { ControlPage } from './control';
+import { PlanBatchPage } from './planning';
+import { LotTracePage, RecallReportPage } from './genealogy';
+import { DefectsPage } from './parts';
 import { SignInPage } from './auth/SignInPage';
 import { Dashboard } from './dashboard';
 import { AcceptInvitationPage } from './invitations/AcceptInvitationPage';
@@ -48,6 +51,10 @@ export function App() {
       <Resource name="batches" {...batches} />
       <CustomRoutes>
         <Route path="/batches/:id/pour-sheet" element={<PourSheetPage />} />
+        <Route path="/batches/plan" element={<PlanBatchPage />} />
+        <Route path="/lots/:id/trace" element={<LotTracePage />} />
+        <Route path="/lots/:id/recall" element={<RecallReportPage />} />
+        <Route path="/defects" element={<DefectsPage />} />
         <Route path="/calculator" element={<CalculatorPage />} />
         <Route path="/imports" element={<ImportsPage />} />
         <Route path="/reading-log" element={<ReadingListPage />} />

@@ -21,10 +21,10 @@ export const PASSWORD = 'pourgate-demo';
 const SHOP_DATA = ['material-systems', 'lots', 'molds', 'work-orders', 'qc-cup-tests'];
 export type Role = 'admin' | 'engineer' | 'integrator' | 'viewer';
 export const PEOPLE: Record<Role, { email: string; menu: string[] }> = {
-  admin: { email: 'admin@demo.test', menu: ['overview', 'profile', 'reading-log', 'live', 'control', 'batches', 'calculator', ...SHOP_DATA, 'users', 'invitations', 'audit-events', 'queues', 'api-keys', 'devices', 'webhook-endpoints', 'webhook-deliveries', 'docs'] },
-  engineer: { email: 'engineer@demo.test', menu: ['overview', 'profile', 'readings', 'reading-log', 'live', 'control', 'batches', 'calculator', 'imports', ...SHOP_DATA, 'devices'] },
-  integrator: { email: 'integrator@demo.test', menu: ['overview', 'profile', 'reading-log', 'live', 'control', 'batches', 'calculator', 'imports', ...SHOP_DATA, 'api-keys', 'devices', 'webhook-endpoints', 'webhook-deliveries', 'docs'] },
-  viewer: { email: 'viewer@demo.test', menu: ['overview', 'profile', 'reading-log', 'live', 'control', 'batches', 'calculator', ...SHOP_DATA, 'devices'] },
+  admin: { email: 'admin@demo.test', menu: ['overview', 'profile', 'reading-log', 'live', 'control', 'batches', 'calculator', 'defects', ...SHOP_DATA, 'users', 'invitations', 'audit-events', 'queues', 'api-keys', 'devices', 'webhook-endpoints', 'webhook-deliveries', 'docs'] },
+  engineer: { email: 'engineer@demo.test', menu: ['overview', 'profile', 'readings', 'reading-log', 'live', 'control', 'batches', 'calculator', 'defects', 'imports', ...SHOP_DATA, 'devices'] },
+  integrator: { email: 'integrator@demo.test', menu: ['overview', 'profile', 'reading-log', 'live', 'control', 'batches', 'calculator', 'defects', 'imports', ...SHOP_DATA, 'api-keys', 'devices', 'webhook-endpoints', 'webhook-deliveries', 'docs'] },
+  viewer: { email: 'viewer@demo.test', menu: ['overview', 'profile', 'reading-log', 'live', 'control', 'batches', 'calculator', 'defects', ...SHOP_DATA, 'devices'] },
 };
 export const ROLES = Object.keys(PEOPLE) as Role[];
 

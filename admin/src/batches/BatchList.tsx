@@ -2,7 +2,8 @@ import Inventory2Outlined from '@mui/icons-material/Inventory2Outlined';
 import WarningAmberRounded from '@mui/icons-material/WarningAmberRounded';
 import { Box, Tooltip, Typography } from '@mui/material';
 import { useMemo } from 'react';
-import { DataTable, DateInput, List, SelectInput, useGetList } from 'react-admin';
+import { DataTable, DateInput, List, SelectInput, TopToolbar, useGetList } from 'react-admin';
+import { PlanBatchButton } from '../planning/PlanButtons';
 import { EmptyState } from '../common/EmptyState';
 import { Guarded } from '../common/Guarded';
 import { PageHeader } from '../common/PageHeader';
@@ -67,7 +68,7 @@ function BatchList() {
   return (
     <>
       <PageHeader title="Batches" lead="Every mix: its targets, what the scales weighed, and where it stands. Open one for its timeline, its reviews and the pour sheet." />
-      <List resource="batches" title="Batches" filters={filters} actions={false} empty={<NoBatches />} sort={{ field: 'createdAt', order: 'DESC' }} perPage={25} storeKey="batches.list">
+      <List resource="batches" title="Batches" filters={filters} actions={<TopToolbar><PlanBatchButton /></TopToolbar>} empty={<NoBatches />} sort={{ field: 'createdAt', order: 'DESC' }} perPage={25} storeKey="batches.list">
         <DataTable bulkActionButtons={false} rowClick="show">
           <DataTable.Col
             source="createdAt"

@@ -20,6 +20,7 @@ import { ToleranceBars, type BarRow } from './ToleranceBars';
 import type { BatchTransition as Transition, ReleaseCheck, TargetsView } from '../views/sdk';
 import { BATCH_STATE, batchTitle, shortRef, type Batch, } from './labels';
 import { readableReason } from './timeline';
+import { PartAcceptance } from '../parts/PartAcceptance';
 
 export function useBatchTargets(id: string | undefined) {
   // GET /v1/batches/{id}/targets, through the data provider (its getOne appends the last segment)
@@ -307,6 +308,7 @@ function BatchShow() {
               <Skeleton variant="rounded" height={120} />
             )}
           </Section>
+          <PartAcceptance batch={batch} />
           <Section title="Targets">
             {targets ? (
               <Box sx={{ display: 'grid', gap: 2 }}>

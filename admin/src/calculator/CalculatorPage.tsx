@@ -29,6 +29,7 @@ import type { Device, TargetsView } from '../views/sdk';
 import { postCommand } from '../review/commands';
 import { useUnitSystem } from '../review/hooks';
 import { formatNumber } from '../format/quantities';
+import { PlanFromCalculatorButton } from '../planning/PlanButtons';
 import { buildPreview, fieldOfPointer, initialForm, type CalculatorForm } from './previewRequest';
 
 interface SystemRow {
@@ -354,6 +355,7 @@ function Calculator() {
                     {result.sources?.cupTests ? ` · free-rise density fitted to ${result.sources.cupTests} cup tests` : ''} · computation {result.computationVersion} ·{' '}
                     {result.unitSystem === 'imperial' ? 'imperial' : 'metric'} units
                   </Typography>
+                  <PlanFromCalculatorButton form={form} />
                 </Box>
               ) : !otherErrors.length && request.body ? null : !request.body ? null : (
                 <EmptyState icon={CalculateOutlined} title="Nothing computed yet" />

@@ -111,6 +111,15 @@ describe('writeBody', () => {
     expect(body).toEqual({ part: 'pigment', materialSystemId: null, lotNumber: 'PIG-07', receivedOn: '2026-11-01', expiresOn: '2027-11-01', openedOn: null, notes: null });
   });
 
+  it('sends a lot its shelf life after opening as a number of days, an emptied one as null, and never its computed usable-until day', () => {
+    const base = { part: 'A', materialSystemId: 'ms1', lotNumber: 'A-1', receivedOn: '2026-11-01', expiresOn: '2027-11-01', openedOn: '2026-12-01', usableUntil: '2027-01-30', recall: null };
+    const typed = writeBody('lots', 'update', { ...base, shelfLifeDaysAfterOpening: '60' }) as Record<string, unknown>;
+    expect(typed.shelfLifeDaysAfterOpening).toBe(60);
+    expect(typed).not.toHaveProperty('usableUntil');
+    expect(typed).not.toHaveProperty('recall');
+    expect((writeBody('lots', 'update', { ...base, shelfLifeDaysAfterOpening: '' }) as Record<string, unknown>).shelfLifeDaysAfterOpening).toBeNull();
+  });
+
   it('keeps only the measurements a cavity kind takes, and drops the computed volumes of a mold', () => {
     expect(
       measurementBody({ kind: 'cylinder', diameter: { value: '95', unit: 'mm' }, height: { value: 115, unit: 'mm' }, length: { value: 3, unit: 'mm' }, waterMass: { value: '', unit: 'kg' } }),

@@ -152,6 +152,7 @@ function lotBody(d: Data): Data {
     receivedOn: d.receivedOn ?? undefined,
     expiresOn: d.expiresOn ?? undefined,
     openedOn: isBlank(d.openedOn) ? null : d.openedOn,
+    shelfLifeDaysAfterOpening: d.shelfLifeDaysAfterOpening === undefined ? undefined : num(d.shelfLifeDaysAfterOpening),
     notes: text(d.notes),
   };
 }

@@ -20,6 +20,7 @@ import ImportsOutlined from '@mui/icons-material/UploadFileOutlined';
 import ReadingLogOutlined from '@mui/icons-material/ListAltOutlined';
 import LiveOutlined from '@mui/icons-material/SensorsOutlined';
 import ControlOutlined from '@mui/icons-material/TimelineOutlined';
+import DefectsOutlined from '@mui/icons-material/BarChartOutlined';
 import type { ComponentType } from 'react';
 
 /** One icon per menu entry id, shared by the menu and the resource registrations. */
@@ -42,6 +43,7 @@ export const menuIcons: Record<string, ComponentType> = {
   readings: ReviewOutlined,
   batches: BatchesOutlined,
   calculator: CalculatorOutlined,
+  defects: DefectsOutlined,
   imports: ImportsOutlined,
   'reading-log': ReadingLogOutlined,
   live: LiveOutlined,

@@ -53,14 +53,14 @@ describe('menuFor', () => {
 describe('the shop floor section', () => {
   const floor = (role: (typeof ROLES)[number]) => menuFor(actionsOf(role)).find((s) => s.id === 'floor')?.links.map((l) => l.id) ?? [];
 
-  it('gives the engineer the review queue, the readings, batches, the calculator and logger imports', () => {
-    expect(floor('engineer')).toEqual(['readings', 'reading-log', 'live', 'control', 'batches', 'calculator', 'imports']);
+  it('gives the engineer the review queue, the readings, batches, the calculator, scrap and defects and logger imports', () => {
+    expect(floor('engineer')).toEqual(['readings', 'reading-log', 'live', 'control', 'batches', 'calculator', 'defects', 'imports']);
   });
 
   it('keeps the review queue to those who may waive or uphold', () => {
-    expect(floor('viewer')).toEqual(['reading-log', 'live', 'control', 'batches', 'calculator']);
-    expect(floor('admin')).toEqual(['reading-log', 'live', 'control', 'batches', 'calculator']);
+    expect(floor('viewer')).toEqual(['reading-log', 'live', 'control', 'batches', 'calculator', 'defects']);
+    expect(floor('admin')).toEqual(['reading-log', 'live', 'control', 'batches', 'calculator', 'defects']);
     // the integrator checks a new scale or logger connection in the readings list
-    expect(floor('integrator')).toEqual(['reading-log', 'live', 'control', 'batches', 'calculator', 'imports']);
+    expect(floor('integrator')).toEqual(['reading-log', 'live', 'control', 'batches', 'calculator', 'defects', 'imports']);
   });
 });

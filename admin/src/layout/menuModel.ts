@@ -41,6 +41,7 @@ export const MENU: readonly MenuSection[] = [
       { id: 'control', label: 'Control charts', to: '/control', requires: 'control:read' },
       { id: 'batches', label: 'Batches', to: '/batches', requires: 'shop:read' },
       { id: 'calculator', label: 'Targets calculator', to: '/calculator', requires: 'targets:read' },
+      { id: 'defects', label: 'Scrap and defects', to: '/defects', requires: 'shop:read' },
       { id: 'imports', label: 'Logger imports', to: '/imports', requires: 'imports:write' },
     ],
   },

@@ -1,5 +1,5 @@
 import { Box } from '@mui/material';
-import { AutocompleteInput, Create, DateInput, Edit, ReferenceInput, required, SaveButton, SelectInput, SimpleForm, TextInput, Toolbar } from 'react-admin';
+import { AutocompleteInput, Create, DateInput, Edit, NumberInput, ReferenceInput, required, SaveButton, SelectInput, SimpleForm, TextInput, Toolbar } from 'react-admin';
 import { useWatch } from 'react-hook-form';
 import { Guarded } from '../common/Guarded';
 import { PageHeader } from '../common/PageHeader';
@@ -36,7 +36,14 @@ function Fields() {
       <DateInput source="receivedOn" label="Received" validate={required()} />
       <DateInput source="expiresOn" label="Use by" validate={[required(), notBefore('receivedOn', 'received date')]} helperText="The last day the lot may be used" />
       <DateInput source="openedOn" label="Opened" validate={notBefore('receivedOn', 'received date')} helperText="Empty while sealed" />
-      <span />
+      <NumberInput
+        source="shelfLifeDaysAfterOpening"
+        label="Shelf life after opening (days)"
+        min={1}
+        max={3650}
+        step={1}
+        helperText="From the supplier’s data sheet; empty: usable until the use-by day"
+      />
       <TextInput source="notes" label="Notes" multiline minRows={2} sx={{ gridColumn: '1 / -1' }} />
     </Box>
   );
@@ -49,7 +56,15 @@ export function LotCreate() {
       <PageHeader title="Record a lot" lead="One lot per drum or pail number of part A, part B or pigment." />
       <SdsCaution />
       <Create resource="lots" mutationOptions={saved} title="Record a lot">
-        <SimpleForm defaultValues={{ part: 'A', receivedOn: localToday(), materialSystemId: null }} toolbar={<Toolbar><SaveButton label="Save lot" /></Toolbar>} sx={{ maxWidth: 820 }}>
+        <SimpleForm
+          defaultValues={{ part: 'A', receivedOn: localToday(), materialSystemId: null }}
+          toolbar={
+            <Toolbar>
+              <SaveButton label="Save lot" />
+            </Toolbar>
+          }
+          sx={{ maxWidth: 820 }}
+        >
           <Fields />
         </SimpleForm>
       </Create>
@@ -63,7 +78,14 @@ export function LotEdit() {
     <Guarded resource="lots" action="edit">
       <PageHeader title="Change a lot" lead="For example the day it was opened. Part and system stay fixed once batches or cup tests use the lot." />
       <Edit resource="lots" mutationMode="pessimistic" mutationOptions={saved} title="Lot" actions={false}>
-        <SimpleForm toolbar={<Toolbar><SaveButton label="Save lot" /></Toolbar>} sx={{ maxWidth: 820 }}>
+        <SimpleForm
+          toolbar={
+            <Toolbar>
+              <SaveButton label="Save lot" />
+            </Toolbar>
+          }
+          sx={{ maxWidth: 820 }}
+        >
           <Fields />
         </SimpleForm>
       </Edit>

@@ -72,7 +72,6 @@ function NoLots() {
 }
 
 export default function LotListPage() {
-  const { canAccess: canEdit } = useCanAccess({ resource: 'lots', action: 'edit' });
   const filters = useMemo(
     () => [
       <SearchInput key="q" source="q" alwaysOn placeholder="Lot number" />,
@@ -106,7 +105,7 @@ export default function LotListPage() {
       >
         <DataTable
           bulkActionButtons={false}
-          rowClick={canEdit ? 'edit' : false}
+          rowClick={(id) => `/lots/${encodeURIComponent(String(id))}/trace`}
           rowSx={(l: Lot) => {
             const s = expiryView(l, today).state;
             return s === 'expired' ? { bgcolor: '#fdf2f1' } : s === 'soon' ? { bgcolor: '#fdf8ec' } : {};

@@ -70,3 +70,23 @@ export type Profile = Schemas['me'];
 export type ProfileUpdate = Schemas['me.update'];
 export type NotifyRejections = NonNullable<ProfileUpdate['notifyRejections']>;
 export type NotifyDrift = NonNullable<ProfileUpdate['notifyDrift']>;
+
+// planning (issue #18): the request body the console sends to plan a batch, and the preview it shows first
+export type BatchPlanBody = Schemas['batch.create'];
+export type BatchOptions = Schemas['batch-options'];
+export type TargetsPreviewBody = Schemas['targets.preview'];
+export type BatchPlanProposal = Schemas['batch-plan.view'];
+export type Consumption = Schemas['consumption.view'];
+export type ConsumptionMaterial = Schemas['consumption-material'];
+export type LotGenealogy = Schemas['lot-genealogy.view'];
+export type RecallReport = Schemas['recall.view'];
+export type BatchGenealogy = Schemas['batch-genealogy.view'];
+export type Part = Schemas['part.view'];
+export type PartRecord = Schemas['part.create'];
+export type Specimen = Schemas['specimen.view'];
+export type SpecimenRecord = Schemas['specimen.create'];
+export type BatchDisposition = Schemas['batch-disposition.view'];
+export type BatchDispositionRecord = Schemas['batch-disposition.create'];
+export type DefectCause = Schemas['defect-cause.view'];
+export type Pareto = Schemas['pareto.view'];
+export type ParetoQuery = Schemas['pareto.query'];

@@ -91,7 +91,6 @@ const filters = [
 ];
 
 export function WorkOrderList() {
-  const { canAccess: canEdit } = useCanAccess({ resource: 'work-orders', action: 'edit' });
   return (
     <Guarded resource="work-orders">
       <PageHeader
@@ -113,7 +112,7 @@ export function WorkOrderList() {
         perPage={25}
         storeKey="work-orders.list"
       >
-        <DataTable bulkActionButtons={false} rowClick={canEdit ? 'edit' : false} rowSx={(w: WorkOrder) => (w.state === 'cancelled' || w.state === 'done' ? { opacity: 0.7 } : {})}>
+        <DataTable bulkActionButtons={false} rowClick="show" rowSx={(w: WorkOrder) => (w.state === 'cancelled' || w.state === 'done' ? { opacity: 0.7 } : {})}>
           <DataTable.Col source="externalRef" label="Order" field={OrderCell} />
           <DataTable.Col label="Mold" disableSort render={(w: WorkOrder) => w.moldName ?? '—'} />
           <DataTable.Col label="Material system" disableSort render={(w: WorkOrder) => w.materialSystemName ?? '—'} />
