@@ -236,7 +236,7 @@ try {
     );
     await db.raw(
       `INSERT INTO control_points (organization_id, material_system_id, metric, device_id, batch_id, value, at, source_key)
-       SELECT ?, ?, 'ratio_error_percent', ?, (?::uuid[])[1 + g % 4], ((g * 7919) % 1000) / 100.0 - 5, now() - (g || ' seconds')::interval * 7.776, 'gen-' || g
+       SELECT ?, ?, 'ratio_error_percent', ?, (?::uuid[])[1 + g % 4], ((g::bigint * 7919) % 1000) / 100.0 - 5, now() - (g || ' seconds')::interval * 7.776, 'gen-' || g
        FROM generate_series(?::int, ?::int) AS g`,
       [review.orgId, review.systemId, review.scaleId, `{${batches.join(',')}}`, from, to],
     );

@@ -99,7 +99,9 @@ export class ApiKeysService {
     // a device key issued before scopes were checked at creation still holds the device scopes only
     const scopes = r.kind === 'device' ? r.scopes.filter((s) => (DEVICE_KEY_SCOPES as readonly string[]).includes(s)) : r.scopes;
     const p = { kind: 'api_key' as const, id: r.id, organizationId: r.organization_id, scopes, deviceId: r.device_id, name: r.name, keyKind: r.kind, prefix: r.prefix };
-    this.cache.set(hash, p, gen, [r.expires_at, r.grace_until]);
+    // a key in its rotation grace period is about to end: read each time, so its end (or an early
+    // one set by hand) holds at once; the hot path is active keys
+    if (!r.grace_until) this.cache.set(hash, p, gen, [r.expires_at]);
     return p;
   }
 
