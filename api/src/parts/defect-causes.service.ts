@@ -16,13 +16,12 @@ export function causeView(r: Record<string, unknown>) {
   return { id: r.id as string, code: r.code as string, name: r.name as string, description: (r.description as string | null) ?? null, active: r.active as boolean, createdAt: r.created_at as Date, updatedAt: r.updated_at as Date };
 }
 
-/** The organization's list of defect causes: seeded with trade terms on first use, then its own to edit. */
+/** The organization's list of defect causes: the trade's terms from its creation (migration 0032), then its own to edit. */
 @Injectable()
 export class DefectCausesService {
   constructor(private readonly repo: PartsRepository, private readonly audit: AuditService) {}
 
   async list(c: RequestContext, q: ListQuery) {
-    await this.repo.seedCauses(c.principal.organizationId);
     const { rows, total } = await this.repo.listCauses(c.principal.organizationId, q);
     return { rows: rows.map(causeView), total };
   }
@@ -35,7 +34,6 @@ export class DefectCausesService {
 
   async create(c: RequestContext, body: DefectCauseInput) {
     const orgId = c.principal.organizationId;
-    await this.repo.seedCauses(orgId);
     const id = await this.repo
       .transaction(async (trx) => {
         const id = await this.repo.insertCause(trx, { organization_id: orgId, code: body.code, name: body.name!.trim(), description: body.description ?? null });

@@ -23,17 +23,6 @@ export const defectCausesListSpec: ListSpec = {
 };
 const causeColumns = { code: 'code', name: 'name', createdAt: 'created_at', q: 'name', active: 'active', id: 'id' };
 
-/** Trade terms every organization starts with; each may rename, retire or add its own. */
-export const SEEDED_DEFECT_CAUSES: [string, string, string][] = [
-  ['voids', 'Voids', 'Air pockets or holes under the skin or in the core'],
-  ['short_fill', 'Short fill', 'The foam did not fill the cavity'],
-  ['skin_defects', 'Skin defects', 'Blisters, pinholes or peeling of the skin'],
-  ['splits', 'Splits', 'Cracks or tears, often at demold'],
-  ['shrinkage', 'Shrinkage', 'The part shrank or puckered after demold'],
-  ['tack', 'Tack', 'Surface still sticky at demold'],
-  ['density_off', 'Density off target', 'Molded density outside the tolerance'],
-  ['flash', 'Flash', 'Excess foam at the parting line'],
-];
 
 export interface PartRow {
   id: string;
@@ -211,15 +200,6 @@ export class PartsRepository {
   }
 
   // defect causes
-
-  async seedCauses(orgId: string): Promise<void> {
-    const any = await this.db('defect_causes').where('organization_id', orgId).first('id');
-    if (any) return;
-    await this.db('defect_causes')
-      .insert(SEEDED_DEFECT_CAUSES.map(([code, name, description]) => ({ organization_id: orgId, code, name, description })))
-      .onConflict(['organization_id', 'code'])
-      .ignore();
-  }
 
   listCauses(orgId: string, q: ListQuery) {
     return listPage<Record<string, unknown>>(this.db('defect_causes').where('organization_id', orgId).select('*'), q, defectCausesListSpec, causeColumns);

@@ -235,7 +235,6 @@ export class PartsService {
   }
 
   private async checkCauses(orgId: string, codes: string[], pointer: (i: number) => string): Promise<FieldError[]> {
-    await this.repo.seedCauses(orgId);
     const found = new Map((await this.repo.causesByCode(orgId, codes)).map((x) => [x.code, x]));
     return codes.flatMap((code, i) => {
       const f = found.get(code);

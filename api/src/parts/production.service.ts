@@ -210,7 +210,6 @@ export class ProductionService {
     const groupBy = q.groupBy ?? 'none';
     const batches = await this.repo.disposedIn(orgId, from, to, q);
     const parts = await this.repo.partsOfBatches(orgId, batches.map((b) => b.id));
-    await this.repo.seedCauses(orgId);
     const names = new Map((await this.repo.allCauses(orgId)).map((x) => [x.code, x.name]));
     const groups = new Map<string, { key: string | null; name: string | null; counts: Map<string, number> }>();
     for (const b of batches) {
