@@ -26,7 +26,7 @@ test('a small first page, and progress at once after sign-in', async ({ newPage 
 
   // slow the signed-in frame's code and the overview's figures, as on a busy network
   await page.route(/\/assets\/(Layout|Dashboard|FloorPanel)-[^/]+\.js$/, async (route) => {
-    await new Promise((r) => setTimeout(r, 1500));
+    await new Promise((r) => setTimeout(r, 3000));
     await route.continue();
   });
   // timed in the page itself (a loaded machine delays the test's own polling, not the page's clock):
@@ -48,6 +48,8 @@ test('a small first page, and progress at once after sign-in', async ({ newPage 
   await page.getByTestId('floor-panel').waitFor({ timeout: 30_000 });
   const t = await page.evaluate(() => (globalThis as unknown as { __loading: { left?: number; progress?: number } }).__loading);
   check(t.left !== undefined && t.progress !== undefined, `no progress bar was drawn after sign-in (${JSON.stringify(t)})`);
-  // react-admin's own loader draws nothing for its first 1000 ms; ours at once
-  expect(t.progress - t.left, 'milliseconds of blank main area after sign-in').toBeLessThan(600);
+  // react-admin's own loader draws nothing for its first 1000 ms and the frame's code is held back
+  // 3 s, so a blank main area lasts at least 1000 ms without ours; ours is drawn at once (a few
+  // hundred ms on a busy 2-core machine)
+  expect(t.progress - t.left, 'milliseconds of blank main area after sign-in').toBeLessThan(1000);
 });
