@@ -77,6 +77,44 @@ export interface PreviewRequest {
   missing: string[];
 }
 
+/** The option fields the calculator and the plan form share. */
+export type OptionFields = Pick<CalculatorForm, 'densityMode' | 'packFactor' | 'targetDensity' | 'densityUnit' | 'pigmentPercent' | 'overfillPercent' | 'retentionPercent' | 'componentTemperature' | 'temperatureUnit' | 'scaleDeviceId'>;
+type OptionKey = Exclude<keyof OptionFields, 'densityMode'>;
+
+/**
+ * The shared options as the API takes them (`options` of a preview or a batch): a number field that
+ * does not parse is left to `invalid` by `num`; a chosen density basis without its figure is `missing`.
+ */
+export function readOptions(
+  f: OptionFields,
+  num: (key: OptionKey) => number | undefined,
+  invalid: readonly string[],
+  missing: string[],
+): { packFactor?: number; targetDensity?: { value: number; unit: string }; pigmentPercent?: number; overfillPercent?: number; retentionPercent?: number; componentTemperature?: { value: number; unit: string }; scaleDeviceId?: string } {
+  const quantity = (key: OptionKey, unit: string) => {
+    const v = num(key);
+    return v === undefined ? undefined : { value: v, unit };
+  };
+  const options: ReturnType<typeof readOptions> = {};
+  if (f.densityMode === 'pack') {
+    const p = num('packFactor');
+    if (p !== undefined) options.packFactor = p;
+    else if (!invalid.includes('packFactor')) missing.push('the pack factor');
+  } else if (f.densityMode === 'density') {
+    const d = quantity('targetDensity', f.densityUnit);
+    if (d) options.targetDensity = d;
+    else if (!invalid.includes('targetDensity')) missing.push('the target density');
+  }
+  for (const key of ['pigmentPercent', 'overfillPercent', 'retentionPercent'] as const) {
+    const v = num(key);
+    if (v !== undefined) options[key] = v;
+  }
+  const temp = quantity('componentTemperature', f.temperatureUnit);
+  if (temp) options.componentTemperature = temp;
+  if (f.scaleDeviceId) options.scaleDeviceId = f.scaleDeviceId;
+  return options;
+}
+
 export function buildPreview(f: CalculatorForm): PreviewRequest {
   const invalid: (keyof CalculatorForm)[] = [];
   const missing: string[] = [];
@@ -117,23 +155,7 @@ export function buildPreview(f: CalculatorForm): PreviewRequest {
     body.freeRiseCup = { volume: v ?? { value: 0, unit: f.cupVolumeUnit } };
   }
 
-  const options: Record<string, unknown> = {};
-  if (f.densityMode === 'pack') {
-    const p = num('packFactor');
-    if (p !== undefined) options.packFactor = p;
-    else if (!invalid.includes('packFactor')) missing.push('the pack factor');
-  } else if (f.densityMode === 'density') {
-    const d = quantity('targetDensity', f.densityUnit);
-    if (d) options.targetDensity = d;
-    else if (!invalid.includes('targetDensity')) missing.push('the target density');
-  }
-  for (const key of ['pigmentPercent', 'overfillPercent', 'retentionPercent'] as const) {
-    const v = num(key);
-    if (v !== undefined) options[key] = v;
-  }
-  const temp = quantity('componentTemperature', f.temperatureUnit);
-  if (temp) options.componentTemperature = temp;
-  if (f.scaleDeviceId) options.scaleDeviceId = f.scaleDeviceId;
+  const options = readOptions(f, num, invalid, missing);
   if (Object.keys(options).length) body.options = options;
 
   return { body: missing.length || invalid.length ? null : body, invalid, missing };

@@ -4,7 +4,7 @@
  * that carry a pour into the form: from the calculator (its inputs) and from a work order. Empty
  * fields are left out so the API's defaults apply; the API does every computation and every check.
  */
-import { parseNumber, type CalculatorForm } from '../calculator/previewRequest';
+import { parseNumber, readOptions, type CalculatorForm } from '../calculator/previewRequest';
 import type { BatchOptions, BatchPlanBody, Lot, TargetsPreviewBody } from '../views/sdk';
 
 export type PlanSubject = 'mold' | 'cup';
@@ -197,23 +197,7 @@ export function buildPlan(f: PlanForm): PlanRequest {
     else if (!invalid.includes('cupVolume')) missing.push('the cup volume');
   }
 
-  const options: BatchOptions = {};
-  if (f.densityMode === 'pack') {
-    const p = num('packFactor');
-    if (p !== undefined) options.packFactor = p;
-    else if (!invalid.includes('packFactor')) missing.push('the pack factor');
-  } else if (f.densityMode === 'density') {
-    const d = quantity('targetDensity', f.densityUnit);
-    if (d) options.targetDensity = d;
-    else if (!invalid.includes('targetDensity')) missing.push('the target density');
-  }
-  for (const key of ['pigmentPercent', 'overfillPercent', 'retentionPercent'] as const) {
-    const v = num(key);
-    if (v !== undefined) options[key] = v;
-  }
-  const temp = quantity('componentTemperature', f.temperatureUnit);
-  if (temp) options.componentTemperature = temp;
-  if (f.scaleDeviceId) options.scaleDeviceId = f.scaleDeviceId;
+  const options: BatchOptions = readOptions(f, num, invalid, missing);
   const lots: NonNullable<BatchOptions['lots']> = {};
   if (f.lotA) lots.A = f.lotA;
   if (f.lotB) lots.B = f.lotB;
