@@ -26,6 +26,11 @@ export class RouteTable {
 
   methodsFor(url: string): string[] {
     const path = url.split('?')[0];
-    return METHODS.filter((m) => m !== 'OPTIONS' && this.router.find(m, path) !== null);
+    // an empty segment fills no parameter (Fastify does not route `/readings//review` either): a 404
+    return METHODS.filter((m) => {
+      if (m === 'OPTIONS') return false;
+      const found = this.router.find(m, path);
+      return found !== null && Object.values(found.params).every((v) => v !== '' && v !== undefined);
+    });
   }
 }
