@@ -1,9 +1,9 @@
 import 'reflect-metadata';
-import helmet from '@fastify/helmet';
 import rateLimit from '@fastify/rate-limit';
 import { NestFactory } from '@nestjs/core';
 import { FastifyAdapter, NestFastifyApplication } from '@nestjs/platform-fastify';
 import { SwaggerModule } from '@nestjs/swagger';
+import helmet from 'helmet';
 import { Redis } from 'ioredis';
 import path from 'node:path';
 import { type FastifyReply, type FastifyRequest, LogController } from 'fastify';
@@ -54,7 +54,9 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
     reply.header('x-request-id', req.id);
     opts.onSend?.(req, reply, payload);
   });
-  await app.register(helmet as never, {
+  // Security headers on every answer, from one helmet middleware built here once (the Fastify
+  // plugin rebuilt every one of helmet's middlewares on each request)
+  const securityHeaders = helmet({
     contentSecurityPolicy: {
       directives: {
         defaultSrc: ["'self'"],
@@ -66,6 +68,7 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
       },
     },
   });
+  fastify.addHook('onRequest', (req, reply, done) => securityHeaders(req.raw, reply.raw, (err?: unknown) => done(err as Error | undefined)));
   // Per-address throttle for the routes that opt in (sign-in, refresh), shared by every API
   // process through Redis. Failed sign-ins are also counted per account (TokensService).
   const rateRedis = new Redis(env.REDIS_URL, { maxRetriesPerRequest: 1, enableOfflineQueue: false, connectTimeout: 2000 });
