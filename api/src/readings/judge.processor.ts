@@ -4,7 +4,7 @@ import type { Job } from 'bull';
 import { JUDGE_CONCURRENCY, JUDGE_QUEUE, type JudgeJob } from './readings.constants.js';
 import { JudgeService } from './judge.service.js';
 
-/** The Bull consumer: one job per posted reading (job id = reading id), one per chunk of a bulk post. */
+/** The Bull consumer: a job is one reading (job id = reading id, as the sweeper queues it) or a chunk of readings posted together. */
 @Processor(JUDGE_QUEUE)
 export class JudgeProcessor {
   private readonly log = new Logger('judging');

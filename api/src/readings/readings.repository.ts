@@ -1,5 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
+import { createHash } from 'node:crypto';
 import { listPage } from '../common/lists/knex-list.js';
 import type { ListQuery, ListSpec } from '../common/lists/list-query.js';
 import { KNEX } from '../database/database.module.js';
@@ -41,6 +42,9 @@ export interface ReadingRow {
   reviewed_at: Date | null;
 }
 
+/** What an insert returns of a new reading. */
+export type InsertedReading = Pick<ReadingRow, 'id' | 'status' | 'device_id' | 'client_reading_id'>;
+
 export type NewReading = Omit<ReadingRow, 'id' | 'received_at' | 'status' | 'reasons' | 'judged_at' | 'review_decision' | 'review_note' | 'reviewed_by' | 'reviewed_by_label' | 'reviewed_at'>;
 
 /** The column types of a new reading (insertIfOwned casts each value, as a SELECT list has no target types). */
@@ -48,6 +52,7 @@ const NEW_READING_TYPES: Record<keyof NewReading, string> = {
   organization_id: 'uuid', batch_id: 'uuid', device_id: 'uuid', client_reading_id: 'text', quantity: 'text', subject: 'text',
   value_si: 'float8', unit_given: 'text', value_given: 'float8', stable: 'boolean', device_time: 'timestamptz', skew_seconds: 'float8',
 };
+const NEW_READING_COLUMNS = Object.keys(NEW_READING_TYPES) as (keyof NewReading)[];
 
 /** Every Knex query of readings. */
 @Injectable()
@@ -56,51 +61,64 @@ export class ReadingsRepository {
 
   /**
    * Inserts the readings whose (device, client reading id) is new, in one statement (and one more for
-   * those that existed): a bulk post costs two round trips, not two per reading. Results follow the input order; a reading given twice
-   * in one post is stored once, the second answered as a replay of the first.
+   * the replays): a bulk post costs two round trips, not two per reading. Results follow the input
+   * order; a reading given twice in one post is stored once, the second answered as a replay of the
+   * first. A new reading comes back as its id and status only (all its answer needs: parsing 1 000
+   * whole rows cost more than the insert); a replay is read whole, as its answer shows it.
    */
-  async insertMany(trx: Knex | Knex.Transaction, rows: NewReading[]): Promise<{ row: ReadingRow; created: boolean }[]> {
+  async insertMany(trx: Knex | Knex.Transaction, rows: NewReading[]): Promise<({ row: InsertedReading; created: true } | { row: ReadingRow; created: false })[]> {
     const key = (r: { device_id: string; client_reading_id: string }) => `${r.device_id}\u0000${r.client_reading_id}`;
-    const fresh = new Map<string, ReadingRow>();
+    const fresh = new Map<string, InsertedReading>();
     for (let i = 0; i < rows.length; i += 1000) {
-      const inserted: ReadingRow[] = await trx('readings').insert(rows.slice(i, i + 1000)).onConflict(['device_id', 'client_reading_id']).ignore().returning('*');
+      const chunk = rows.slice(i, i + 1000);
+      // one array per column (twelve parameters, not twelve per reading), prepared once per connection
+      const { rows: inserted } = (await trx
+        .raw(
+          `INSERT INTO readings (${NEW_READING_COLUMNS.map(() => '??').join(', ')})
+           SELECT * FROM unnest(${NEW_READING_COLUMNS.map((c) => `?::${NEW_READING_TYPES[c]}[]`).join(', ')})
+           ON CONFLICT (device_id, client_reading_id) DO NOTHING RETURNING id, status, device_id, client_reading_id`,
+          [...NEW_READING_COLUMNS, ...NEW_READING_COLUMNS.map((c) => chunk.map((r) => r[c] ?? null) as Knex.Value)],
+        )
+        .options({ name: preparedName('insert-many') })) as { rows: InsertedReading[] };
       for (const r of inserted) fresh.set(key(r), r);
     }
-    const missing = rows.filter((r) => !fresh.has(key(r)));
+    const handedOut = new Set<string>();
+    const isFirst = rows.map((r) => {
+      const k = key(r);
+      if (!fresh.has(k) || handedOut.has(k)) return false;
+      handedOut.add(k);
+      return true;
+    });
+    const replays = rows.filter((_, i) => !isFirst[i]);
     const existing = new Map<string, ReadingRow>();
-    for (let i = 0; i < missing.length; i += 1000) {
-      const found: ReadingRow[] = await trx('readings').whereIn(['device_id', 'client_reading_id'], missing.slice(i, i + 1000).map((r) => [r.device_id, r.client_reading_id])).select('*');
+    for (let i = 0; i < replays.length; i += 1000) {
+      const found: ReadingRow[] = await trx('readings').whereIn(['device_id', 'client_reading_id'], replays.slice(i, i + 1000).map((r) => [r.device_id, r.client_reading_id])).select('*');
       for (const r of found) existing.set(key(r), r);
     }
-    const handedOut = new Set<string>();
-    return rows.map((r) => {
-      const k = key(r);
-      const created = fresh.get(k);
-      if (created && !handedOut.has(k)) {
-        handedOut.add(k);
-        return { row: created, created: true };
-      }
-      return { row: (created ?? existing.get(k))!, created: false };
-    });
+    return rows.map((r, i) => (isFirst[i] ? { row: fresh.get(key(r))!, created: true as const } : { row: existing.get(key(r))!, created: false as const }));
   }
 
   /**
    * Inserts one new reading only when every `guards` query finds its row (the device and the batch
    * in the caller's organization), in one statement; undefined when a guard found nothing or the
-   * (device, client reading id) exists already.
+   * (device, client reading id) exists already. `guardsShape` names what the guards are (the same
+   * name must always mean the same guard queries): the statement is then prepared once on each
+   * pooled connection, not parsed and planned again for every reading.
    */
-  async insertIfOwned(row: NewReading, guards: Knex.QueryBuilder[]): Promise<ReadingRow | undefined> {
+  async insertIfOwned(row: NewReading, guards: Knex.QueryBuilder[], guardsShape: string): Promise<Pick<ReadingRow, 'id' | 'status'> | undefined> {
     const cols = Object.keys(row) as (keyof NewReading)[];
     const values = cols.map((c) => {
       const type = NEW_READING_TYPES[c];
       if (!type) throw new Error(`insertIfOwned: no column type for ${String(c)}`);
       return `?::${type}`;
     });
-    const { rows } = (await this.db.raw(
-      `INSERT INTO readings (${cols.map(() => '??').join(', ')}) SELECT ${values.join(', ')} WHERE ${guards.map(() => 'EXISTS (?)').join(' AND ')}
-       ON CONFLICT (device_id, client_reading_id) DO NOTHING RETURNING *`,
-      [...cols, ...cols.map((c) => row[c] as Knex.Value), ...guards],
-    )) as { rows: ReadingRow[] };
+    const { rows } = (await this.db
+      .raw(
+        `INSERT INTO readings (${cols.map(() => '??').join(', ')}) SELECT ${values.join(', ')} WHERE ${guards.map(() => 'EXISTS (?)').join(' AND ')}
+       ON CONFLICT (device_id, client_reading_id) DO NOTHING RETURNING id, status`,
+        [...cols, ...cols.map((c) => row[c] as Knex.Value), ...guards],
+      )
+      .options({ name: preparedName(`insert-if-owned:${guardsShape}:${cols.join(',')}`) })) as { rows: Pick<ReadingRow, 'id' | 'status'>[] };
     return rows[0];
   }
 
@@ -217,4 +235,13 @@ export class ReadingsRepository {
   stalePending(olderThanMs: number, limit = 500): Promise<{ id: string }[]> {
     return this.db('readings').where('status', 'pending').where('received_at', '<', new Date(Date.now() - olderThanMs)).orderBy('received_at').limit(limit).select('id');
   }
+}
+
+const preparedNames = new Map<string, string>();
+
+/** A short, stable name for a prepared statement (pg checks that one name always carries the same text). */
+function preparedName(what: string): string {
+  let name = preparedNames.get(what);
+  if (!name) preparedNames.set(what, (name = `readings_${createHash('sha256').update(what).digest('hex').slice(0, 24)}`));
+  return name;
 }
