@@ -1,5 +1,5 @@
 // A CPU profile of the API under ingest, to see where a request's time goes:
-// `node --import tsx bench/profile-ingest.ts` runs 10 s of single POSTs (autocannon, 10 connections)
+// `node --import tsx bench/profile-ingest.ts` runs 10 s (PROFILE_SINGLE_S) of single POSTs (autocannon, 10 connections)
 // and three 1000-reading bulk posts against an API started with --cpu-prof, then prints the
 // summary of the last 15 s (bench/profile-summary.mjs). Own servers: PostgreSQL 55642, Redis 56642, API 3345
 // (BENCH_PGPORT, BENCH_REDIS_PORT, BENCH_API_PORT + 3 move them); the compiled API (api/dist), as the bench runs it.
@@ -26,7 +26,7 @@ const api = await startApi({ port: API_PORT, compiled: !process.env.BENCH_SOURCE
 try {
   const shop = await makeShop(api.base, 'profile');
   const r = (await autocannon({
-    url: `${api.base}/v1/readings`, method: 'POST', connections: 10, duration: 10,
+    url: `${api.base}/v1/readings`, method: 'POST', connections: 10, duration: Number(process.env.PROFILE_SINGLE_S ?? 10),
     headers: { 'content-type': 'application/json', 'x-api-key': shop.deviceKey },
     requests: [{ setupRequest: (req: Record<string, unknown>) => ({ ...req, body: JSON.stringify(readingBody(shop.batchId, randomUUID())) }) }],
   } as never)) as unknown as { requests: { average: number }; non2xx: number };

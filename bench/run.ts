@@ -281,6 +281,8 @@ try {
     page: `EXPLAIN (ANALYZE, BUFFERS, FORMAT TEXT) SELECT readings.* FROM readings WHERE organization_id = '${review.orgId}' AND status = 'rejected' ORDER BY received_at DESC, id DESC LIMIT 25`,
     count: `EXPLAIN (ANALYZE, BUFFERS, FORMAT TEXT) SELECT count(*) FROM readings WHERE organization_id = '${review.orgId}' AND status = 'rejected'`,
     reasonPage: `EXPLAIN (ANALYZE, BUFFERS, FORMAT TEXT) SELECT readings.* FROM readings WHERE organization_id = '${review.orgId}' AND status = 'rejected' AND reason_codes @> ARRAY['RATIO_POLYOL_HEAVY'] AND reason_codes <> '{}' ORDER BY received_at DESC, id DESC LIMIT 25`,
+    batchPage: `EXPLAIN (ANALYZE, BUFFERS, FORMAT TEXT) SELECT readings.* FROM readings WHERE organization_id = '${review.orgId}' AND status = 'rejected' AND batch_id = '${batches[0]}' AND received_at >= now() - interval '7 days' ORDER BY received_at DESC, id DESC LIMIT 25`,
+    batchCount: `EXPLAIN (ANALYZE, BUFFERS, FORMAT TEXT) SELECT count(*) FROM (SELECT 1 FROM readings WHERE organization_id = '${review.orgId}' AND status = 'rejected' AND batch_id = '${batches[0]}' AND received_at >= now() - interval '7 days' LIMIT 10001) c`,
     chart: `EXPLAIN (ANALYZE, BUFFERS, FORMAT TEXT) SELECT id, value, at FROM control_points p WHERE organization_id = '${review.orgId}' AND material_system_id = '${review.systemId}' AND metric = 'ratio_error_percent' ORDER BY at DESC, id DESC LIMIT 500`,
   })) plans[name] = ((await db.raw(sql)).rows as { 'QUERY PLAN': string }[]).map((r) => r['QUERY PLAN']).join('\n');
   const listKeys = Object.keys(queries).filter((k) => k !== CHART_CASE);
