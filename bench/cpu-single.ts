@@ -39,7 +39,7 @@ const run = async (url: string, headers: Record<string, string>, pid: number) =>
   return { rps: Math.round(r.requests.average), selfMs: (cpuMs(pid) - before.self) / n, pgMs: (sumCpu(pgPids()) - before.pg) / n, redisMs: (sumCpu(redisPids()) - before.redis) / n, machineMs: (machineMs() - before.machine) / n };
 };
 try {
-  for (let k = 0; k < 2; k++) {
+  for (let k = 0; k < Number(process.env.PROFILE_ROUNDS ?? 2); k++) {
     const a = await run(`${api.base}/v1/readings`, { 'x-api-key': shop.deviceKey }, api.pid()!);
     const b = await run(`http://127.0.0.1:${API_PORT + 1}/readings`, {}, bare.pid!);
     const f = (x: number) => x.toFixed(3);

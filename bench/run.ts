@@ -7,7 +7,7 @@
 //   5 memory                the API's peak RSS during 1 and 2 (the compiled build, as `npm start` runs it)
 //   6 control chart         a chart's data over 1 M points vs 10 k
 // Writes bench/results/<date>.json and bench/results/latest.json and prints the table for BENCHMARKS.md.
-// BENCH_ROUNDS (3), BENCH_SECONDS (5), BENCH_LARGE_ROWS (1000000), BENCH_PIPELINE_READINGS (150) scale it.
+// BENCH_ROUNDS (3), BENCH_SECONDS (5), BENCH_WARMUP_SECONDS (15), BENCH_LARGE_ROWS (1000000), BENCH_PIPELINE_READINGS (150) scale it.
 import autocannon from 'autocannon';
 import { type ChildProcess, spawn } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
@@ -22,11 +22,13 @@ import { type ApiProcess, json, makeShop, readingBody, resetDatabase, ROOT, type
 import { startPostgres, startRedis } from '../scripts/lib/services.mjs';
 
 if (process.argv.includes('--help')) {
-  console.log('usage: npm run bench   (BENCH_ROUNDS, BENCH_SECONDS, BENCH_LARGE_ROWS, BENCH_PIPELINE_READINGS; servers on BENCH_PGPORT 55642, BENCH_REDIS_PORT 56642, BENCH_API_PORT 3342 (+1, +2); BENCH_SOURCES=1 runs the TypeScript sources instead of api/dist)');
+  console.log('usage: npm run bench   (BENCH_ROUNDS, BENCH_SECONDS, BENCH_WARMUP_SECONDS, BENCH_LARGE_ROWS, BENCH_PIPELINE_READINGS; servers on BENCH_PGPORT 55642, BENCH_REDIS_PORT 56642, BENCH_API_PORT 3342 (+1, +2); BENCH_SOURCES=1 runs the TypeScript sources instead of api/dist)');
   process.exit(0);
 }
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 3);
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 5);
+// single posts before the rounds, each side: V8 needs 10-15 s of load to compile the API's request path (the bare route's is short)
+const WARMUP_SECONDS = Number(process.env.BENCH_WARMUP_SECONDS ?? 15);
 const LARGE = Number(process.env.BENCH_LARGE_ROWS ?? 1_000_000);
 const SMALL = 10_000;
 const PIPE_N = Number(process.env.BENCH_PIPELINE_READINGS ?? 150);
@@ -63,7 +65,7 @@ const results: Record<string, unknown> = {
   machine: { cpus: os.cpus().length, cpu: os.cpus()[0]?.model, memoryGiB: round(os.totalmem() / 2 ** 30, 1), node: process.version, os: `${os.type()} ${os.release()}`, loadavgAtStart: os.loadavg().map((x) => round(x)) },
   date: new Date().toISOString(),
   command: 'npm run bench',
-  settings: { rounds: ROUNDS, secondsPerRun: SECONDS, bulkPostsPerRound: BULK_POSTS, pipelineReadings: PIPE_N, pipelineRatePerSecond: PIPE_RATE, largeRows: LARGE, api: COMPILED ? 'node --enable-source-maps api/dist/main.js (compiled, as npm start runs it)' : 'node --import @swc-node/register/esm-register api/src/main.ts', postgres: 'Debian PostgreSQL 15, fsync=off (test cluster)' },
+  settings: { rounds: ROUNDS, secondsPerRun: SECONDS, singleWarmupSeconds: WARMUP_SECONDS, bulkPostsPerRound: BULK_POSTS, pipelineReadings: PIPE_N, pipelineRatePerSecond: PIPE_RATE, largeRows: LARGE, api: COMPILED ? 'node --enable-source-maps api/dist/main.js (compiled, as npm start runs it)' : 'node --import @swc-node/register/esm-register api/src/main.ts', postgres: 'Debian PostgreSQL 15, fsync=off (test cluster)' },
 };
 const children: (ApiProcess | ChildProcess)[] = [];
 
@@ -186,12 +188,12 @@ try {
   const rssAfterBulk = rssOf(pid, 'VmHWM');
   results.bulk = { runs: bulkRuns, medianApi: median(bulkRuns.map((r) => r.api)), medianRaw: median(bulkRuns.map((r) => r.raw)), ratioPercent: round(100 * median(bulkRuns.map((r) => r.api / r.raw)), 1), target: '>= 50 % of the raw rate' };
 
-  const cannon = (url: string, headers: Record<string, string>, tag: string) => autocannon({
-    url, method: 'POST', connections: 10, duration: SECONDS, headers: { 'content-type': 'application/json', ...headers },
+  const cannon = (url: string, headers: Record<string, string>, tag: string, duration = SECONDS) => autocannon({
+    url, method: 'POST', connections: 10, duration, headers: { 'content-type': 'application/json', ...headers },
     requests: [{ setupRequest: (req: Record<string, unknown>) => ({ ...req, body: JSON.stringify(readingBody(shop.batchId, `${tag}-${randomUUID()}`, 1.1)) }) }],
   }) as unknown as Promise<{ requests: { average: number }; latency: { p50: number; p99: number }; non2xx: number; errors: number; timeouts: number }>;
-  await cannon(`${api.base}/v1/readings`, { 'x-api-key': shop.deviceKey }, 'warm');
-  await cannon(`http://127.0.0.1:${API_PORT + 1}/readings`, {}, 'warm-bare');
+  await cannon(`${api.base}/v1/readings`, { 'x-api-key': shop.deviceKey }, 'warm', WARMUP_SECONDS);
+  await cannon(`http://127.0.0.1:${API_PORT + 1}/readings`, {}, 'warm-bare', WARMUP_SECONDS);
   const singleRuns: { api: number; bare: number; apiP99: number; bareP99: number; apiNon2xx: number; bareNon2xx: number }[] = [];
   for (let k = 0; k < ROUNDS; k++) {
     const a = await cannon(`${api.base}/v1/readings`, { 'x-api-key': shop.deviceKey }, `single-${k}`);

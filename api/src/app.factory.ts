@@ -16,7 +16,6 @@ import { PROJECT_ROOT } from './config/paths.js';
 import { createLogger, genReqId, PinoNestLogger } from './logging/logger.js';
 import { buildOpenApiDocument } from './openapi/openapi.js';
 import { serveConsole } from './static/console-assets.js';
-import { registerQueueDashboard } from './queues/queue-dashboard.js';
 
 export interface CreateAppOptions {
   /** Where log lines go (tests capture them); stdout by default. */
@@ -34,6 +33,8 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
     genReqId,
     bodyLimit: env.BODY_LIMIT_BYTES,
     trustProxy: false,
+    // no Nest middleware anywhere (hooks and guards instead): no middie hook on every request
+    skipMiddie: true,
     frameworkErrors: frameworkErrorProblem as never,
     // one line per request (below), not Fastify's two ("incoming request", "request completed")
     logController: new LogController({ disableRequestLogging: true }),
@@ -107,7 +108,8 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
     customSiteTitle: 'Pourgate API',
   });
 
-  if (env.QUEUE_DASHBOARD === 'on') await registerQueueDashboard(app);
+  // loaded only when switched on: the dashboard's packages cost a process ~25 MiB it would never use
+  if (env.QUEUE_DASHBOARD === 'on') await (await import('./queues/queue-dashboard.js')).registerQueueDashboard(app);
   await serveConsole(app, env.ADMIN_DIST || path.join(PROJECT_ROOT, 'admin', 'dist'), path.join(PROJECT_ROOT, 'api', 'placeholder'), logger);
 
   await app.init();

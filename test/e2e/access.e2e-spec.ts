@@ -261,11 +261,11 @@ describe('10. object storage credentials and secrets at rest', () => {
     process.env.AWS_SECRET_ACCESS_KEY = 'secret-from-the-chain';
     try {
       const chain = new S3DocumentStore(documentsConfig({ S3_ENDPOINT: 'http://127.0.0.1:9' }).s3!);
-      expect((await chain.s3.config.credentials()).accessKeyId).toBe('AKIDFROMTHECHAIN');
-      chain.destroy();
+      expect((await (await chain.client()).s3.config.credentials()).accessKeyId).toBe('AKIDFROMTHECHAIN');
+      await chain.destroy();
       const fixed = new S3DocumentStore(documentsConfig({ S3_ENDPOINT: 'http://127.0.0.1:9', S3_ACCESS_KEY_ID: 'own-id', S3_SECRET_ACCESS_KEY: 'own-secret' }).s3!);
-      expect((await fixed.s3.config.credentials()).accessKeyId).toBe('own-id');
-      fixed.destroy();
+      expect((await (await fixed.client()).s3.config.credentials()).accessKeyId).toBe('own-id');
+      await fixed.destroy();
       expect(() => documentsConfig({ S3_ENDPOINT: 'http://127.0.0.1:9', S3_ACCESS_KEY_ID: 'only-one' })).toThrow(/S3_SECRET_ACCESS_KEY/);
     } finally {
       for (const [k, v] of [['AWS_ACCESS_KEY_ID', saved.id], ['AWS_SECRET_ACCESS_KEY', saved.secret]] as const) {

@@ -295,11 +295,15 @@ export class BatchesService {
     return this.get(c, id);
   }
 
-  /** The ids among `ids` that are batches of the organization. */
-  /** A query that finds the batch in the organization: another module's write may be conditional on it. */
-  existsQuery(orgId: string, id: string): Knex.QueryBuilder {
-    return this.db('batches').where({ organization_id: orgId, id }).select(this.db.raw('1'));
+  /**
+   * A query that finds the batch in the organization: another module's write may be conditional on
+   * it. Plain SQL, as it runs inside every single reading's insert.
+   */
+  existsQuery(orgId: string, id: string): Knex.Raw {
+    return this.db.raw('SELECT 1 FROM batches WHERE organization_id = ? AND id = ?', [orgId, id]);
   }
+
+  /** The ids among `ids` that are batches of the organization. */
 
   async existingIds(orgId: string, ids: string[]): Promise<Set<string>> {
     if (ids.length === 0) return new Set();

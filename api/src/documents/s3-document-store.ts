@@ -1,4 +1,4 @@
-import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } from '@aws-sdk/client-s3';
+import type { S3Client } from '@aws-sdk/client-s3';
 import type { DocumentStore } from './document-store.js';
 
 export interface S3Settings {
@@ -15,35 +15,46 @@ export interface S3Settings {
  * processes. Development and tests point S3_ENDPOINT at the stand-in in fakes/object-store.ts.
  */
 export class S3DocumentStore implements DocumentStore {
-  readonly s3: S3Client;
+  private sdk: Promise<{ s3: S3Client; commands: typeof import('@aws-sdk/client-s3') }> | null = null;
 
-  constructor(private readonly cfg: S3Settings) {
-    this.s3 = new S3Client({
-      endpoint: cfg.endpoint,
-      region: cfg.region,
-      forcePathStyle: cfg.forcePathStyle,
-      ...(cfg.credentials ? { credentials: cfg.credentials } : {}),
-      // plain PUTs with Content-Length: what every S3-compatible store understands
-      requestChecksumCalculation: 'WHEN_REQUIRED',
-      responseChecksumValidation: 'WHEN_REQUIRED',
-      maxAttempts: 3,
-    });
+  constructor(private readonly cfg: S3Settings) {}
+
+  /** The client, made at the first document: the SDK costs a process ~27 MiB that most never need. */
+  async client(): Promise<{ s3: S3Client; commands: typeof import('@aws-sdk/client-s3') }> {
+    const cfg = this.cfg;
+    this.sdk ??= import('@aws-sdk/client-s3').then((commands) => ({
+      commands,
+      s3: new commands.S3Client({
+        endpoint: cfg.endpoint,
+        region: cfg.region,
+        forcePathStyle: cfg.forcePathStyle,
+        ...(cfg.credentials ? { credentials: cfg.credentials } : {}),
+        // plain PUTs with Content-Length: what every S3-compatible store understands
+        requestChecksumCalculation: 'WHEN_REQUIRED',
+        responseChecksumValidation: 'WHEN_REQUIRED',
+        maxAttempts: 3,
+      }),
+    }));
+    return this.sdk;
   }
 
   async put(key: string, content: Buffer, contentType: string): Promise<void> {
-    await this.s3.send(new PutObjectCommand({ Bucket: this.cfg.bucket, Key: key, Body: content, ContentType: contentType, ContentLength: content.length }));
+    const { s3, commands } = await this.client();
+    await s3.send(new commands.PutObjectCommand({ Bucket: this.cfg.bucket, Key: key, Body: content, ContentType: contentType, ContentLength: content.length }));
   }
 
   async get(key: string): Promise<Buffer> {
-    const out = await this.s3.send(new GetObjectCommand({ Bucket: this.cfg.bucket, Key: key }));
+    const { s3, commands } = await this.client();
+    const out = await s3.send(new commands.GetObjectCommand({ Bucket: this.cfg.bucket, Key: key }));
     return Buffer.from(await out.Body!.transformToByteArray());
   }
 
   async delete(key: string): Promise<void> {
-    await this.s3.send(new DeleteObjectCommand({ Bucket: this.cfg.bucket, Key: key }));
+    const { s3, commands } = await this.client();
+    await s3.send(new commands.DeleteObjectCommand({ Bucket: this.cfg.bucket, Key: key }));
   }
 
-  destroy(): void {
-    this.s3.destroy();
+  async destroy(): Promise<void> {
+    (await this.sdk)?.s3.destroy();
   }
 }

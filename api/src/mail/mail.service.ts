@@ -1,7 +1,6 @@
 import { Injectable, Logger, OnApplicationShutdown } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
-import nodemailer from 'nodemailer';
-import type { Transporter } from 'nodemailer';
+import type { Transporter, TransportOptions } from 'nodemailer';
 import type { Env } from '../config/env.js';
 
 export interface OutgoingMail {
@@ -18,35 +17,39 @@ export interface OutgoingMail {
 @Injectable()
 export class MailService implements OnApplicationShutdown {
   private readonly logger = new Logger('Mail');
-  private readonly transport: Transporter | null;
+  /** How to reach SMTP_URL; the transport (and nodemailer) is loaded at the first message, as most processes never send one. */
+  private readonly options: TransportOptions | null;
+  private transport: Promise<Transporter> | null = null;
   private readonly from: string;
 
   constructor(config: ConfigService<Env, true>) {
     const url = config.get('SMTP_URL', { infer: true });
     this.from = config.get('MAIL_FROM', { infer: true });
     // the local catcher speaks plain SMTP; real servers negotiate TLS as their URL says
-    if (!url) this.transport = null;
+    if (!url) this.options = null;
     else {
       const u = new URL(url);
-      this.transport = nodemailer.createTransport({
+      this.options = {
         host: u.hostname,
         port: Number(u.port || (u.protocol === 'smtps:' ? 465 : 25)),
         secure: u.protocol === 'smtps:',
         auth: u.username ? { user: decodeURIComponent(u.username), pass: decodeURIComponent(u.password) } : undefined,
         ignoreTLS: u.protocol === 'smtp:' && ['127.0.0.1', 'localhost', '[::1]'].includes(u.hostname),
-      });
+      } as TransportOptions;
     }
   }
 
   async send(mail: OutgoingMail): Promise<void> {
-    if (!this.transport) {
+    if (!this.options) {
       this.logger.warn(`SMTP_URL is not set; not sent: "${mail.subject}" to ${String(mail.to)}`);
       return;
     }
-    await this.transport.sendMail({ from: this.from, ...mail });
+    const options = this.options;
+    this.transport ??= import('nodemailer').then((m) => m.default.createTransport(options));
+    await (await this.transport).sendMail({ from: this.from, ...mail });
   }
 
-  onApplicationShutdown(): void {
-    this.transport?.close();
+  async onApplicationShutdown(): Promise<void> {
+    (await this.transport)?.close();
   }
 }

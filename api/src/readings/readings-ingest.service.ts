@@ -8,7 +8,7 @@ import { BatchesService } from '../batches/batches.service.js';
 import { type FieldError, validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
 import { DevicesService } from '../devices/devices.service.js';
-import { JUDGE_CHUNK, JUDGE_QUEUE, type JudgeJob } from './readings.constants.js';
+import { JUDGE_CHUNK, JUDGE_GATHER_MS, JUDGE_QUEUE, type JudgeJob } from './readings.constants.js';
 import { type NewReading, ReadingsRepository } from './readings.repository.js';
 import { readingView } from './reading-view.js';
 
@@ -180,7 +180,13 @@ export class ReadingsIngestService implements OnModuleDestroy {
 
   private async flushWaiting(): Promise<void> {
     await new Promise<void>((resolve) => setImmediate(resolve)); // the rest of this turn's posts
-    while (this.waiting.length) await this.enqueueMany(this.waiting.splice(0));
+    while (this.waiting.length) {
+      const started = Date.now();
+      await this.enqueueMany(this.waiting.splice(0));
+      // posts keep coming: gather them a few milliseconds more (a lone reading never waits)
+      const wait = JUDGE_GATHER_MS - (Date.now() - started);
+      if (this.waiting.length && wait > 0) await new Promise<void>((resolve) => setTimeout(resolve, wait));
+    }
     this.flushing = null;
   }
 

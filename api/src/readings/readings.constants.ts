@@ -15,5 +15,8 @@ export const JUDGE_CONCURRENCY = 4;
 /** Readings per judging job of a bulk post or import (one Bull job each would cost more than the insert). */
 export const JUDGE_CHUNK = 50;
 
+/** Under a stream of single posts, one judging job at most this often (milliseconds); a lone post is queued at once. */
+export const JUDGE_GATHER_MS = 5;
+
 /** One reading (job id = reading id), or readings posted together (a chunk of a bulk post, or single posts gathered by `judgeSoon`), judged one after another. */
 export type JudgeJob = { readingId: string; readingIds?: undefined } | { readingIds: string[]; readingId?: undefined };

@@ -105,20 +105,22 @@ export class ReadingsRepository {
    * name must always mean the same guard queries): the statement is then prepared once on each
    * pooled connection, not parsed and planned again for every reading.
    */
-  async insertIfOwned(row: NewReading, guards: Knex.QueryBuilder[], guardsShape: string): Promise<Pick<ReadingRow, 'id' | 'status'> | undefined> {
+  async insertIfOwned(row: NewReading, guards: Knex.Raw[], guardsShape: string): Promise<Pick<ReadingRow, 'id' | 'status'> | undefined> {
     const cols = Object.keys(row) as (keyof NewReading)[];
-    const values = cols.map((c) => {
-      const type = NEW_READING_TYPES[c];
-      if (!type) throw new Error(`insertIfOwned: no column type for ${String(c)}`);
-      return `?::${type}`;
-    });
-    const { rows } = (await this.db
-      .raw(
-        `INSERT INTO readings (${cols.map(() => '??').join(', ')}) SELECT ${values.join(', ')} WHERE ${guards.map(() => 'EXISTS (?)').join(' AND ')}
-       ON CONFLICT (device_id, client_reading_id) DO NOTHING RETURNING id, status`,
-        [...cols, ...cols.map((c) => row[c] as Knex.Value), ...guards],
-      )
-      .options({ name: preparedName(`insert-if-owned:${guardsShape}:${cols.join(',')}`) })) as { rows: Pick<ReadingRow, 'id' | 'status'>[] };
+    const what = `insert-if-owned:${guardsShape}:${guards.length}:${cols.join(',')}`;
+    let sql = insertIfOwnedSql.get(what);
+    if (!sql) {
+      const values = cols.map((c) => {
+        const type = NEW_READING_TYPES[c];
+        if (!type) throw new Error(`insertIfOwned: no column type for ${String(c)}`);
+        return `?::${type}`;
+      });
+      // the column names are this file's own (NEW_READING_TYPES), quoted as identifiers
+      sql = `INSERT INTO readings (${cols.map((c) => `"${c}"`).join(', ')}) SELECT ${values.join(', ')} WHERE ${guards.map(() => 'EXISTS (?)').join(' AND ')}
+       ON CONFLICT (device_id, client_reading_id) DO NOTHING RETURNING id, status`;
+      insertIfOwnedSql.set(what, sql);
+    }
+    const { rows } = (await this.db.raw(sql, [...cols.map((c) => row[c] as Knex.Value), ...guards]).options({ name: preparedName(what) })) as { rows: Pick<ReadingRow, 'id' | 'status'>[] };
     return rows[0];
   }
 
@@ -238,6 +240,7 @@ export class ReadingsRepository {
 }
 
 const preparedNames = new Map<string, string>();
+const insertIfOwnedSql = new Map<string, string>();
 
 /** A short, stable name for a prepared statement (pg checks that one name always carries the same text). */
 function preparedName(what: string): string {
