@@ -44,6 +44,9 @@ export async function createApp(opts: CreateAppOptions = {}): Promise<NestFastif
   const app = await NestFactory.create<NestFastifyApplication>(AppModule.forRoot(), adapter, {
     logger: new PinoNestLogger(logger),
     bufferLogs: false,
+    // Fastify's own JSON parser only: Nest's default set adds a form-urlencoded parser, through which
+    // a form body reached a JSON route as an object (an empty form is {}) instead of a 415
+    bodyParser: false,
   });
   const fastify = app.getHttpAdapter().getInstance();
   // the request's line, written once it is answered; nothing is built when info is off

@@ -66,6 +66,17 @@ describe('bodies', () => {
     expect(rowDiff(before, await counts())).toEqual({});
   });
 
+  it('answers a form-urlencoded body on a JSON route with 415, even an empty form the schema would take as {}', async () => {
+    const before = await counts();
+    for (const payload of ['', 'stationId=x']) {
+      const res = await t.http.post('/v1/live/tickets').set(as('engineer')).set('content-type', 'application/x-www-form-urlencoded').send(payload);
+      expectProblem(res, 415);
+    }
+    const lot = await t.http.post('/v1/lots').set(as('engineer')).set('content-type', 'application/x-www-form-urlencoded').send('lotNumber=L1&part=A');
+    expectProblem(lot, 415);
+    expect(rowDiff(before, await counts())).toEqual({});
+  });
+
   it('refuses a leap second or year 0000 that the schema format allowed, with 422', async () => {
     for (const deviceTime of ['2016-12-31T23:59:60Z', '0000-06-01T10:00:00Z']) {
       const res = await t.http
