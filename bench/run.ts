@@ -4,7 +4,7 @@
 //   2 single reading        POST /v1/readings (autocannon)        vs  a bare Fastify route doing the same INSERT
 //   3 pipeline latency      posted -> verdict -> webhook received vs  a bare loopback POST round trip
 //   4 review list           rejected, sorted, one page: 1 M readings in the table vs 10 k
-//   5 memory                the API's peak RSS during 1 and 2 (the compiled build, as `npm start` runs it)
+//   5 memory                the API's peak RSS during 1 and 2 (the compiled build, as `npm start` runs it), the boot's peak apart
 //   6 control chart         a chart's data over 1 M points vs 10 k
 // Writes bench/results/<date>.json and bench/results/latest.json and prints the table for BENCHMARKS.md.
 // BENCH_ROUNDS (3), BENCH_SECONDS (5), BENCH_WARMUP_SECONDS (15), BENCH_LARGE_ROWS (1000000), BENCH_PIPELINE_READINGS (150) scale it.
@@ -159,6 +159,12 @@ try {
   await new Promise<void>((resolve, reject) => { bareChild.stdout!.once('data', () => resolve()); bareChild.once('exit', () => reject(new Error('bare server exited'))); });
   const pid = api.pid()!;
   const rssIdle = rssOf(pid, 'VmRSS');
+  // the peak of the boot (modules loaded, schemas compiled, the OpenAPI document built) is kept
+  // apart: the goal is the peak during ingest, so the high-water mark is reset here (Linux
+  // clear_refs 5) and read again after rows 1 and 2
+  const bootPeak = rssOf(pid, 'VmHWM');
+  let hwmReset = true;
+  try { fs.writeFileSync(`/proc/${pid}/clear_refs`, '5'); } catch { hwmReset = false; }
   let rssPeakSampled = rssIdle;
   const sampler = setInterval(() => { rssPeakSampled = Math.max(rssPeakSampled, rssOf(pid, 'VmRSS')); }, 100);
   let seq = 0;
@@ -210,8 +216,8 @@ try {
   say(`PostgreSQL transactions per single POST: API ${xactApi}, bare ${xactBare}`);
   clearInterval(sampler);
   results.single = { runs: singleRuns, medianApi: median(singleRuns.map((r) => r.api)), medianBare: median(singleRuns.map((r) => r.bare)), ratioPercent: round(100 * median(singleRuns.map((r) => r.api / r.bare)), 1), target: '>= 50 % of the bare route', connections: 10, secondsPerRun: SECONDS, pgTransactionsPerRequest: { api: xactApi, bare: xactBare } };
-  results.memory = { idleRssMiB: round(rssIdle, 1), peakRssAfterBulkMiB: round(rssAfterBulk, 1), peakRssMiB: round(rssOf(pid, 'VmHWM'), 1), sampledPeakMiB: round(rssPeakSampled, 1), source: '/proc/<pid>/status VmHWM of the API process' };
-  say(`memory: idle ${round(rssIdle, 1)} MiB, peak ${round(rssOf(pid, 'VmHWM'), 1)} MiB`);
+  results.memory = { bootPeakRssMiB: round(bootPeak, 1), idleRssMiB: round(rssIdle, 1), peakRssAfterBulkMiB: round(rssAfterBulk, 1), peakRssMiB: round(rssOf(pid, 'VmHWM'), 1), sampledPeakMiB: round(rssPeakSampled, 1), peakIncludesBoot: !hwmReset, source: `/proc/<pid>/status VmHWM of the API process${hwmReset ? ', reset after boot' : ' (could not be reset: the boot peak included)'}` };
+  say(`memory: boot peak ${round(bootPeak, 1)} MiB, idle ${round(rssIdle, 1)} MiB, peak during ingest ${round(rssOf(pid, 'VmHWM'), 1)} MiB${hwmReset ? '' : ' (boot included)'}`);
   bareChild.kill('SIGTERM');
 
   // ── 4 review list at 10 k and 1 M readings ──────────────────────────────────────────────────
@@ -312,7 +318,7 @@ fs.writeFileSync(path.join(OUT, 'latest.json'), JSON.stringify(results, null, 2)
 const b = results.bulk as { medianApi: number; medianRaw: number; ratioPercent: number };
 const s = results.single as { medianApi: number; medianBare: number; ratioPercent: number };
 const p = results.pipeline as { median: { bare: { p99: number }; pipeline: { p50: number; p95: number; p99: number } }; ratioP99: number };
-const m = results.memory as { peakRssMiB: number; idleRssMiB: number };
+const m = results.memory as { peakRssMiB: number; idleRssMiB: number; bootPeakRssMiB: number };
 const r = results.reviewList as { ratios: Record<string, number>; at10k: Record<string, { p50: number }>; at1m: Record<string, { p50: number }> };
 const mark = (ok: boolean) => (ok ? 'met' : 'MISSED');
 console.log(`\nPourgate benchmarks, ${results.date}, ${(results.machine as { cpus: number }).cpus} CPUs, ${process.version}, median of ${ROUNDS} rounds (\`npm run bench\`)`);
@@ -322,7 +328,7 @@ console.log(`| 1 | bulk ingest, readings/s | ${b.medianApi} | ${b.medianRaw} (pg
 console.log(`| 2 | single reading, requests/s | ${s.medianApi} | ${s.medianBare} (bare Fastify + pg INSERT) | ${s.ratioPercent} % | ≥ 50 % | ${mark(s.ratioPercent >= 50)} |`);
 console.log(`| 3 | posted → verdict → webhook received, p50/p95/p99 ms | ${p.median.pipeline.p50} / ${p.median.pipeline.p95} / ${p.median.pipeline.p99} | ${p.median.bare.p99} p99 (bare loopback POST) | ${p.ratioP99} × | p99 ≤ 10 × | ${mark(p.ratioP99 <= 10)} |`);
 for (const [k, v] of Object.entries(r.ratios)) console.log(`| 4 | review list "${k}", p50 ms at ${LARGE / 1e6} M | ${r.at1m[k]!.p50} | ${r.at10k[k]!.p50} (at 10 k) | ${v} × | ≤ 2 × | ${mark(v <= 2)} |`);
-console.log(`| 5 | API peak RSS during 1 and 2, MiB | ${m.peakRssMiB} | ${m.idleRssMiB} (idle after boot) | | ≤ 300 MiB peak | ${mark(m.peakRssMiB <= 300)} |`);
+console.log(`| 5 | API peak RSS during 1 and 2, MiB | ${m.peakRssMiB} | ${m.idleRssMiB} idle after boot (boot peak ${m.bootPeakRssMiB}) | | ≤ 300 MiB peak | ${mark(m.peakRssMiB <= 300)} |`);
 const cc = results.controlChart as { ratio: number; at10k: { p50: number }; at1m: { p50: number } };
 console.log(`| 6 | control chart data, p50 ms at ${LARGE / 1e6} M points | ${cc.at1m.p50} | ${cc.at10k.p50} (at 10 k) | ${cc.ratio} × | ≤ 2 × | ${mark(cc.ratio <= 2)} |`);
 console.log(`results: ${path.relative(ROOT, file)} (and bench/results/latest.json); ${results.seconds} s`);

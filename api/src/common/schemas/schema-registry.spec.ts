@@ -7,8 +7,10 @@ import { SchemaRegistry } from './schema-registry.js';
 describe('SchemaRegistry', () => {
   const registry = new SchemaRegistry();
 
-  it('loads and compiles every schema file', () => {
-    expect(registry.names()).toEqual(expect.arrayContaining(['problem', 'quantity', 'device.create', 'api-key.create']));
+  it('loads every schema file, and each compiles as a body and as a query', () => {
+    expect(registry.names()).toEqual(expect.arrayContaining(['problem', 'quantity', 'device.create', 'api-key.create', 'reading.view', 'event.reading.accepted']));
+    // compiling happens at first use for answers, events and queries: a broken one must fail here
+    for (const name of registry.names()) for (const kind of ['body', 'query'] as const) expect(() => registry.validate(name, {}, kind)).not.toThrow();
   });
 
   it('reports each failure with a JSON Pointer', () => {

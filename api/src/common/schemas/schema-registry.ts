@@ -15,6 +15,9 @@ const ANNOTATIONS = ['x-unit', 'x-enum-descriptions'];
 
 export type Schema = Record<string, unknown>;
 
+/** Schemas of answers and events (`*.view`, `*.view.*`, `event.*`): the API writes them, no request carries them. */
+const ANSWER_ONLY = /(^|\.)view($|\.)|^event\./;
+
 /**
  * The JSON Schemas in `schemas/` (one file per shape, `<name>.schema.json`, `$id` =
  * `urn:pourgate:schema:<name>`). The validation pipe compiles them with ajv, and the OpenAPI
@@ -39,11 +42,11 @@ export class SchemaRegistry {
       this.bodyAjv.addSchema(schema);
       this.queryAjv.addSchema(schema);
     }
-    // compile everything now: a broken schema stops the boot, not a request
-    for (const name of this.schemas.keys()) {
-      this.compiled.set(`body:${name}`, this.bodyAjv.getSchema(ID_PREFIX + name)!);
-      this.compiled.set(`query:${name}`, this.queryAjv.getSchema(ID_PREFIX + name)!);
-    }
+    // the shapes a request can carry are compiled now, so a broken one stops the boot, not a
+    // request; the answers' and events' shapes (never validated at run time: the test suites check
+    // them, and a test compiles every schema both ways) and the query-coercing variants are
+    // compiled at first use. Compiling all of them twice at boot cost the process ~15 MiB.
+    for (const name of this.schemas.keys()) if (!ANSWER_ONLY.test(name)) this.compiled.set(`body:${name}`, this.bodyAjv.getSchema(ID_PREFIX + name)!);
   }
 
   names(): string[] {
