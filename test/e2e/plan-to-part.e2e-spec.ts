@@ -172,6 +172,8 @@ describe('consumption', () => {
     expect(csv.headers['content-type']).toMatch(/^text\/csv/);
     expect(csv.text.split('\r\n')[0]).toBe('work_order,part_number,ordered,batches,parts_accepted,parts_rework,parts_scrap,parts_undecided,yield,scrap_mass_kg,material,lot,lot_batches,planned_kg,actual_kg,variance_kg');
     expect(csv.text).toContain(',0.5,');
+    // the sheet rounds kilograms to 0.1 g: 0.3 lb = 0.136 077 711 kg (NIST SP 811: 1 lb = 0.453 592 37 kg)
+    expect(csv.text).toContain(',0.5,0.1361,');
     const done = await t.http.post(`/v1/work-orders/${orderId}/complete`).set(as('engineer')).send({});
     expect(done.status).toBe(200);
     expect(done.body.state).toBe('done');

@@ -118,8 +118,11 @@ export class ProductionService {
   async consumptionCsv(c: RequestContext, id: string): Promise<string> {
     const r = await this.consumption(c, id);
     const head = ['work_order', 'part_number', 'ordered', 'batches', 'parts_accepted', 'parts_rework', 'parts_scrap', 'parts_undecided', 'yield', 'scrap_mass_kg', 'material', 'lot', 'lot_batches', 'planned_kg', 'actual_kg', 'variance_kg'];
-    const common = [r.externalRef, r.partNumber, r.ordered, r.batches, r.parts.accepted, r.parts.rework, r.parts.scrap, r.parts.undecided, r.yield, r.scrapMassKg];
-    const rows = r.materials.length ? r.materials.map((m) => [...common, m.part, m.lotNumber, m.batches, m.plannedKg, m.actualKg, m.varianceKg]) : [[...common, null, null, null, null, null, null]];
+    // a sheet for people and the ERP's import: kilograms to 0.1 g and the yield to 0.01 %, where the
+    // JSON answer keeps every digit of the sums
+    const kg = (x: number) => Math.round(x * 1e4) / 1e4;
+    const common = [r.externalRef, r.partNumber, r.ordered, r.batches, r.parts.accepted, r.parts.rework, r.parts.scrap, r.parts.undecided, r.yield === null ? null : Math.round(r.yield * 1e4) / 1e4, kg(r.scrapMassKg)];
+    const rows = r.materials.length ? r.materials.map((m) => [...common, m.part, m.lotNumber, m.batches, kg(m.plannedKg), kg(m.actualKg), kg(m.varianceKg)]) : [[...common, null, null, null, null, null, null]];
     return toCsv(head, rows);
   }
 
