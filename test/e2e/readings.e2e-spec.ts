@@ -1,7 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
+import { afterAll, beforeAll, describe, expect, it, jest } from '@jest/globals';
 import { randomBytes, randomUUID } from 'node:crypto';
 import type { Role } from '@pourgate/permissions';
 import { sha256 } from '../../api/src/auth/tokens.service.js';
+import { ReadingsIngestService } from '../../api/src/readings/readings-ingest.service.js';
+import { ReadingsService } from '../../api/src/readings/readings.service.js';
 import { closeTestDb, makeOrg, type OrgFixture, testDb, tokensFor } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/app.js';
 import { expectProblem, flexSystem } from './support/shop.js';
@@ -425,5 +427,27 @@ describe('complete before release (issue 15, item 2)', () => {
     await postJudged(reading(batchId, { deviceId: probeId, quantity: 'temperature', subject: 'part_b', value: 22, unit: 'degC' }));
     await postJudged({ batchId, deviceId: scaleId, clientReadingId: randomUUID(), quantity: 'milestone', subject: 'mix_start' });
     expect((await t.http.post(`/v1/batches/${batchId}/release`).set(as('engineer'))).status).toBe(200);
+  });
+});
+
+describe('the sweeper', () => {
+  it('re-queues a long outage’s pending readings in one pass, page after page, none left behind', async () => {
+    const batchId = await newBatch();
+    const receivedAt = new Date(Date.now() - 60_000);
+    // more than two pages of readings stored while Redis was away (pending, no job)
+    const rows = Array.from({ length: 1_100 }, (_, i) => ({ organization_id: org.id, batch_id: batchId, device_id: scaleId, client_reading_id: `outage-${randomUUID()}`, quantity: 'mass', subject: 'part_a', value_si: 1, unit_given: 'kg', value_given: 1, stable: true, received_at: new Date(receivedAt.getTime() + (i % 7)) }));
+    const ids: string[] = (await testDb()('readings').insert(rows).returning('id')).map((r: { id: string }) => r.id);
+    const ingest = t.app.get(ReadingsIngestService);
+    const queued: string[] = [];
+    const spy = jest.spyOn(ingest, 'enqueue').mockImplementation(async (id: string) => { queued.push(id); return true; });
+    try {
+      const n = await t.app.get(ReadingsService).sweep(5_000);
+      expect(n).toBeGreaterThanOrEqual(ids.length);
+      const seen = new Set(queued);
+      expect(ids.filter((id) => !seen.has(id))).toEqual([]);
+    } finally {
+      spy.mockRestore();
+      await testDb()('readings').whereIn('id', ids).where({ status: 'pending' }).delete();
+    }
   });
 });

@@ -8,7 +8,7 @@ import { BatchesService } from '../batches/batches.service.js';
 import { type FieldError, validationProblem } from '../common/problems.js';
 import { KNEX } from '../database/database.module.js';
 import { DevicesService } from '../devices/devices.service.js';
-import { JUDGE_CHUNK, JUDGE_GATHER_MS, JUDGE_QUEUE, type JudgeJob } from './readings.constants.js';
+import { JUDGE_CHUNK, JUDGE_GATHER_MS, JUDGE_QUEUE, type JudgeJob, SWEEP_PAGE, SWEEP_PAGES } from './readings.constants.js';
 import { type NewReading, ReadingsRepository } from './readings.repository.js';
 import { readingView } from './reading-view.js';
 
@@ -233,9 +233,16 @@ export class ReadingsIngestService implements OnModuleDestroy {
   /** Re-queues pending readings whose job was lost (Redis down at ingest, a worker crash). */
   async sweep(olderThanMs: number, stopped: () => boolean = () => false): Promise<number> {
     let n = 0;
-    for (const { id } of await this.repo.stalePending(olderThanMs)) {
-      if (stopped()) break;
-      if (await this.enqueue(id)) n++;
+    // page by page, so a long outage is re-queued in one pass (it took a pass of 500 every 15 s)
+    let after: { received_at: Date; id: string } | undefined;
+    for (let page = 0; page < SWEEP_PAGES; page++) {
+      const rows = await this.repo.stalePending(olderThanMs, SWEEP_PAGE, after);
+      for (const { id } of rows) {
+        if (stopped()) return n;
+        if (await this.enqueue(id)) n++;
+      }
+      if (rows.length < SWEEP_PAGE) break;
+      after = rows[rows.length - 1];
     }
     return n;
   }

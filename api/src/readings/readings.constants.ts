@@ -3,6 +3,9 @@ export const JUDGE_QUEUE = 'reading-judging';
 /** A pending reading older than this is taken to have lost its job and is queued again. */
 export const SWEEP_AFTER_MS = 5_000;
 export const SWEEP_EVERY_MS = 15_000;
+/** A sweep re-queues up to SWEEP_PAGES pages of SWEEP_PAGE pending readings (the rest wait for the next). */
+export const SWEEP_PAGE = 500;
+export const SWEEP_PAGES = 40;
 
 /** Device clocks further off than this are flagged on the reading. */
 export const MAX_CLOCK_SKEW_S = 300;

@@ -234,8 +234,11 @@ export class ReadingsRepository {
     return { latest, pending, openRejections: Number(open[0]!.n) };
   }
 
-  stalePending(olderThanMs: number, limit = 500): Promise<{ id: string }[]> {
-    return this.db('readings').where('status', 'pending').where('received_at', '<', new Date(Date.now() - olderThanMs)).orderBy('received_at').limit(limit).select('id');
+  /** Pending readings received before `olderThanMs` ago, oldest first, a page at a time after `after`. */
+  stalePending(olderThanMs: number, limit = 500, after?: { received_at: Date; id: string }): Promise<{ id: string; received_at: Date }[]> {
+    const q = this.db('readings').where('status', 'pending').where('received_at', '<', new Date(Date.now() - olderThanMs));
+    if (after) q.whereRaw('(received_at, id) > (?, ?)', [after.received_at, after.id]);
+    return q.orderBy([{ column: 'received_at' }, { column: 'id' }]).limit(limit).select('id', 'received_at');
   }
 }
 
