@@ -50,13 +50,13 @@ export class JudgeService {
     const isMass = r.quantity === 'mass';
     const isPart = isMass && (r.subject === 'part_a' || r.subject === 'part_b');
     const needsBoth = isMass && (r.subject === 'pigment' || r.subject === 'mixed');
-    const [device, batch, otherPartMassKg, partA, partB] = await Promise.all([
-      this.devices.judgingFacts(orgId, r.device_id, trx),
-      this.batches.judgingFacts(trx, orgId, r.batch_id),
-      isPart ? this.repo.otherPartMass(trx, r) : null,
-      needsBoth ? this.repo.latestMass(trx, r, 'part_a') : null,
-      needsBoth ? this.repo.latestMass(trx, r, 'part_b') : null,
-    ]);
+    // one after another: a transaction is one connection, which runs one query at a time anyway
+    // (queries sent side by side on it are queued by pg, a use pg deprecates)
+    const device = await this.devices.judgingFacts(orgId, r.device_id, trx);
+    const batch = await this.batches.judgingFacts(trx, orgId, r.batch_id);
+    const otherPartMassKg = isPart ? await this.repo.otherPartMass(trx, r) : null;
+    const partA = needsBoth ? await this.repo.latestMass(trx, r, 'part_a') : null;
+    const partB = needsBoth ? await this.repo.latestMass(trx, r, 'part_b') : null;
     const snapshot = batch?.snapshot ?? null;
     const stored = (snapshot?.input?.system ?? null) as SystemFacts | null;
     const system = stored?.ratio ? { ...stored, ...(stored.kind === undefined && batch?.systemKind ? { kind: batch.systemKind as SystemFacts['kind'] } : {}) } : null;

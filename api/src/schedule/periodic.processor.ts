@@ -32,9 +32,10 @@ export class PeriodicProcessor implements BeforeApplicationShutdown {
     this.stopping = true;
   }
 
+  /** After Redis came back empty (`recovery`), no pending reading has a job: all are queued, however new. */
   @Process('judge-sweep')
-  judgeSweep(): Promise<number> {
-    return this.readings.sweep(SWEEP_AFTER_MS, () => this.stopping);
+  judgeSweep(job: Job<{ recovery?: boolean }>): Promise<number> {
+    return this.readings.sweep(job.data?.recovery ? 0 : SWEEP_AFTER_MS, () => this.stopping);
   }
 
   @Process('import-sweep')

@@ -61,6 +61,9 @@ export class ScheduleService implements OnApplicationBootstrap, OnModuleDestroy 
       for (const job of plan) {
         await this.queue.add(job.name, {}, { jobId: job.name, repeat: job.repeat, removeOnComplete: true, removeOnFail: 100, attempts: 1 });
       }
+      // Redis came back without the plan, so probably without the jobs it held: the sweeps run now
+      // rather than at their next period (up to 30 s later); a sweep run twice queues nothing twice
+      if (!atBoot) for (const job of plan.filter((j) => j.recovers)) await this.queue.add(job.name, { recovery: true }, { removeOnComplete: true, removeOnFail: 100, attempts: 1 });
       this.log.log(
         `periodic jobs${atBoot ? '' : ' registered again'}: ${plan.map((j) => `${j.name} (${'every' in j.repeat ? `every ${j.repeat.every} ms` : `${j.repeat.cron} ${j.repeat.tz}`})`).join(', ')}`,
       );

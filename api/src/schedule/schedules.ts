@@ -13,6 +13,8 @@ export interface PeriodicJob {
   repeat: Repeat;
   /** What it does, for logs and DEVELOPERS.md. */
   purpose: string;
+  /** Re-queues what Redis lost: run once at once when the schedule is registered again after Redis came back empty. */
+  recovers?: true;
 }
 
 /**
@@ -24,10 +26,10 @@ export interface PeriodicJob {
  */
 export function plannedJobs(env: Pick<Env, 'OUTBOX_RELAY' | 'NOTIFICATIONS' | 'SMTP_URL' | 'NOTIFY_INTERVAL_MS' | 'NOTIFY_DIGEST_CRON' | 'NOTIFY_DIGEST_TZ' | 'NOTIFY_DIGEST_INTERVAL_MS'>): PeriodicJob[] {
   const jobs: PeriodicJob[] = [
-    { name: 'judge-sweep', repeat: { every: SWEEP_EVERY_MS }, purpose: 're-queue readings left pending (their judging job was lost)' },
-    { name: 'import-sweep', repeat: { every: 30_000 }, purpose: 're-queue logger imports whose job was lost' },
+    { name: 'judge-sweep', repeat: { every: SWEEP_EVERY_MS }, purpose: 're-queue readings left pending (their judging job was lost)', recovers: true },
+    { name: 'import-sweep', repeat: { every: 30_000 }, purpose: 're-queue logger imports whose job was lost', recovers: true },
   ];
-  if (env.OUTBOX_RELAY !== 'off') jobs.push({ name: 'relay-sweep', repeat: { every: 15_000 }, purpose: 're-queue webhook deliveries whose job was lost' });
+  if (env.OUTBOX_RELAY !== 'off') jobs.push({ name: 'relay-sweep', repeat: { every: 15_000 }, purpose: 're-queue webhook deliveries whose job was lost', recovers: true });
   if (env.NOTIFICATIONS !== 'off' && env.SMTP_URL) {
     jobs.push({ name: 'notice-send', repeat: { every: env.NOTIFY_INTERVAL_MS }, purpose: 'send one-by-one rejection e-mails that are due' });
     jobs.push({
