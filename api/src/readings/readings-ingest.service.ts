@@ -179,15 +179,21 @@ export class ReadingsIngestService implements OnModuleDestroy {
   }
 
   private async flushWaiting(): Promise<void> {
-    await new Promise<void>((resolve) => setImmediate(resolve)); // the rest of this turn's posts
-    while (this.waiting.length) {
-      const started = Date.now();
-      await this.enqueueMany(this.waiting.splice(0));
-      // posts keep coming: gather them a few milliseconds more (a lone reading never waits)
-      const wait = JUDGE_GATHER_MS - (Date.now() - started);
-      if (this.waiting.length && wait > 0) await new Promise<void>((resolve) => setTimeout(resolve, wait));
+    try {
+      await new Promise<void>((resolve) => setImmediate(resolve)); // the rest of this turn's posts
+      while (this.waiting.length) {
+        const started = Date.now();
+        await this.enqueueMany(this.waiting.splice(0));
+        // posts keep coming: gather them a few milliseconds more (a lone reading never waits)
+        const wait = JUDGE_GATHER_MS - (Date.now() - started);
+        if (this.waiting.length && wait > 0) await new Promise<void>((resolve) => setTimeout(resolve, wait));
+      }
+    } catch (e) {
+      // enqueueMany keeps its own failures; anything else must not stop later posts from being queued
+      this.log.warn(`judging not queued; the sweeper will queue what is pending (${(e as Error).message})`);
+    } finally {
+      this.flushing = null;
     }
-    this.flushing = null;
   }
 
   /** Nothing gathered is left behind at shutdown (the sweeper would find it, 5 s later). */
