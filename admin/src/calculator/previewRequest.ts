@@ -69,6 +69,26 @@ export function parseNumber(text: string): number | undefined {
   return /^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(t) ? Number(t) : NaN;
 }
 
+/**
+ * Reads a form's number fields: `num` gives the number typed (undefined for an empty field) and puts
+ * a field holding text that is not a number in `invalid`; `quantity` gives `{ value, unit }`.
+ */
+export function numberFields<K extends string>(f: { [key in K]: string }, invalid: K[]) {
+  const num = (key: K): number | undefined => {
+    const n = parseNumber(f[key]);
+    if (n !== undefined && Number.isNaN(n)) {
+      invalid.push(key);
+      return undefined;
+    }
+    return n;
+  };
+  const quantity = (key: K, unit: string): { value: number; unit: string } | undefined => {
+    const v = num(key);
+    return v === undefined ? undefined : { value: v, unit };
+  };
+  return { num, quantity };
+}
+
 export interface PreviewRequest {
   body: Record<string, unknown> | null;
   /** Form fields that hold text that is not a number. */
@@ -87,14 +107,10 @@ type OptionKey = Exclude<keyof OptionFields, 'densityMode'>;
  */
 export function readOptions(
   f: OptionFields,
-  num: (key: OptionKey) => number | undefined,
+  { num, quantity }: Pick<ReturnType<typeof numberFields<OptionKey>>, 'num' | 'quantity'>,
   invalid: readonly string[],
   missing: string[],
 ): { packFactor?: number; targetDensity?: { value: number; unit: string }; pigmentPercent?: number; overfillPercent?: number; retentionPercent?: number; componentTemperature?: { value: number; unit: string }; scaleDeviceId?: string } {
-  const quantity = (key: OptionKey, unit: string) => {
-    const v = num(key);
-    return v === undefined ? undefined : { value: v, unit };
-  };
   const options: ReturnType<typeof readOptions> = {};
   if (f.densityMode === 'pack') {
     const p = num('packFactor');
@@ -118,18 +134,8 @@ export function readOptions(
 export function buildPreview(f: CalculatorForm): PreviewRequest {
   const invalid: (keyof CalculatorForm)[] = [];
   const missing: string[] = [];
-  const num = (key: keyof CalculatorForm): number | undefined => {
-    const n = parseNumber(f[key]);
-    if (n !== undefined && Number.isNaN(n)) {
-      invalid.push(key);
-      return undefined;
-    }
-    return n;
-  };
-  const quantity = (key: keyof CalculatorForm, unit: string) => {
-    const v = num(key);
-    return v === undefined ? undefined : { value: v, unit };
-  };
+  const fields = numberFields(f, invalid);
+  const { num, quantity } = fields;
 
   if (!f.systemId) missing.push('a material system');
   const body: Record<string, unknown> = { system: { id: f.systemId } };
@@ -155,7 +161,7 @@ export function buildPreview(f: CalculatorForm): PreviewRequest {
     body.freeRiseCup = { volume: v ?? { value: 0, unit: f.cupVolumeUnit } };
   }
 
-  const options = readOptions(f, num, invalid, missing);
+  const options = readOptions(f, fields, invalid, missing);
   if (Object.keys(options).length) body.options = options;
 
   return { body: missing.length || invalid.length ? null : body, invalid, missing };

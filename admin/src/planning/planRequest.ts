@@ -4,7 +4,7 @@
  * that carry a pour into the form: from the calculator (its inputs) and from a work order. Empty
  * fields are left out so the API's defaults apply; the API does every computation and every check.
  */
-import { parseNumber, readOptions, type CalculatorForm } from '../calculator/previewRequest';
+import { numberFields, readOptions, type CalculatorForm } from '../calculator/previewRequest';
 import type { BatchOptions, BatchPlanBody, Lot, TargetsPreviewBody } from '../views/sdk';
 
 export type PlanSubject = 'mold' | 'cup';
@@ -167,18 +167,8 @@ export const MAX_BATCHES_AT_ONCE = 50;
 export function buildPlan(f: PlanForm): PlanRequest {
   const invalid: (keyof PlanForm)[] = [];
   const missing: string[] = [];
-  const num = (key: keyof PlanForm): number | undefined => {
-    const n = parseNumber(f[key]);
-    if (n !== undefined && Number.isNaN(n)) {
-      invalid.push(key);
-      return undefined;
-    }
-    return n;
-  };
-  const quantity = (key: keyof PlanForm, unit: string) => {
-    const v = num(key);
-    return v === undefined ? undefined : { value: v, unit };
-  };
+  const fields = numberFields(f, invalid);
+  const { num, quantity } = fields;
 
   const body: BatchPlanBody = {};
   if (f.workOrderId) body.workOrderId = f.workOrderId;
@@ -197,7 +187,7 @@ export function buildPlan(f: PlanForm): PlanRequest {
     else if (!invalid.includes('cupVolume')) missing.push('the cup volume');
   }
 
-  const options: BatchOptions = readOptions(f, num, invalid, missing);
+  const options: BatchOptions = readOptions(f, fields, invalid, missing);
   const lots: NonNullable<BatchOptions['lots']> = {};
   if (f.lotA) lots.A = f.lotA;
   if (f.lotB) lots.B = f.lotB;
